@@ -1,0 +1,34 @@
+import { fileURLToPath } from "node:url";
+import { defineConfig } from "vitest/config";
+
+const root = fileURLToPath(new URL(".", import.meta.url));
+
+export default defineConfig({
+  resolve: { alias: { "@": root, "server-only": `${root}tests/support/server-only.ts` } },
+  test: {
+    projects: [
+      { extends: true, test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" } },
+      {
+        extends: true,
+        test: {
+          name: "integration",
+          include: ["tests/integration/**/*.test.ts"],
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      { extends: true, test: { name: "reference", include: ["tests/reference/**/*.test.ts"], testTimeout: 120_000 } },
+      {
+        extends: true,
+        test: {
+          name: "e2e",
+          include: ["tests/e2e/**/*.test.ts"],
+          fileParallelism: false,
+          testTimeout: 90_000,
+          hookTimeout: 240_000,
+        },
+      },
+    ],
+  },
+});
