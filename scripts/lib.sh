@@ -1,0 +1,46 @@
+# Shared helpers for the start and test scripts. Sourced, not run.
+# Every step prints one line that says what it does, so a slow first start is never silent.
+
+ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+DATA_DIR="$ROOT/.data"
+
+step() { printf '\033[1m==> %s\033[0m\n' "$*"; }
+fail() { printf '\033[31mError: %s\033[0m\n' "$*" >&2; exit 1; }
+
+as_root() {
+  if [ "$(id -u)" -eq 0 ]; then "$@"; elif command -v sudo >/dev/null; then sudo "$@"; else
+    fail "'$*' needs root and sudo is not available. Run it as root once, then try again."
+  fi
+}
+
+# apt_install PACKAGE COMMAND_THAT_PROVES_IT_IS_THERE
+apt_install() {
+  local package="$1" probe="$2"
+  if [ -e "$probe" ] || command -v "$probe" >/dev/null 2>&1; then return 0; fi
+  command -v apt-get >/dev/null || fail "$package is missing and apt-get is not available: install $package with your package manager."
+  step "Installing $package from Debian's packages (first run only)"
+  as_root env DEBIAN_FRONTEND=noninteractive apt-get install -y -q "$package" >"$DATA_DIR/apt-$package.log" 2>&1 || {
+    as_root env DEBIAN_FRONTEND=noninteractive apt-get update -q >>"$DATA_DIR/apt-$package.log" 2>&1 &&
+      as_root env DEBIAN_FRONTEND=noninteractive apt-get install -y -q "$package" >>"$DATA_DIR/apt-$package.log" 2>&1
+  } || fail "apt-get could not install $package (see $DATA_DIR/apt-$package.log)."
+}
+
+port_in_use() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
+
+require_free_port() {
+  if port_in_use "$1"; then fail "port $1 on 127.0.0.1 is already taken ($2). Stop what uses it, then try again."; fi
+}
+
+ensure_node_modules() {
+  if [ ! -d "$ROOT/node_modules" ] || [ "$ROOT/package-lock.json" -nt "$ROOT/node_modules/.package-lock.json" ]; then
+    step "Installing npm packages (npm ci)"
+    (cd "$ROOT" && npm ci --no-audit --no-fund --loglevel=error) || fail "npm ci failed."
+  fi
+}
+
+# Wait for a TCP port to accept connections, up to N seconds.
+wait_for_port() {
+  local port="$1" seconds="$2" what="$3"
+  for _ in $(seq 1 $((seconds * 10))); do port_in_use "$port" && return 0; sleep 0.1; done
+  fail "$what did not start listening on 127.0.0.1:$port within ${seconds}s."
+}

@@ -1,0 +1,59 @@
+#!/usr/bin/env bash
+# `npm start` (production build) and `npm run dev` (dev server): set up everything a fresh machine
+# lacks, then serve Edgewise on http://127.0.0.1:$PORT. Ctrl-C stops what this script started.
+set -euo pipefail
+source "$(dirname "$0")/lib.sh"
+cd "$ROOT"
+
+MODE=production
+[ "${1:-}" = "--dev" ] && MODE=development
+PORT="${PORT:-3000}"
+export PGPORT="${PGPORT:-54329}"
+export DATABASE_URL="${DATABASE_URL:-postgres://postgres@127.0.0.1:$PGPORT/edgewise}"
+export APP_URL="${APP_URL:-http://127.0.0.1:$PORT}"
+mkdir -p "$DATA_DIR"
+
+children=()
+cleanup() {
+  trap - INT TERM EXIT
+  for pid in "${children[@]}"; do kill "$pid" 2>/dev/null || true; done
+  wait 2>/dev/null || true
+  [ "${started_postgres:-0}" = 1 ] && bash scripts/postgres.sh stop
+  exit 0
+}
+trap cleanup INT TERM EXIT
+
+require_free_port "$PORT" "Edgewise serves there; set PORT to use another"
+ensure_node_modules
+
+pg_was_running=0
+if command -v pg_isready >/dev/null && pg_isready -q -U postgres -h 127.0.0.1 -p "$PGPORT" 2>/dev/null; then pg_was_running=1; fi
+bash scripts/postgres.sh up edgewise
+[ "$pg_was_running" = 0 ] && started_postgres=1
+
+step "Applying database migrations"
+npx tsx scripts/migrate.ts
+step "Seeding the demo school (idempotent)"
+npx tsx scripts/seed.ts
+
+source scripts/local-services.sh
+start_local_services dev
+children+=("${service_pids[@]}")
+
+if [ "$MODE" = production ]; then
+  stamp=$(git ls-files -s -- app components lessons lib db public next.config.ts tailwind.config.ts postcss.config.mjs package-lock.json 2>/dev/null | sha1sum | cut -c1-40)
+  if [ ! -f .next/BUILD_ID ] || [ "$(cat .next/edgewise-source-stamp 2>/dev/null)" != "$stamp" ] || [ -n "$(git status --porcelain -- app components lessons lib db 2>/dev/null)" ]; then
+    step "Building the app (next build, about a minute)"
+    npx next build >"$DATA_DIR/build.log" 2>&1 || { tail -n 40 "$DATA_DIR/build.log"; fail "the build failed (full log: .data/build.log)."; }
+    echo "$stamp" >.next/edgewise-source-stamp
+  else
+    step "Build is up to date"
+  fi
+  step "Serving Edgewise on http://127.0.0.1:$PORT (Ctrl-C stops it)"
+  NODE_ENV=production npx next start -H 127.0.0.1 -p "$PORT" &
+else
+  step "Starting the dev server on http://127.0.0.1:$PORT (Ctrl-C stops it)"
+  npx next dev -H 127.0.0.1 -p "$PORT" &
+fi
+children+=($!)
+wait "${children[-1]}"

@@ -1,0 +1,67 @@
+#!/usr/bin/env bash
+# `npm test`: provisions everything the tests need on a fresh machine (Debian packages, npm
+# packages, a private test database cluster, the local mail sink, a production build) and runs
+# every suite: unit, integration, reference, browser. Ends with "N passed, N failed".
+set -uo pipefail
+source "$(dirname "$0")/lib.sh"
+cd "$ROOT"
+mkdir -p "$DATA_DIR" test-results
+
+export PGPORT=54339 PGDATA="$DATA_DIR/pg-test" PG_EXTRA_CONF="fsync = off
+synchronous_commit = off"
+export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/edgewise_test"
+export APP_PORT=3100
+export APP_URL="http://127.0.0.1:$APP_PORT" E2E_BASE_URL="http://127.0.0.1:$APP_PORT"
+export NEXT_DIST_DIR=.next-test
+unset SMTP_HOST
+
+pids=()
+cleanup() {
+  for pid in "${pids[@]}"; do kill "$pid" 2>/dev/null || true; done
+  wait 2>/dev/null
+  bash scripts/postgres.sh stop >/dev/null 2>&1
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+set -e
+apt_install chromium /usr/bin/chromium
+apt_install ngspice /usr/bin/ngspice
+ensure_node_modules
+bash scripts/postgres.sh up
+
+bash scripts/postgres.sh recreate edgewise_test
+npx tsx scripts/migrate.ts
+npx tsx scripts/seed.ts >/dev/null
+
+source scripts/local-services.sh
+start_local_services test
+pids+=("${service_pids[@]}")
+set +e
+
+reports=()
+run_vitest() {
+  local name="$1"; shift
+  step "Running the $name tests"
+  npx vitest run --project "$name" --reporter=default --reporter=json --outputFile.json="test-results/$name.json" --passWithNoTests "$@"
+  reports+=("test-results/$name.json")
+}
+
+run_vitest unit
+run_vitest integration
+run_vitest reference
+
+step "Building the app for the browser tests"
+if npx next build >"$DATA_DIR/build-test.log" 2>&1; then
+  NODE_ENV=production npx next start -H 127.0.0.1 -p "$APP_PORT" >"$DATA_DIR/app-test.log" 2>&1 &
+  pids+=($!)
+  wait_for_port "$APP_PORT" 60 "The app"
+  run_vitest e2e
+else
+  tail -n 40 "$DATA_DIR/build-test.log"
+  echo "The build failed (full log: .data/build-test.log); the browser tests count as failed."
+  echo '{"numPassedTests":0,"numFailedTests":1}' >test-results/build.json
+  reports+=("test-results/build.json")
+fi
+
+node scripts/test-summary.mjs "${reports[@]}"
