@@ -90,7 +90,7 @@ async function receiveFile(req, partPath, start, limit) {
     if (!out.write(bytes)) await once(out, "drain");
   };
   try {
-    for await (const chunk of req) {
+    for await (const chunk of req.iterator({ destroyOnReturn: false })) {
       if (tail === null) {
         head = Buffer.concat([head, chunk]);
         const end = head.indexOf("\r\n\r\n");
@@ -242,13 +242,15 @@ function handle(req, res) {
   const log = (status, note) => console.log(`${req.method} ${req.url.split("?")[0]} ${status} ${Date.now() - started}ms${note}`);
   route(req, res).then(
     () => log(res.statusCode, ""),
-    (error) => {
+    async (error) => {
       const status = error.status ?? 500;
       const message = error.status ? error.message : "internal error in the upload fake";
       if (!error.status) console.error(`Upload fake: ${error.stack ?? error}`);
-      if (res.headersSent || res.destroyed) res.destroy();
-      else send(res, status, { error: message });
       log(status, ` (${message})`);
+      if (res.headersSent || res.destroyed) return res.destroy();
+      // Clients only read the reply once their body is sent, so swallow the rest of it first.
+      if (!req.complete && !req.destroyed) await once(req.resume(), "end").catch(() => {});
+      send(res, status, { error: message });
     },
   );
 }
