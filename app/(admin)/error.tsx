@@ -1,0 +1,7 @@
+"use client";
+
+import { ErrorPanel } from "@/components/ui/error-panel";
+
+export default function AdminError({ error, retry }: { error: unknown; retry: () => void }) {
+  return <ErrorPanel error={error} retry={retry} what="the school overview" />;
+}

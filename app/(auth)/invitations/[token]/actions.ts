@@ -1,0 +1,36 @@
+"use server";
+
+import { redirect } from "next/navigation";
+import { z } from "zod";
+import { newPasswordSchema, personNameSchema, tokenSchema, withMatchingPasswords } from "@/lib/auth/fields";
+import { acceptInvitation } from "@/lib/auth/invitations";
+import { homePathFor } from "@/lib/auth/permissions";
+import { writeSessionCookie } from "@/lib/auth/session-cookie";
+import { failedFormState, invalidFormState, readFormValues, type FormState } from "@/lib/http/form-state";
+import { invitationProblems } from "../../link-problems";
+
+export type AcceptInvitationField = "token" | "name" | "password" | "confirmPassword";
+export type AcceptInvitationState = FormState<AcceptInvitationField>;
+
+const acceptSchema = withMatchingPasswords(
+  z.object({
+    token: tokenSchema,
+    name: personNameSchema,
+    password: newPasswordSchema,
+    confirmPassword: z.string({ error: "Type the password again." }),
+  }),
+);
+
+export async function acceptInvitationAction(
+  _previous: AcceptInvitationState,
+  formData: FormData,
+): Promise<AcceptInvitationState> {
+  const values = readFormValues(formData, ["token", "name"] as const);
+  const parsed = acceptSchema.safeParse(Object.fromEntries(formData));
+  if (!parsed.success) return invalidFormState(parsed.error, values);
+
+  const result = await acceptInvitation(parsed.data);
+  if (!result.ok) return failedFormState(invitationProblems[result.reason], values);
+  await writeSessionCookie(result.cookie);
+  redirect(homePathFor(result.role));
+}

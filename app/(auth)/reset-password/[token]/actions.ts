@@ -1,0 +1,35 @@
+"use server";
+
+import { redirect } from "next/navigation";
+import { z } from "zod";
+import { newPasswordSchema, tokenSchema, withMatchingPasswords } from "@/lib/auth/fields";
+import { completePasswordReset } from "@/lib/auth/password-reset";
+import { homePathFor } from "@/lib/auth/permissions";
+import { writeSessionCookie } from "@/lib/auth/session-cookie";
+import { failedFormState, invalidFormState, readFormValues, type FormState } from "@/lib/http/form-state";
+import { passwordResetProblems } from "../../link-problems";
+
+export type CompleteResetField = "token" | "password" | "confirmPassword";
+export type CompleteResetState = FormState<CompleteResetField>;
+
+const completeSchema = withMatchingPasswords(
+  z.object({
+    token: tokenSchema,
+    password: newPasswordSchema,
+    confirmPassword: z.string({ error: "Type the password again." }),
+  }),
+);
+
+export async function completePasswordResetAction(
+  _previous: CompleteResetState,
+  formData: FormData,
+): Promise<CompleteResetState> {
+  const values = readFormValues(formData, ["token"] as const);
+  const parsed = completeSchema.safeParse(Object.fromEntries(formData));
+  if (!parsed.success) return invalidFormState(parsed.error, values);
+
+  const result = await completePasswordReset({ token: parsed.data.token, password: parsed.data.password });
+  if (!result.ok) return failedFormState(passwordResetProblems[result.reason], values);
+  await writeSessionCookie(result.cookie);
+  redirect(homePathFor(result.role));
+}

@@ -1,0 +1,40 @@
+"use server";
+
+import { redirect } from "next/navigation";
+import { z } from "zod";
+import { safeReturnPath } from "@/lib/auth/access";
+import { readClientAddress } from "@/lib/auth/client-address";
+import { emailSchema } from "@/lib/auth/fields";
+import { homePathFor } from "@/lib/auth/permissions";
+import { writeSessionCookie } from "@/lib/auth/session-cookie";
+import { signInWithPassword } from "@/lib/auth/sign-in";
+import { failedFormState, invalidFormState, readFormValues, type FormState } from "@/lib/http/form-state";
+
+export type SignInField = "email" | "password" | "next";
+export type SignInState = FormState<SignInField>;
+
+const signInSchema = z.object({
+  email: emailSchema,
+  password: z.string({ error: "Enter your password." }).min(1, "Enter your password.").max(200, "That password is too long."),
+  next: z.string().optional(),
+});
+
+export async function signIn(_previous: SignInState, formData: FormData): Promise<SignInState> {
+  const values = readFormValues(formData, ["email", "next"] as const);
+  const parsed = signInSchema.safeParse(Object.fromEntries(formData));
+  if (!parsed.success) return invalidFormState(parsed.error, values);
+
+  const result = await signInWithPassword({
+    email: parsed.data.email,
+    password: parsed.data.password,
+    clientAddress: await readClientAddress(),
+  });
+  if (!result.ok && result.reason === "throttled") {
+    const minutes = result.retryAfterMinutes;
+    return failedFormState(`Too many attempts. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`, values);
+  }
+  if (!result.ok) return failedFormState("That e-mail and password do not match an account. Check both and try again.", values);
+
+  await writeSessionCookie(result.cookie);
+  redirect(safeReturnPath(parsed.data.next) ?? homePathFor(result.user.role));
+}

@@ -1,0 +1,7 @@
+"use client";
+
+import { ErrorPanel } from "@/components/ui/error-panel";
+
+export default function LearnError({ error, retry }: { error: unknown; retry: () => void }) {
+  return <ErrorPanel error={error} retry={retry} what="your course" />;
+}

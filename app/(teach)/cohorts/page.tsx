@@ -1,0 +1,46 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { Card } from "@/components/ui/card";
+import { formatDayRange } from "@/components/ui/dates";
+import { PageHeading } from "@/components/ui/page-heading";
+import { listCohortsByMember } from "@/db/queries/cohorts";
+import { requireRole } from "@/lib/auth/current-user";
+
+export const metadata: Metadata = { title: "My cohorts" };
+
+export default async function InstructorHomePage() {
+  const user = await requireRole("instructor", { returnTo: "/cohorts" });
+  const cohorts = await listCohortsByMember({ userId: user.id, role: "instructor" });
+
+  return (
+    <>
+      <PageHeading
+        eyebrow="Teaching"
+        title="My cohorts"
+        lead="Open a cohort to see its learners. Progress, attempts and bench photos to review will appear here as the course runs."
+      />
+      {cohorts.length === 0 ? (
+        <Card>
+          <p className="text-ink-soft">You are not teaching a cohort yet. Your school&apos;s admin assigns instructors.</p>
+        </Card>
+      ) : (
+        <ul className="grid gap-4 sm:grid-cols-2">
+          {cohorts.map((cohort) => (
+            <li key={cohort.id}>
+              <Link
+                href={`/cohorts/${cohort.id}`}
+                className="block rounded-card border border-line bg-surface p-5 no-underline transition-colors hover:border-accent"
+              >
+                <h2 className="text-lg font-semibold text-ink">{cohort.name}</h2>
+                <p className="mt-1 text-sm text-ink-soft">{formatDayRange(cohort.startsOn, cohort.endsOn)}</p>
+                <p className="mt-3 text-sm font-medium text-accent">
+                  {cohort.learnerCount} learner{cohort.learnerCount === 1 ? "" : "s"} →
+                </p>
+              </Link>
+            </li>
+          ))}
+        </ul>
+      )}
+    </>
+  );
+}

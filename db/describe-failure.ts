@@ -1,0 +1,12 @@
+import { EnvError } from "../lib/env";
+
+/** One readable line for a failed database script, instead of a stack trace. */
+export function describeDatabaseFailure(error: unknown): string {
+  if (error instanceof EnvError) return error.message;
+  const cause = error instanceof Error && error.cause instanceof Error ? error.cause : error;
+  const code = (cause as { code?: string } | null)?.code;
+  if (code === "ECONNREFUSED") return "the database server is not accepting connections (is PostgreSQL running?)";
+  if (code === "3D000") return "the database does not exist (create it first, e.g. with scripts/postgres.sh up)";
+  if (code === "42P01") return "a table is missing: apply the migrations first (npx tsx scripts/migrate.ts)";
+  return cause instanceof Error ? cause.message : String(cause);
+}

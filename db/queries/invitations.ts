@@ -1,0 +1,125 @@
+import { and, desc, eq, gt, isNull } from "drizzle-orm";
+import { db } from "../client";
+import { cohortMemberships, cohorts, invitations, schools, users, type Invitation, type Role } from "../schema";
+
+/** Issues an invitation and revokes any earlier pending one for the same address, so one link is live. */
+export async function createInvitation(params: {
+  schoolId: string;
+  email: string;
+  role: Role;
+  cohortId: string | null;
+  invitedById: string | null;
+  tokenHash: string;
+  expiresAt: Date;
+}): Promise<Invitation> {
+  return db.transaction(async (tx) => {
+    await tx
+      .update(invitations)
+      .set({ revokedAt: new Date() })
+      .where(
+        and(
+          eq(invitations.schoolId, params.schoolId),
+          eq(invitations.email, params.email),
+          isNull(invitations.usedAt),
+          isNull(invitations.revokedAt),
+        ),
+      );
+    const [invitation] = await tx.insert(invitations).values(params).returning();
+    return invitation!;
+  });
+}
+
+export type InvitationDetails = Invitation & { schoolName: string; cohortName: string | null };
+
+export async function findInvitationByTokenHash(params: { tokenHash: string }): Promise<InvitationDetails | undefined> {
+  const [row] = await db
+    .select({ invitation: invitations, schoolName: schools.name, cohortName: cohorts.name })
+    .from(invitations)
+    .innerJoin(schools, eq(schools.id, invitations.schoolId))
+    .leftJoin(cohorts, eq(cohorts.id, invitations.cohortId))
+    .where(eq(invitations.tokenHash, params.tokenHash))
+    .limit(1);
+  return row && { ...row.invitation, schoolName: row.schoolName, cohortName: row.cohortName };
+}
+
+export type InvitationState = "usable" | "unknown" | "used" | "revoked" | "expired";
+
+export function describeInvitationState(invitation: Invitation | undefined, now: Date): InvitationState {
+  if (!invitation) return "unknown";
+  if (invitation.usedAt) return "used";
+  if (invitation.revokedAt) return "revoked";
+  if (invitation.expiresAt <= now) return "expired";
+  return "usable";
+}
+
+export type AcceptInvitationResult =
+  | { ok: true; userId: string }
+  | { ok: false; reason: Exclude<InvitationState, "usable"> | "already-registered" };
+
+/**
+ * Creates the account, adds it to the invited cohort and spends the invitation in one
+ * transaction; the row lock makes a double submit of the same link create one account.
+ */
+export async function acceptInvitation(params: {
+  tokenHash: string;
+  name: string;
+  passwordHash: string;
+  now: Date;
+}): Promise<AcceptInvitationResult> {
+  return db.transaction(async (tx) => {
+    const [invitation] = await tx
+      .select()
+      .from(invitations)
+      .where(eq(invitations.tokenHash, params.tokenHash))
+      .for("update")
+      .limit(1);
+    const state = describeInvitationState(invitation, params.now);
+    if (state !== "usable" || !invitation) return { ok: false, reason: state === "usable" ? "unknown" : state };
+
+    const [existing] = await tx.select({ id: users.id }).from(users).where(eq(users.email, invitation.email)).limit(1);
+    if (existing) return { ok: false, reason: "already-registered" };
+
+    const [user] = await tx
+      .insert(users)
+      .values({
+        schoolId: invitation.schoolId,
+        email: invitation.email,
+        name: params.name,
+        role: invitation.role,
+        passwordHash: params.passwordHash,
+      })
+      .returning({ id: users.id });
+    if (invitation.cohortId && invitation.role !== "admin") {
+      await tx.insert(cohortMemberships).values({ cohortId: invitation.cohortId, userId: user!.id, role: invitation.role });
+    }
+    await tx.update(invitations).set({ usedAt: params.now }).where(eq(invitations.id, invitation.id));
+    return { ok: true, userId: user!.id };
+  });
+}
+
+export type PendingInvitation = Pick<Invitation, "id" | "email" | "role" | "expiresAt" | "createdAt"> & {
+  cohortName: string | null;
+};
+
+export async function listPendingInvitationsBySchool(params: { schoolId: string; now: Date }): Promise<PendingInvitation[]> {
+  return db
+    .select({
+      id: invitations.id,
+      email: invitations.email,
+      role: invitations.role,
+      expiresAt: invitations.expiresAt,
+      createdAt: invitations.createdAt,
+      cohortName: cohorts.name,
+    })
+    .from(invitations)
+    .leftJoin(cohorts, eq(cohorts.id, invitations.cohortId))
+    .where(
+      and(
+        eq(invitations.schoolId, params.schoolId),
+        isNull(invitations.usedAt),
+        isNull(invitations.revokedAt),
+        gt(invitations.expiresAt, params.now),
+      ),
+    )
+    .orderBy(desc(invitations.createdAt));
+}

@@ -1,0 +1,67 @@
+import {
+  completePasswordReset as completePasswordResetRecord,
+  countPasswordResetsSince,
+  createPasswordReset,
+  describePasswordResetState,
+  findPasswordResetByTokenHash,
+  type PasswordResetState,
+} from "@/db/queries/password-resets";
+import { findUserByEmail } from "@/db/queries/users";
+import type { Role } from "@/db/schema";
+import { readAppEnv } from "@/lib/env";
+import { sendPasswordResetEmail } from "@/lib/mail/send";
+import { hashPassword } from "./password";
+import { createSession, invalidateUserSessions, type SessionCookie } from "./session-store";
+import { generateToken, hashToken } from "./tokens";
+
+export const passwordResetLifetimeMinutes = 60;
+// Caps how many reset e-mails one account can be sent, so the form cannot be used to flood an inbox.
+export const passwordResetsPerHour = 3;
+
+/**
+ * Sends a reset link when the address belongs to an active account and quietly does nothing
+ * otherwise; the caller answers the same either way.
+ */
+export async function requestPasswordReset(params: { email: string; now?: Date }): Promise<void> {
+  const now = params.now ?? new Date();
+  const user = await findUserByEmail({ email: params.email });
+  if (!user?.active) return;
+  const recent = await countPasswordResetsSince({ userId: user.id, since: new Date(now.getTime() - 60 * 60_000) });
+  if (recent >= passwordResetsPerHour) return;
+
+  const token = generateToken();
+  const expiresAt = new Date(now.getTime() + passwordResetLifetimeMinutes * 60_000);
+  await createPasswordReset({ userId: user.id, tokenHash: hashToken(token), expiresAt });
+  await sendPasswordResetEmail({
+    to: user.email,
+    name: user.name,
+    resetUrl: `${readAppEnv().APP_URL}/reset-password/${token}`,
+    expiresAt,
+  });
+}
+
+export async function checkPasswordResetToken(params: { token: string; now?: Date }): Promise<PasswordResetState> {
+  const reset = await findPasswordResetByTokenHash({ tokenHash: hashToken(params.token) });
+  return describePasswordResetState(reset, params.now ?? new Date());
+}
+
+export type CompletePasswordResetResult =
+  | { ok: true; userId: string; role: Role; cookie: SessionCookie }
+  | { ok: false; reason: Exclude<PasswordResetState, "usable"> };
+
+/** Sets the new password, signs the account out everywhere and opens one fresh session here. */
+export async function completePasswordReset(params: {
+  token: string;
+  password: string;
+  now?: Date;
+}): Promise<CompletePasswordResetResult> {
+  const tokenHash = hashToken(params.token);
+  const now = params.now ?? new Date();
+  const state = describePasswordResetState(await findPasswordResetByTokenHash({ tokenHash }), now);
+  if (state !== "usable") return { ok: false, reason: state };
+
+  const result = await completePasswordResetRecord({ tokenHash, passwordHash: await hashPassword(params.password), now });
+  if (!result.ok) return result;
+  await invalidateUserSessions(result.userId);
+  return { ok: true, userId: result.userId, role: result.role, cookie: await createSession(result.userId) };
+}

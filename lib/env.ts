@@ -1,0 +1,61 @@
+import { z } from "zod";
+
+// Each part of the app reads only the settings it needs, on first use, so a script that only
+// migrates does not demand mail settings and `next build` does not need a database.
+
+const databaseEnvSchema = z.object({
+  DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/, error: "must be a postgres:// URL" }),
+});
+
+const appEnvSchema = z.object({
+  APP_URL: z.url({ protocol: /^https?$/, error: "must be an http:// or https:// origin" }),
+});
+
+const booleanFlag = z
+  .enum(["true", "false", "1", "0", ""])
+  .default("false")
+  .transform((value) => value === "true" || value === "1");
+
+const mailEnvSchema = z.object({
+  SMTP_HOST: z.string().min(1, "must name the SMTP server"),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535),
+  SMTP_SECURE: booleanFlag,
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().min(3, "must be a sender such as Edgewise <no-reply@school.example>"),
+});
+
+const mailSinkEnvSchema = z.object({
+  MAIL_SINK_URL: z.preprocess((value) => (value === "" ? undefined : value), z.url().optional()),
+});
+
+export type DatabaseEnv = z.infer<typeof databaseEnvSchema>;
+export type AppEnv = z.infer<typeof appEnvSchema>;
+export type MailEnv = z.infer<typeof mailEnvSchema>;
+
+export class EnvError extends Error {
+  override name = "EnvError";
+}
+
+function readEnv<T extends z.ZodType>(schema: T): z.infer<T> {
+  const result = schema.safeParse(process.env);
+  if (result.success) return result.data;
+  const problems = result.error.issues.map((issue) => {
+    const key = issue.path.join(".");
+    return process.env[key] ? `${key} ${issue.message}` : `${key} is not set`;
+  });
+  throw new EnvError(`Configuration problem: ${problems.join("; ")}.`);
+}
+
+function once<T>(read: () => T): () => T {
+  let value: { current: T } | undefined;
+  return () => (value ??= { current: read() }).current;
+}
+
+export const readDatabaseEnv = once(() => readEnv(databaseEnvSchema));
+export const readAppEnv = once(() => {
+  const env = readEnv(appEnvSchema);
+  return { ...env, APP_URL: env.APP_URL.replace(/\/+$/, "") };
+});
+export const readMailEnv = once(() => readEnv(mailEnvSchema));
+export const readMailSinkUrl = once(() => readEnv(mailSinkEnvSchema).MAIL_SINK_URL?.replace(/\/+$/, ""));

@@ -1,0 +1,45 @@
+import { z } from "zod";
+
+// The one place where failures become HTTP statuses and sentences a person may read. Details
+// of unexpected failures go to the server log, never to the client.
+
+export const errorCatalogue = {
+  "bad-request": { status: 400, message: "The request could not be read." },
+  unauthenticated: { status: 401, message: "Sign in to continue." },
+  forbidden: { status: 403, message: "Your account does not have access to this." },
+  "not-found": { status: 404, message: "We could not find that." },
+  conflict: { status: 409, message: "That conflicts with something that already exists." },
+  "invalid-input": { status: 422, message: "Some of the values are not valid." },
+  "rate-limited": { status: 429, message: "Too many attempts. Wait a little, then try again." },
+  unavailable: { status: 503, message: "A service we depend on is not answering. Try again shortly." },
+  internal: { status: 500, message: "Something went wrong on our side. Try again, and tell your admin if it keeps happening." },
+} as const satisfies Record<string, { status: number; message: string }>;
+
+export type ErrorCode = keyof typeof errorCatalogue;
+
+export class AppError extends Error {
+  override name = "AppError";
+  constructor(
+    readonly code: ErrorCode,
+    message?: string,
+    readonly fieldErrors?: Record<string, string[]>,
+  ) {
+    super(message ?? errorCatalogue[code].message);
+  }
+}
+
+export type ErrorBody = { error: { code: ErrorCode; message: string; fieldErrors?: Record<string, string[]> } };
+
+/** Maps any thrown value to a status and a safe body; logs what the client must not see. */
+export function describeError(error: unknown): { status: number; body: ErrorBody } {
+  if (error instanceof AppError) {
+    const { status } = errorCatalogue[error.code];
+    return { status, body: { error: { code: error.code, message: error.message, fieldErrors: error.fieldErrors } } };
+  }
+  if (error instanceof z.ZodError) {
+    const { fieldErrors } = z.flattenError(error);
+    return describeError(new AppError("invalid-input", undefined, fieldErrors as Record<string, string[]>));
+  }
+  console.error(error);
+  return describeError(new AppError("internal"));
+}

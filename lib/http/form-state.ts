@@ -1,0 +1,45 @@
+import { z } from "zod";
+
+// The result a server action hands back to its form: errors are returned, not thrown, and the
+// typed values come back so the form can be refilled.
+
+export type FormState<Field extends string> =
+  | { status: "idle" }
+  | { status: "error"; message: string; fieldErrors: Partial<Record<Field, string>>; values: Partial<Record<Field, string>> }
+  | { status: "success"; message: string };
+
+export const idleFormState = { status: "idle" } as const;
+
+/** Plain strings from FormData, for refilling fields; passwords are never sent back. */
+export function readFormValues<Field extends string>(
+  formData: FormData,
+  fields: readonly Field[],
+): Partial<Record<Field, string>> {
+  const values: Partial<Record<Field, string>> = {};
+  for (const field of fields) {
+    const value = formData.get(field);
+    if (typeof value === "string" && !/password/i.test(field)) values[field] = value;
+  }
+  return values;
+}
+
+export function invalidFormState<Field extends string>(
+  error: z.ZodError,
+  values: Partial<Record<Field, string>>,
+  message = "Check the highlighted fields.",
+): FormState<Field> {
+  const fieldErrors: Partial<Record<Field, string>> = {};
+  for (const issue of error.issues) {
+    const field = issue.path[0] as Field | undefined;
+    if (field !== undefined && !fieldErrors[field]) fieldErrors[field] = issue.message;
+  }
+  return { status: "error", message, fieldErrors, values };
+}
+
+export function failedFormState<Field extends string>(
+  message: string,
+  values: Partial<Record<Field, string>>,
+  fieldErrors: Partial<Record<Field, string>> = {},
+): FormState<Field> {
+  return { status: "error", message, fieldErrors, values };
+}
