@@ -1,4 +1,4 @@
-# Starts the local stand-ins for hosted services (mail sink) unless real ones are configured.
+# Starts the local stand-ins for hosted services (mail sink, upload fake) unless real ones are configured.
 # Sourced by start.sh and test.sh; fills service_pids and exports the matching environment.
 # Profiles: dev (ports 540xx) and test (ports 550xx) so a test run never touches a running demo.
 
@@ -19,5 +19,25 @@ start_local_services() {
     SMTP_PORT=$SMTP_PORT MAIL_SINK_API_PORT=$((base + 26)) node scripts/mail-sink.mjs >"$DATA_DIR/mail-sink-$profile.log" 2>&1 &
     service_pids+=($!)
     wait_for_port "$SMTP_PORT" 15 "The mail sink"
+  fi
+
+  if [ -n "${UPLOADTHING_TOKEN:-}" ]; then
+    step "Storing uploads with the hosted upload service (UPLOADTHING_TOKEN is set; no local fake)"
+  else
+    local ingest_port=$((base + 30)) api_port=$((base + 31)) api_key
+    api_key="sk_local_$(od -An -tx1 -N16 /dev/urandom | tr -d ' \n')"
+    export UPLOADTHING_TOKEN="$(printf '{"apiKey":"%s","appId":"edgewise-local","regions":["local"]}' "$api_key" | base64 | tr -d '\n')"
+    export UPLOADTHING_INGEST_URL="http://127.0.0.1:$ingest_port" UPLOADTHING_API_URL="http://127.0.0.1:$api_port"
+    # false: the fake calls the app's upload callback itself, as the hosted service does, even under `next dev`.
+    export UPLOADTHING_IS_DEV=false UPLOADTHING_LOG_LEVEL=Warning UPLOAD_FAKE_DIR="$DATA_DIR/uploads-$profile"
+    # The test database is recreated on every run, so files from an earlier run would be orphans.
+    [ "$profile" = test ] && rm -rf "$UPLOAD_FAKE_DIR"
+    require_free_port "$ingest_port" "the local upload fake needs it"
+    require_free_port "$api_port" "the local upload fake's file API needs it"
+    step "Starting the local upload fake (ingest $UPLOADTHING_INGEST_URL, API $UPLOADTHING_API_URL, files in .data/uploads-$profile)"
+    UPLOAD_FAKE_PORT=$ingest_port UPLOAD_FAKE_API_PORT=$api_port node scripts/upload-fake.mjs >"$DATA_DIR/upload-fake-$profile.log" 2>&1 &
+    service_pids+=($!)
+    wait_for_port "$ingest_port" 15 "The upload fake"
+    wait_for_port "$api_port" 15 "The upload fake's file API"
   fi
 }

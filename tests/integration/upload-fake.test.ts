@@ -21,7 +21,7 @@ const apiKey = `sk_local_${randomBytes(12).toString("hex")}`;
 const token = Buffer.from(JSON.stringify({ apiKey, appId: "edgewise-local", regions: ["local"] })).toString("base64");
 const photo = noisyPhoto(300, 300);
 const md5 = (bytes: Uint8Array) => createHash("md5").update(bytes).digest("hex");
-const photoFile = (name = "scope-trace.png") => new File([photo], name, { type: "image/png" });
+const photoFile = (name = "scope-trace.png") => new File([new Uint8Array(photo)], name, { type: "image/png" });
 
 type Completed = { key: string; name: string; size: number; type: string; fileHash: string; customId: string | null; metadata: unknown };
 const completed: Completed[] = [];
@@ -55,8 +55,11 @@ async function serveUploadRoute(isDev: boolean): Promise<App> {
     handlerRequests.push({ url: String(input instanceof Request ? input.url : input), hook: new Headers(init?.headers).get("uploadthing-hook") });
     return fetch(input, init);
   };
-  const handler = createRouteHandler({ router, config: { token, ingestUrl: fake.url, isDev, logLevel: "Warning", fetch: recordingFetch } });
+  let handler: (request: Request) => Promise<Response> = () => Promise.reject(new Error("route not mounted yet"));
   const server = await serveWebHandler((request) => handler(request));
+  const callbackUrl = `${server.origin}/api/uploadthing`;
+  const config = { token, ingestUrl: fake.url, callbackUrl, isDev, logLevel: "Warning", fetch: recordingFetch } as const;
+  handler = createRouteHandler({ router, config });
   return { origin: server.origin, handlerRequests, close: server.close };
 }
 
@@ -154,6 +157,34 @@ describe("a bench photo uploaded through the SDK's client", () => {
     const { customId } = completed[0];
     await expect(utapi.deleteFiles(customId!, { keyType: "customId" })).resolves.toMatchObject({ deletedCount: 1 });
     expect(existsSync(storedPath(result.key))).toBe(false);
+  });
+
+  it("works with nothing but the UPLOADTHING_* variables that scripts/local-services.sh exports", async () => {
+    const exported = {
+      UPLOADTHING_TOKEN: token,
+      UPLOADTHING_INGEST_URL: fake.url,
+      UPLOADTHING_API_URL: fake.url,
+      UPLOADTHING_IS_DEV: "false",
+      UPLOADTHING_LOG_LEVEL: "Warning",
+    };
+    const saved = Object.fromEntries(Object.keys(exported).map((name) => [name, process.env[name]]));
+    Object.assign(process.env, exported);
+    delete process.env.UPLOADTHING_CALLBACK_URL;
+    const handler = createRouteHandler({ router });
+    const server = await serveWebHandler((request) => handler(request));
+    try {
+      const app = { origin: server.origin, handlerRequests: [], close: server.close };
+      const [result] = await uploader(app).uploadFiles("benchPhoto", { files: [photoFile()] });
+      expect(completed.map((c) => c.key)).toEqual([result.key]);
+      await expect(new UTApi().deleteFiles(result.key)).resolves.toMatchObject({ deletedCount: 1 });
+      expect(existsSync(storedPath(result.key))).toBe(false);
+    } finally {
+      await server.close();
+      for (const [name, value] of Object.entries(saved)) {
+        if (value === undefined) delete process.env[name];
+        else process.env[name] = value;
+      }
+    }
   });
 
   it("is served back only to a caller presenting the API key", async () => {
