@@ -60,10 +60,10 @@ async function readJson(req) {
 }
 
 function send(res, status, body, headers = {}) {
-  res.writeHead(status, { "content-type": "application/json", ...headers }).end(body === undefined ? undefined : JSON.stringify(body));
+  res.writeHead(status, { "content-type": "application/json", ...headers }).end(JSON.stringify(body));
 }
 
-// The SDK signs the URL up to and including the last x-ut-* parameter and appends the signature last.
+// The SDK signs the whole URL (origin, key, expires, x-ut-* parameters) and appends the signature last.
 function checkPresigned(req, url) {
   const cut = req.url.lastIndexOf("&signature=");
   if (cut < 0 || !sameSecret(url.searchParams.get("signature"), sign(`http://${req.headers.host}${req.url.slice(0, cut)}`))) {
@@ -109,7 +109,7 @@ async function receiveFile(req, partPath, start, limit) {
   return written;
 }
 
-function registerRoute(req, res, body) {
+function registerRoute(res, body) {
   const pending = new Set(body.fileKeys ?? []);
   const route = { metadata: body.metadata ?? {}, callbackUrl: body.callbackUrl, slug: body.callbackSlug, awaitServerData: body.awaitServerData ?? true };
   if (body.isDev) {
@@ -136,7 +136,7 @@ async function deliverCallback(route, key, payload) {
   const url = new URL(route.callbackUrl);
   url.searchParams.set("slug", route.slug);
   const reply = await fetch(url, { method: "POST", body: payload, headers: { "content-type": "application/json", "uploadthing-hook": "callback", "x-uploadthing-signature": line.signature } });
-  if (!reply.ok) results.get(key)?.resolve( { error: `the app refused the upload callback (${reply.status})` });
+  if (!reply.ok) results.get(key)?.resolve({ error: `the app refused the upload callback (${reply.status})` });
 }
 
 async function upload(req, res, url, key) {
@@ -210,7 +210,7 @@ async function route(req, res) {
   if (req.method === "OPTIONS") return res.writeHead(204).end();
   if (req.method === "POST" && url.pathname === "/route-metadata") {
     requireApiKey(req);
-    return registerRoute(req, res, await readJson(req));
+    return registerRoute(res, await readJson(req));
   }
   if (req.method === "POST" && url.pathname === "/callback-result") {
     requireApiKey(req);
