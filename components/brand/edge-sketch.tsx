@@ -3,8 +3,8 @@
 
 const width = 480;
 const height = 200;
-const baseline = 160;
-const top = 50;
+const baseline = 172;
+const top = 100;
 const stepAt = 70;
 
 function tracePath(response: (t: number) => number): string {

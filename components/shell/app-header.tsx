@@ -1,6 +1,7 @@
 import { signOut } from "@/app/(auth)/sign-out/actions";
 import { BrandMark } from "@/components/brand/brand-mark";
-import { hasPermission, homePathFor, type Role } from "@/lib/auth/permissions";
+import { homePathFor, type Role } from "@/lib/auth/permissions";
+import { protectedRoutes } from "@/lib/auth/route-access";
 import type { SessionUser } from "@/lib/auth/session-store";
 import { isMailSinkEnabled } from "@/lib/mail/sink";
 import { NavLink } from "./nav-link";
@@ -13,7 +14,7 @@ function navItems(user: SessionUser): { href: string; label: string }[] {
     instructor: [{ href: "/cohorts", label: "My cohorts" }],
     admin: [{ href: "/admin", label: "School" }],
   }[user.role];
-  if (hasPermission(user.role, "dev-mail:read") && isMailSinkEnabled()) {
+  if (isMailSinkEnabled() && (protectedRoutes["/dev/mail"] as readonly Role[]).includes(user.role)) {
     return [...items, { href: "/dev/mail", label: "Caught mail" }];
   }
   return items;
@@ -32,7 +33,7 @@ export function AppHeader({ user }: { user: SessionUser }) {
           ))}
         </nav>
         <div className="ml-auto flex items-center gap-3">
-          <div className="text-right leading-tight">
+          <div className="hidden text-right leading-tight sm:block">
             <p className="text-sm font-semibold text-ink">{user.name}</p>
             <p className="text-xs text-ink-faint">{roleLabels[user.role]}</p>
           </div>

@@ -3,6 +3,7 @@ import { forbidden, redirect } from "next/navigation";
 import { cache } from "react";
 import { decidePermissionAccess, decideRoleAccess, signInPath, type AccessDecision } from "./access";
 import type { Permission, Role } from "./permissions";
+import { fillRoute, protectedRoutes, type ProtectedRoute } from "./route-access";
 import { readSessionToken, writeSessionCookie } from "./session-cookie";
 import { sessionCookieName, validateSessionToken, type SessionUser } from "./session-store";
 
@@ -52,4 +53,12 @@ export async function requirePermission(permission: Permission, options: GuardOp
   const user = await getCurrentUser();
   enforce(decidePermissionAccess(user, permission), options);
   return user!;
+}
+
+/** The guard for a page listed in the protected route table: its roles, and a way back after sign-in. */
+export async function requireRouteAccess(
+  route: ProtectedRoute,
+  params: Record<string, string> = {},
+): Promise<SessionUser> {
+  return requireRole(protectedRoutes[route], { returnTo: fillRoute(route, params) });
 }

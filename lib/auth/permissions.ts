@@ -2,14 +2,14 @@ import type { Role } from "@/db/schema";
 
 export type { Role };
 
-// Route groups are audiences and are guarded by role; actions and data functions are
-// capabilities and are guarded by permission, so a capability can move between roles here alone.
-export type Permission = "invitations:create" | "dev-mail:read";
+// Pages are guarded by role (see route-access.ts); server actions and data functions that change
+// things are guarded by permission, so a capability can move between roles here alone.
+export type Permission = "invitations:create";
 
 export const rolePermissions: Record<Role, readonly Permission[]> = {
   learner: [],
   instructor: [],
-  admin: ["invitations:create", "dev-mail:read"],
+  admin: ["invitations:create"],
 };
 
 export function hasPermission(role: Role, permission: Permission): boolean {

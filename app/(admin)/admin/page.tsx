@@ -6,7 +6,7 @@ import { listCohortsBySchool } from "@/db/queries/cohorts";
 import { listPendingInvitationsBySchool } from "@/db/queries/invitations";
 import { findSchoolById } from "@/db/queries/schools";
 import { listUsersBySchool } from "@/db/queries/users";
-import { requireRole } from "@/lib/auth/current-user";
+import { requireRouteAccess } from "@/lib/auth/current-user";
 import { InviteForm } from "./invite-form";
 
 export const metadata: Metadata = { title: "School" };
@@ -14,7 +14,7 @@ export const metadata: Metadata = { title: "School" };
 const roleLabels = { admin: "Admin", instructor: "Instructor", learner: "Learner" } as const;
 
 export default async function AdminHomePage() {
-  const admin = await requireRole("admin", { returnTo: "/admin" });
+  const admin = await requireRouteAccess("/admin");
   const [school, cohorts, people, invitations] = await Promise.all([
     findSchoolById({ schoolId: admin.schoolId }),
     listCohortsBySchool({ schoolId: admin.schoolId }),
@@ -29,7 +29,7 @@ export default async function AdminHomePage() {
         title={school?.name ?? "Your school"}
         lead="Cohorts, the people in them, and invitations that have not been accepted yet."
       />
-      <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <div className="space-y-6">
           <Card>
             <h2 className="text-lg font-semibold">Cohorts ({cohorts.length})</h2>
@@ -52,12 +52,12 @@ export default async function AdminHomePage() {
           </Card>
           <Card>
             <h2 className="text-lg font-semibold">People ({people.length})</h2>
-            <div className="-mx-5 mt-3 overflow-x-auto sm:-mx-6">
-              <table className="w-full min-w-[32rem] text-left text-sm">
+            <div className="-mx-5 mt-3 sm:-mx-6">
+              <table className="w-full text-left text-sm">
                 <thead className="border-b border-line text-ink-faint">
                   <tr>
                     <th scope="col" className="px-5 py-2 font-medium sm:px-6">Name</th>
-                    <th scope="col" className="px-2 py-2 font-medium">E-mail</th>
+                    <th scope="col" className="hidden px-2 py-2 font-medium sm:table-cell">E-mail</th>
                     <th scope="col" className="px-5 py-2 font-medium sm:px-6">Role</th>
                   </tr>
                 </thead>
@@ -67,9 +67,10 @@ export default async function AdminHomePage() {
                       <td className="px-5 py-2.5 font-medium sm:px-6">
                         {person.name}
                         {person.active ? null : <span className="ml-2 text-xs text-danger">deactivated</span>}
+                        <span className="block font-normal break-all text-ink-soft sm:hidden">{person.email}</span>
                       </td>
-                      <td className="px-2 py-2.5 text-ink-soft">{person.email}</td>
-                      <td className="px-5 py-2.5 sm:px-6">{roleLabels[person.role]}</td>
+                      <td className="hidden px-2 py-2.5 text-ink-soft sm:table-cell">{person.email}</td>
+                      <td className="px-5 py-2.5 align-top sm:px-6 sm:align-middle">{roleLabels[person.role]}</td>
                     </tr>
                   ))}
                 </tbody>

@@ -3,12 +3,12 @@ import { Card } from "@/components/ui/card";
 import { formatDayRange } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
 import { listCohortsByMember } from "@/db/queries/cohorts";
-import { requireRole } from "@/lib/auth/current-user";
+import { requireRouteAccess } from "@/lib/auth/current-user";
 
 export const metadata: Metadata = { title: "Your course" };
 
 export default async function LearnerHomePage() {
-  const user = await requireRole("learner", { returnTo: "/learn" });
+  const user = await requireRouteAccess("/learn");
   const cohorts = await listCohortsByMember({ userId: user.id, role: "learner" });
   const firstName = user.name.split(/\s+/)[0];
 
@@ -19,7 +19,7 @@ export default async function LearnerHomePage() {
         title={`Welcome, ${firstName}`}
         lead="Work through the lessons in order. Each one ends in a lab on the workbench, where the line simulator gives your design a verdict."
       />
-      <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <Card>
           <h2 className="text-lg font-semibold">Course map</h2>
           <p className="mt-2 text-ink-soft">

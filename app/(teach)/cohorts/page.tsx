@@ -4,12 +4,12 @@ import { Card } from "@/components/ui/card";
 import { formatDayRange } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
 import { listCohortsByMember } from "@/db/queries/cohorts";
-import { requireRole } from "@/lib/auth/current-user";
+import { requireRouteAccess } from "@/lib/auth/current-user";
 
 export const metadata: Metadata = { title: "My cohorts" };
 
 export default async function InstructorHomePage() {
-  const user = await requireRole("instructor", { returnTo: "/cohorts" });
+  const user = await requireRouteAccess("/cohorts");
   const cohorts = await listCohortsByMember({ userId: user.id, role: "instructor" });
 
   return (

@@ -4,7 +4,7 @@ import { AppFrame } from "@/components/shell/app-frame";
 import { Card } from "@/components/ui/card";
 import { formatMoment } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
-import { requirePermission } from "@/lib/auth/current-user";
+import { requireRouteAccess } from "@/lib/auth/current-user";
 import { findLinks, isMailSinkEnabled, listCaughtMessages, type CaughtMessage } from "@/lib/mail/sink";
 
 export const metadata: Metadata = { title: "Caught mail", robots: { index: false } };
@@ -13,7 +13,7 @@ export const metadata: Metadata = { title: "Caught mail", robots: { index: false
 // there is nothing to show, so the route is absent.
 export default async function CaughtMailPage() {
   if (!isMailSinkEnabled()) notFound();
-  const user = await requirePermission("dev-mail:read", { returnTo: "/dev/mail" });
+  const user = await requireRouteAccess("/dev/mail");
   const messages = await listCaughtMessages().catch(() => null);
 
   return (

@@ -21,7 +21,7 @@ export function AcceptInvitationForm({ token, email }: { token: string; email: s
       <input type="hidden" name="token" value={token} />
       <div className="space-y-1.5">
         <p className="text-sm font-medium text-ink">E-mail address</p>
-        <p className="rounded-lg border border-line bg-sunken px-3 py-2.5 text-base text-ink-soft">{email}</p>
+        <p className="rounded-lg border border-line bg-sunken px-3 py-2.5 text-base break-all text-ink-soft">{email}</p>
       </div>
       <TextField
         label="Your name"

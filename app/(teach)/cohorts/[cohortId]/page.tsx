@@ -6,13 +6,13 @@ import { Card } from "@/components/ui/card";
 import { formatDayRange } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
 import { findCohortTaughtBy, listCohortMembers } from "@/db/queries/cohorts";
-import { requireRole } from "@/lib/auth/current-user";
+import { requireRouteAccess } from "@/lib/auth/current-user";
 
 export const metadata: Metadata = { title: "Cohort" };
 
 export default async function CohortPage({ params }: { params: Promise<{ cohortId: string }> }) {
   const { cohortId } = await params;
-  const user = await requireRole("instructor", { returnTo: `/cohorts/${encodeURIComponent(cohortId)}` });
+  const user = await requireRouteAccess("/cohorts/[cohortId]", { cohortId });
   if (!z.uuid().safeParse(cohortId).success) notFound();
   // A cohort the instructor does not teach is reported as missing, not as forbidden, so its
   // existence is not confirmed to them.
