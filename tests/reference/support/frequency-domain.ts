@@ -50,6 +50,17 @@ export function transferAt(circuit: ReferenceCircuit, omega: number): { far: Com
   return { far, near: mul(far, atLoad) };
 }
 
+/** The same transfer at ω = 0, where γ = sqrt(R'G') and the load draws no current. */
+export function transferAtDc(circuit: ReferenceCircuit): { far: number; near: number } {
+  const { resistance, conductance, length } = circuit.line;
+  const x = Math.sqrt(resistance * conductance) * length;
+  const sinhOverX = x === 0 ? 1 : Math.sinh(x) / x;
+  const a = Math.cosh(x);
+  const c = conductance * length * sinhOverX;
+  const far = 1 / (a + circuit.sourceResistance * c);
+  return { far, near: far * a };
+}
+
 export interface FrequencyDomainResult {
   time: Float64Array;
   nearEnd: Float64Array;
@@ -83,9 +94,9 @@ export function solveInFrequencyDomain(circuit: ReferenceCircuit, options: { tim
   const farIm = new Float64Array(n);
   const nearRe = new Float64Array(n);
   const nearIm = new Float64Array(n);
-  const dcGain = 1 / (1 + circuit.sourceResistance * circuit.line.conductance * circuit.line.length);
-  farRe[0] = mean * dcGain;
-  nearRe[0] = mean * dcGain;
+  const dc = transferAtDc(circuit);
+  farRe[0] = mean * dc.far;
+  nearRe[0] = mean * dc.near;
   for (let k = 1; k < n / 2; k++) {
     const omega = (2 * Math.PI * k) / period;
     const scale = -1 / (period * omega * omega);
