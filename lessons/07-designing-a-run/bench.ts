@@ -1,0 +1,34 @@
+import type { BenchExerciseInput } from "../schema";
+
+export const bench = {
+  slug: "build-a-run",
+  title: "Build and measure a run of your design",
+  brief: `
+Build one data run of your own design on the bench: a controller output (or a signal source set to the pixel protocol), a series resistor, at least 5 m of cable, and a strip whose first pixel you can probe. Work through the seven steps of the lesson on paper first and keep your working.
+
+Measure at the first pixel's data input, with the probe's ground on the pixel's ground (lesson 8 explains how), and record what the run does. Then state what you built and what you measured.
+
+Power the strip from a supply with a fuse sized for its conductors, and disconnect the supply before changing any wiring. Work only on the low-voltage side; leave any mains wiring to a licensed electrician.
+`,
+  asks: [
+    { id: "cable", label: "Cable used (kind and conductor size)", kind: "cable", unit: "" },
+    { id: "length", label: "Cable length", kind: "length", unit: "m" },
+    { id: "resistor", label: "Series resistor fitted", kind: "resistor", unit: "ohm" },
+    { id: "rise-time", label: "Rise time (10–90 %) measured at the first pixel", kind: "riseTime", unit: "ns" },
+    { id: "overshoot", label: "Overshoot above the settled high level at the first pixel", kind: "overshoot", unit: "V" },
+    { id: "prediction", label: "Your predicted first arrival and window, with the working", kind: "text", unit: "" },
+  ],
+  photo: {
+    required: true,
+    mustShow: [
+      "one rising edge at the first pixel, with the timebase and volts per division readable",
+      "the scope's rise-time or cursor measurement on screen",
+      "a label or note giving the cable, length and resistor",
+    ],
+  },
+  rubric: [
+    { id: "design", criterion: "The written design follows the seven steps and its window contains the resistor fitted", points: 4 },
+    { id: "measurement", criterion: "The probe is at the first pixel with a short ground, and the reported values match the photo", points: 4 },
+    { id: "comparison", criterion: "The learner compares the measurement with the prediction and explains any difference", points: 2 },
+  ],
+} satisfies BenchExerciseInput;

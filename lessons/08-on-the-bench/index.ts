@@ -1,0 +1,197 @@
+import type { LessonInput } from "../schema";
+import { bench } from "./bench";
+import { lab } from "./lab";
+
+export const lesson = {
+  slug: "on-the-bench",
+  number: 8,
+  title: "On the bench",
+  summary:
+    "Measuring a data run with an oscilloscope without fooling yourself: bandwidth and rise time, probe loading, the ground lead, where to probe and what to read; documenting a run with a scope photo; and working safely around supplies and mains equipment.",
+  minutes: 50,
+  blocks: [
+    {
+      kind: "text",
+      markdown: `
+## The bench is the judge
+
+Everything in this course so far has been a model: formulas, bounce diagrams, the simulator that grades your labs. Models leave things out. A real pixel's thresholds are not exactly 0.7 and 0.3 of its supply; a real cable's impedance is not exactly the catalogue's; real connectors add a little inductance and capacitance. Before an installation is signed off, the first pixel of every long run is looked at with an oscilloscope. This lesson is about doing that well, so that what you see is the run and not your measuring setup, and about doing it safely.
+
+## Can your scope see the edge?
+
+An oscilloscope has a **bandwidth**, the frequency at which its response has fallen to about 71 % (−3 dB). Bandwidth limits how fast an edge it can show. A widely used textbook approximation links the two:
+
+t_rise,scope ≈ 0.35 / bandwidth.
+
+- 100 MHz: 0.35 / 100 MHz = 3.5 ns
+- 50 MHz: 7 ns
+- 20 MHz: 17.5 ns
+
+What you see on the screen is not the edge itself but the edge as slowed by the scope (and the probe). For a chain of such stages the rise times combine approximately as a root sum of squares (another textbook approximation):
+
+t_rise,seen ≈ √(t_signal² + t_scope² + t_probe²).
+
+### Worked example
+
+A true 10 ns edge, a 100 MHz scope and a probe fast enough to ignore: √(10² + 3.5²) ns = √112.25 ns ≈ 10.6 ns. The scope adds 6 %. On a 20 MHz scope the same edge shows as √(10² + 17.5²) ns ≈ 20.2 ns: you are measuring the scope. A working habit of the trade (common practice): use a scope whose own rise time is at most a third of the edge you want to measure. For the 3 ns edges of a 5 V buffer driving a matched run, that means 300 MHz or more; for the tens of nanoseconds of most real runs at the first pixel, 100 MHz is enough.
+
+The scope's **sample rate** matters too: it must take several samples during the edge. A scope sampling at 1 GS/s takes one sample per nanosecond, enough for a 10 ns edge. Check the rate at the timebase you use, since many scopes lower it on slow timebases.
+`,
+    },
+    {
+      kind: "check",
+      id: "scope-rise-time",
+      prompt: "Using t_rise ≈ 0.35 / bandwidth, what is the rise time of a 100 MHz oscilloscope?",
+      answer: { value: 0.35 / 100e6, unit: "ns", tolerance: 0.02 },
+      hint: "Divide 0.35 by the bandwidth in hertz.",
+      explanation: "0.35 / 100 × 10⁶ Hz = 3.5 × 10⁻⁹ s = 3.5 ns.",
+    },
+    {
+      kind: "check",
+      id: "measured-rise",
+      prompt: "A true 10 ns edge is viewed on that 100 MHz scope (3.5 ns). About what rise time does the screen show?",
+      answer: { value: Math.sqrt(10 ** 2 + 3.5 ** 2) * 1e-9, unit: "ns", tolerance: 0.02 },
+      hint: "Root sum of squares: √(t_signal² + t_scope²).",
+      explanation: "√(10² + 3.5²) ns = √112.25 ns ≈ 10.6 ns.",
+    },
+    {
+      kind: "text",
+      markdown: `
+## The probe is part of the circuit
+
+The usual probe for this work is a **10:1 passive probe**: it divides the voltage by ten, and in return it loads the circuit lightly. Common practice gives such a probe about 10 MΩ in parallel with about 10 pF at its tip (read the figures marked on your probe or in its manual). A 1:1 probe loads far more heavily, with the capacitance of its whole cable at the tip (typically tens of picofarads or more, common practice) and much less bandwidth; do not use one for edges.
+
+Ten megohms is nothing to a data line. Ten picofarads is not. Recall from lesson 5 that, seen from the far end, the line looks like a source of twice the incident wave behind a resistance Z0. Whatever capacitance hangs on the far end charges through Z0, with a time constant τ = Z0 × C. The pixel's own 5 pF is already there; your probe adds 10 pF more.
+
+### Worked example: the probe slows what it measures
+
+On a lone lead (Z0 ≈ 351 Ω), matched at the source:
+
+- pixel alone: 2.2 × 351 Ω × 5 pF ≈ 3.9 ns of rise added at the far end;
+- pixel plus probe: 2.2 × 351 Ω × 15 pF ≈ 11.6 ns.
+
+On data beside ground (Z0 ≈ 93.8 Ω) the same probe gives 2.2 × 93.8 Ω × 15 pF ≈ 3.1 ns. The high-impedance lead is the one your probe disturbs most. The consequences are mild (a slightly slower, slightly less ringing edge than without the probe) but real: when a reading is marginal, remember that it was taken with 10 pF more than the pixel normally has. And always **compensate** the probe before use: connect it to the scope's calibrator output and turn its trimmer until the square wave's corners are flat, neither peaked nor rounded (the probe's manual shows how).
+
+## The ground lead
+
+A probe measures the voltage between its tip and its ground clip. The ground clip's lead, typically around 15 cm long, forms a loop with the tip, and a loop has inductance: roughly 1 nH per millimetre of lead is a common rule of thumb (common practice, not a precise figure). Around 150 nH of ground lead in series with the probe's 10 pF makes a resonant circuit. Its frequency is
+
+f = 1 / (2π × √(L × C)) = 1 / (2π × √(150 nH × 10 pF)) ≈ 130 MHz.
+
+Every fast edge excites it. On the screen you see ringing at about 130 MHz that **does not exist on the line**: it is made by the measurement. Whether it shows depends on the damping, ζ = (R / 2) × √(C / L), with R the resistance that drives the probe. At the far end of data beside ground, R is about Z0 = 94 Ω: ζ ≈ 47 × √(10 pF / 150 nH) ≈ 0.38, well under 1, so it rings visibly. At the far end of a lone lead, R ≈ 351 Ω and ζ ≈ 1.4: no ringing, just a slightly slower edge.
+
+The cure is a **short ground**: the spring-clip ground tip supplied with most probes, a centimetre or so long, pressed onto the pixel's ground pad right beside the data pad. At about 10 nH the resonance moves to about 500 MHz, beyond what a 100 MHz scope shows.
+`,
+    },
+    {
+      kind: "figure",
+      figure: "probe-ground",
+      caption:
+        "A clean 3 ns edge at the far end of a 94 Ω line, as a 10 pF probe shows it through its ground lead. Lengthen the ground lead and watch ringing appear that is not on the line.",
+      params: {
+        stepVoltage: 5,
+        sourceResistance: 94,
+        probeCapacitance: 10e-12,
+        groundLeadInductance: 150e-9,
+        edgeTime: 3e-9,
+        slider: { field: "groundLeadInductance", min: 5e-9, max: 300e-9, step: 5e-9 },
+      },
+    },
+    {
+      kind: "check",
+      id: "ground-lead-ring",
+      prompt: "A probe's 10 pF tip capacitance and a 150 nH ground lead form a resonant circuit. At what frequency does it ring?",
+      answer: { value: 1 / (2 * Math.PI * Math.sqrt(150e-9 * 10e-12)), unit: "MHz", tolerance: 0.02 },
+      hint: "f = 1 / (2π × √(L × C)), in henries and farads.",
+      explanation: "√(150 × 10⁻⁹ × 10 × 10⁻¹²) = 1.225 × 10⁻⁹ s; 2π × that = 7.70 × 10⁻⁹ s; 1 / 7.70 ns ≈ 130 MHz.",
+    },
+    {
+      kind: "check",
+      id: "probe-loading",
+      prompt:
+        "At the far end of a lone lead (Z0 ≈ 351 Ω), the pixel's 5 pF and a probe's 10 pF charge through Z0. About what 10–90 % rise time does that capacitance add?",
+      answer: { value: Math.log(9) * 351 * 15e-12, unit: "ns", tolerance: 0.03 },
+      hint: "τ = Z0 × C with C the total at the far end; rise ≈ 2.2 × τ.",
+      explanation: "τ = 351 Ω × 15 pF = 5.3 ns; 2.2 × 5.3 ns ≈ 11.6 ns.",
+    },
+    {
+      kind: "text",
+      markdown: `
+## Where to probe and what to read
+
+**Probe at the first pixel's data input**, with the ground spring on that pixel's ground pad. That is the waveform the pixel decodes. Probing at the controller shows the near end, which on a series-terminated run sits at half level for a round trip by design (lesson 6) and tells you little about what the pixel receives.
+
+A setup that works for most runs:
+
+1. **Vertical**: 1 V/div, DC coupling, the trace's 0 V a division or two above the bottom of the screen. With a 10:1 probe, make sure the scope knows the probe is 10:1 so its readings are in volts at the tip.
+2. **Trigger**: rising edge on the data channel at about half the swing, normal mode (so the screen holds the last triggered sweep).
+3. **Timebase for bits**: 200 ns/div shows about eight bit slots. Check that every slot has one clean pulse, that 0s and 1s have the widths of lesson 1, and that nothing rings back across a threshold during the lows.
+4. **Timebase for edges**: 5 to 10 ns/div. Measure the **rise time** (10–90 %) with the scope's measurement function or its cursors, and the **overshoot**: the peak minus the level the high settles at.
+5. **Thresholds**: put horizontal cursors at 0.7 × VDD and 0.3 × VDD of the pixel's *measured* supply (3.5 V and 1.5 V for 5.0 V). The margins of lesson 5 are the distances from the waveform to these lines.
+6. **Worst case**: turn on persistence (or infinite persistence) and let the display run for a while with real content: every edge that ever happened stays on screen. A run that looks clean on one sweep may show an occasional ring-back or slow edge that persistence reveals.
+7. **The latch gap**: at 20 to 50 µs/div, check that the gap between frames is at least what the pixel needs (50 µs, or 280 µs for some parts; lesson 1).
+
+## Documenting a run with a scope photo
+
+A scope photo is evidence. An instructor, a client or you in a year's time must be able to read from it what was measured and under what conditions. A good one:
+
+- shows **one rising edge at the first pixel** (or a few bits, if that is the point), big enough to read;
+- has the **timebase and volts per division readable** on screen, and the probe ratio right;
+- shows the **measurement readouts** (rise time, overshoot, or cursor values) on screen;
+- is taken **square-on, in focus, without glare**, or better, saved with the scope's own screenshot function;
+- comes with a **note**: the run's name, cable kind and conductor size, length, resistor, driver, pixel supply as measured, date and place.
+
+Take a second photo of the probing itself: probe tip on the data pad, ground spring on the ground pad. It shows the measurement was made where it should be, with a short ground, and it answers the first question any reviewer will ask about ringing on the screen.
+`,
+    },
+    {
+      kind: "caution",
+      title: "The scope's ground is earth",
+      markdown: `
+A mains-powered bench oscilloscope connects every probe's ground clip to protective earth through its power cord. Clip it only to a point that is at earth potential or floating with respect to earth, normally the negative of a low-voltage supply whose output is isolated. Clipping it to anything else, such as a supply's positive rail in a system that is earthed elsewhere, creates a short circuit through the scope and its earth conductor that can destroy the scope or the supply and start a fire. Never defeat the scope's protective earth to "float" it.
+
+Never probe the mains side of a power supply with an ordinary passive probe. Measurements on mains-connected circuits need instruments and probes rated for the measurement category (see IEC 61010) and are work for qualified, licensed people under local electrical codes.
+`,
+    },
+    {
+      kind: "caution",
+      title: "High-current low-voltage supplies",
+      markdown: `
+The supplies that feed pixel strips can deliver tens of amperes. A probe tip or a loose clip that bridges two adjacent pads can arc, weld or burn. Attach probes with the supply switched off where you can, use insulated tips and the spring ground, keep supply conductors and connectors within their ratings, and keep every feed fused as the supply and strip manufacturers' instructions require. Strips and supplies at full brightness get hot; let them cool before handling. Local electrical codes and the manufacturers' instructions take precedence over this course, and mains wiring belongs to licensed electricians.
+`,
+    },
+    {
+      kind: "text",
+      markdown: `
+## When the bench and the model disagree
+
+They will, a little; that is expected. A few common reasons, roughly in order of how often they explain a difference:
+
+- **The probe and its ground**: ringing at a hundred megahertz or more that the simulator does not show is nearly always the ground lead. Use the spring.
+- **The pixel's supply**: thresholds follow VDD. Measure it at the first pixel, under load, and redo the margins.
+- **The cable is not the catalogue's**: real cables vary; a lone lead's impedance varies with how it was laid (lesson 7).
+- **The driver**: its output resistance and edge time may differ from the course's typical figures. Measure the near-end step on an unloaded output to see its edge.
+- **The pixel's input**: its real switching point sits somewhere in the undefined band (lesson 2); a run with a thin guaranteed margin may work on one batch and not another.
+
+If the measurement is worse than the model, believe the measurement and widen the margins: choose a resistor nearer the middle of the window, a better cable, a 5 V driver, or a differential link.
+
+## Summing up
+
+- Scope rise time ≈ 0.35 / bandwidth; seen rise ≈ √(signal² + scope² + probe²). Use a scope at least three times faster than the edge.
+- A 10:1 passive probe adds about 10 pF (common practice); at the end of a high-impedance lead it visibly slows the edge.
+- A long ground lead rings with the probe capacitance at around 100 MHz; use a short ground spring.
+- Probe at the first pixel's data pad with ground on its ground pad, and read rise time, overshoot, widths and threshold margins.
+- Document with a readable scope photo plus a note, and a photo of the probing.
+- The scope's ground is earth: clip it only where that is safe, never on mains circuits.
+
+## The capstone lab and the bench exercise
+
+The capstone is a small installation: three runs of different cables and lengths from one 3.3 V controller, each needing its own resistor. Every run is graded, and all three must pass. Work each one through the design steps of lesson 7 before you try it.
+
+The bench exercise asks you to document a run properly: a scope photo at the first pixel, the probing photo, and your measured values. Your instructor reviews it against a rubric.
+`,
+    },
+  ],
+  lab,
+  bench,
+} satisfies LessonInput;

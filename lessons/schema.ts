@@ -1,0 +1,352 @@
+import { z } from "zod";
+import { cableKindSchema } from "./cable-kinds";
+import { figureBlockSchema } from "./figures";
+
+const slug = z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, "must be a kebab-case slug");
+const markdown = z.string().trim().min(1);
+const seconds = z.number().positive();
+const volts = z.number().positive().max(12);
+const ohms = z.number().min(0).max(100_000);
+const fraction = z.number().gt(0).lt(1);
+
+/**
+ * A numeric answer: `value` in SI base units, `unit` the mathjs unit the learner is expected to
+ * type in ("ns", "ohm", "pF/m", "V", "Hz", "s"; "" for a plain number). The learner's entry is
+ * evaluated with mathjs, converted to SI and accepted when |entry − value| ≤ tolerance·|value|.
+ */
+export const numericAnswerSchema = z.strictObject({
+  value: z.number().finite(),
+  unit: z.string(),
+  tolerance: z.number().gt(0).max(0.2),
+});
+
+export const textBlockSchema = z.strictObject({ kind: z.literal("text"), markdown });
+export const cautionBlockSchema = z.strictObject({ kind: z.literal("caution"), title: z.string().trim().min(1), markdown });
+export const checkBlockSchema = z.strictObject({
+  kind: z.literal("check"),
+  id: slug,
+  prompt: markdown,
+  answer: numericAnswerSchema,
+  hint: markdown,
+  explanation: markdown,
+});
+
+export const blockSchema = z.union([textBlockSchema, cautionBlockSchema, figureBlockSchema, checkBlockSchema]);
+
+export const driverSchema = z.strictObject({
+  id: slug,
+  label: z.string().trim().min(1),
+  highVoltage: volts,
+  outputResistance: ohms,
+  /** Output resistance while driving low, when it differs from driving high (push-pull asymmetry). */
+  outputResistanceLow: ohms.optional(),
+  edgeTime: seconds,
+});
+
+export const receiverSchema = z.strictObject({
+  supplyVoltage: volts,
+  inputCapacitance: z.number().positive().max(1e-9).optional(),
+  clampDiodes: z.boolean().optional(),
+  highThreshold: fraction.optional(),
+  lowThreshold: fraction.optional(),
+  deglitchTime: z.number().min(0).optional(),
+  minPulse: seconds.optional(),
+  decisionTime: seconds.optional(),
+});
+
+const byteOrder = z.enum(["RGB", "RBG", "GRB", "GBR", "BRG", "BGR"]);
+const channel = z.number().int().min(0).max(255);
+
+export const signalSchema = z.strictObject({
+  pattern: z.union([
+    z.strictObject({ bits: z.string().regex(/^[01]{1,96}$/, "bits must be 1 to 96 characters of 0 and 1") }),
+    z.strictObject({ colours: z.array(z.tuple([channel, channel, channel])).min(1).max(4), byteOrder }),
+  ]),
+  bitPeriod: seconds.optional(),
+  zeroHigh: seconds.optional(),
+  oneHigh: seconds.optional(),
+  leadIn: seconds.optional(),
+  latchGap: seconds.optional(),
+});
+
+/**
+ * One run as the lab author sets it up: the defaults of every field. A variant (lessons/variant.ts)
+ * replaces the fields named in the run's `variant`; the learner's choices replace the fields named
+ * in `choices` (lessons/build-run.ts).
+ */
+export const scenarioSchema = z
+  .strictObject({
+    driver: driverSchema,
+    /** Drivers on offer when the learner chooses the driver. */
+    driverOptions: z.array(driverSchema).min(2).optional(),
+    receiver: receiverSchema,
+    signal: signalSchema,
+    cable: cableKindSchema,
+    /** Cables on offer when the learner chooses the cable. */
+    cableOptions: z.array(cableKindSchema).min(2).optional(),
+    length: z.number().positive().max(100),
+    /** Length range on offer when the learner chooses the length, metres. */
+    lengthRange: z.tuple([z.number().positive(), z.number().positive()]).optional(),
+    /** The resistor fitted when the learner does not choose it; the control's start when they do. */
+    seriesResistance: ohms,
+  })
+  .superRefine((s, ctx) => {
+    if (s.cableOptions && !s.cableOptions.includes(s.cable)) {
+      ctx.addIssue({ code: "custom", path: ["cable"], message: "default cable must be one of cableOptions" });
+    }
+    if (s.driverOptions && !s.driverOptions.some((d) => d.id === s.driver.id)) {
+      ctx.addIssue({ code: "custom", path: ["driver", "id"], message: "default driver must be one of driverOptions" });
+    }
+    if (s.lengthRange && !(s.lengthRange[0] <= s.length && s.length <= s.lengthRange[1])) {
+      ctx.addIssue({ code: "custom", path: ["length"], message: "default length must lie within lengthRange" });
+    }
+  });
+
+const range = (min: z.ZodNumber) =>
+  z
+    .strictObject({ min, max: min, step: z.number().positive() })
+    .refine((r) => r.max >= r.min, { message: "max must not be below min", path: ["max"] });
+
+/** What the learner sets for a run. A field absent here is fixed by the scenario or its variant. */
+export const choiceSpecSchema = z
+  .strictObject({
+    cable: z.literal(true).optional(),
+    seriesResistance: z
+      .strictObject({ series: z.enum(["E12", "E24", "E96"]), min: ohms, max: ohms })
+      .refine((r) => r.max > r.min, { message: "max must exceed min", path: ["max"] })
+      .optional(),
+    driver: z.literal(true).optional(),
+    length: z.strictObject({ step: z.number().positive() }).optional(),
+    timing: z.strictObject({ zeroHigh: range(seconds), oneHigh: range(seconds) }).optional(),
+  })
+  .refine((c) => Object.keys(c).length > 0, { message: "a run must leave at least one choice to the learner" });
+
+/** Which fields differ per learner, and over what. Picked by `labVariant` from a seeded PRNG. */
+export const variantSpecSchema = z.strictObject({
+  length: range(z.number().positive()).optional(),
+  cable: z.array(cableKindSchema).min(2).optional(),
+  driver: z.array(driverSchema).min(2).optional(),
+});
+
+export const runSpecSchema = z
+  .strictObject({
+    id: slug,
+    label: z.string().trim().min(1),
+    scenario: scenarioSchema,
+    choices: choiceSpecSchema,
+    variant: variantSpecSchema,
+  })
+  .superRefine((run, ctx) => {
+    const { scenario, choices, variant } = run;
+    if (choices.cable && !scenario.cableOptions) {
+      ctx.addIssue({ code: "custom", path: ["scenario", "cableOptions"], message: "required when the learner chooses the cable" });
+    }
+    if (choices.driver && !scenario.driverOptions) {
+      ctx.addIssue({ code: "custom", path: ["scenario", "driverOptions"], message: "required when the learner chooses the driver" });
+    }
+    if (choices.length && !scenario.lengthRange) {
+      ctx.addIssue({ code: "custom", path: ["scenario", "lengthRange"], message: "required when the learner chooses the length" });
+    }
+    if (choices.timing && (scenario.signal.zeroHigh === undefined || scenario.signal.oneHigh === undefined)) {
+      ctx.addIssue({ code: "custom", path: ["scenario", "signal"], message: "zeroHigh and oneHigh are required when the learner sets the timing" });
+    }
+    if (choices.cable && variant.cable) {
+      ctx.addIssue({ code: "custom", path: ["variant", "cable"], message: "the cable cannot be both the learner's choice and varied" });
+    }
+    if (choices.driver && variant.driver) {
+      ctx.addIssue({ code: "custom", path: ["variant", "driver"], message: "the driver cannot be both the learner's choice and varied" });
+    }
+    if (choices.length && variant.length) {
+      ctx.addIssue({ code: "custom", path: ["variant", "length"], message: "the length cannot be both the learner's choice and varied" });
+    }
+  });
+
+/** A learner's choices for one run; only the fields the run's choice spec names are allowed. */
+export const runChoicesSchema = z.strictObject({
+  cable: cableKindSchema.optional(),
+  seriesResistance: ohms.optional(),
+  driver: slug.optional(),
+  length: z.number().positive().optional(),
+  zeroHigh: seconds.optional(),
+  oneHigh: seconds.optional(),
+});
+
+export const labQuestionSchema = z.strictObject({ id: slug, prompt: markdown, answer: numericAnswerSchema, hint: markdown });
+
+/**
+ * Applied to every run of an attempt (lessons/pass-rule.ts); a lab passes when every run passes.
+ * maxOvershoot is the far end's highest excursion above the settled high level, as a fraction of
+ * the pixel supply VDD (the simulator's `metrics.overshoot` ÷ supplyVoltage).
+ */
+export const passRuleSchema = z.strictObject({
+  allBitsDecode: z.literal(true),
+  minTimingMargin: z.number().min(0),
+  minVoltageMargin: z.number().min(0),
+  maxOvershoot: z.number().positive().max(1).optional(),
+  maxRiseTime: seconds.optional(),
+  maxClampCurrent: z.number().positive().optional(),
+  /** Fail on ringing that re-crosses a threshold even when the pixel's deglitch filter hides it. */
+  rejectFilteredRinging: z.boolean().optional(),
+  cableSpec: z
+    .strictObject({
+      minZ0: ohms,
+      maxZ0: ohms,
+      maxDelayPerMetre: seconds,
+      maxCapacitancePerMetre: z.number().positive(),
+    })
+    .optional(),
+});
+
+/**
+ * Scoring of one graded attempt (lessons/scoring.ts):
+ * - a passing run scores passBase + (100 − passBase)·m, where m is the mean of the timing and
+ *   voltage margins' progress from the pass rule's minimum (0) to fullMarksMargin (1), clipped to 0..1;
+ * - a failing run scores failCreditMax · (bits decoded correctly ÷ bits sent);
+ * - the runs' score is their minimum (every run counts); lab questions, when present, weigh
+ *   questionShare of the total (100 · correct ÷ asked);
+ * - attempts beyond the first `penaltyPerAttemptBeyond` lose `penalty` points each; never below 0.
+ */
+export const scoringSchema = z
+  .strictObject({
+    fullMarksMargin: z.strictObject({ timing: seconds, voltage: volts }),
+    passBase: z.number().min(0).max(100),
+    failCreditMax: z.number().min(0).max(100),
+    questionShare: z.number().min(0).max(0.5),
+    penaltyPerAttemptBeyond: z.number().int().min(0),
+    penalty: z.number().min(0).max(20),
+  })
+  .refine((s) => s.failCreditMax < s.passBase, { message: "a failing run must score below a passing one", path: ["failCreditMax"] });
+
+/**
+ * Why a mistake fails, in the lesson's terms: ringing through a threshold; an edge too slow for the
+ * pulse (RC); a far end that climbs a staircase and never clears the threshold; a driver level below
+ * the threshold; a pulse timing the decoder misreads; a cable outside the specification; overshoot
+ * beyond the limit or into the clamp diodes.
+ */
+export const mechanismSchema = z.enum(["ringing", "slow-edge", "staircase", "low-level", "timing", "off-spec-cable", "overshoot"]);
+
+/**
+ * The author's worked answer for the default variant (no seed): a solution that passes, and
+ * mistakes that fail for the reason the lesson teaches. Tests run them through the simulator.
+ */
+export const referenceSchema = z.strictObject({
+  solution: z.record(z.string(), runChoicesSchema),
+  mistakes: z
+    .array(z.strictObject({ choices: z.record(z.string(), runChoicesSchema), mechanism: mechanismSchema, explanation: markdown }))
+    .min(1),
+});
+
+export const labSchema = z
+  .strictObject({
+    slug,
+    title: z.string().trim().min(1),
+    brief: markdown,
+    runs: z.array(runSpecSchema).min(1).max(4),
+    questions: z.array(labQuestionSchema).max(4),
+    passRule: passRuleSchema,
+    scoring: scoringSchema,
+    reference: referenceSchema,
+  })
+  .superRefine((lab, ctx) => {
+    const ids = lab.runs.map((r) => r.id);
+    if (new Set(ids).size !== ids.length) ctx.addIssue({ code: "custom", path: ["runs"], message: "run ids must be unique" });
+    if (lab.questions.length === 0 && lab.scoring.questionShare > 0) {
+      ctx.addIssue({ code: "custom", path: ["scoring", "questionShare"], message: "must be 0 when the lab asks no questions" });
+    }
+    const examples = [
+      { path: ["reference", "solution"], choices: lab.reference.solution },
+      ...lab.reference.mistakes.map((m, i) => ({ path: ["reference", "mistakes", i, "choices"], choices: m.choices })),
+    ];
+    for (const { path, choices } of examples) {
+      const keys = Object.keys(choices).sort();
+      if (keys.join() !== [...ids].sort().join()) ctx.addIssue({ code: "custom", path, message: `must give choices for runs ${ids.join(", ")}` });
+    }
+  });
+
+export const benchAskSchema = z.strictObject({
+  id: slug,
+  label: z.string().trim().min(1),
+  kind: z.enum(["cable", "length", "resistor", "riseTime", "overshoot", "text"]),
+  /** mathjs unit the learner types the measured value in; "" for cable and free text. */
+  unit: z.string(),
+});
+
+export const benchExerciseSchema = z.strictObject({
+  slug,
+  title: z.string().trim().min(1),
+  brief: markdown,
+  asks: z.array(benchAskSchema).min(1),
+  photo: z.strictObject({ required: z.boolean(), mustShow: z.array(z.string().trim().min(1)).min(1) }),
+  rubric: z.array(z.strictObject({ id: slug, criterion: z.string().trim().min(1), points: z.number().int().positive() })).min(1),
+});
+
+export const lessonSchema = z
+  .strictObject({
+    slug,
+    number: z.number().int().min(1),
+    title: z.string().trim().min(1),
+    summary: z.string().trim().min(1),
+    minutes: z.number().int().positive().max(240),
+    blocks: z.array(blockSchema).min(1),
+    lab: labSchema.nullable(),
+    bench: benchExerciseSchema.optional(),
+  })
+  .superRefine((lesson, ctx) => {
+    const ids = lesson.blocks.flatMap((b) => (b.kind === "check" ? [b.id] : []));
+    if (ids.length < 3 || ids.length > 6) {
+      ctx.addIssue({ code: "custom", path: ["blocks"], message: `a lesson needs 3 to 6 quick checks, found ${ids.length}` });
+    }
+    if (new Set(ids).size !== ids.length) ctx.addIssue({ code: "custom", path: ["blocks"], message: "check ids must be unique" });
+  });
+
+export const courseSchema = z
+  .strictObject({
+    slug,
+    title: z.string().trim().min(1),
+    summary: z.string().trim().min(1),
+    unlockInOrder: z.boolean(),
+    lessons: z.array(lessonSchema).min(1),
+    completion: z.strictObject({
+      labs: z.array(z.strictObject({ lab: slug, minScore: z.number().min(0).max(100) })),
+      benchExercises: z.array(slug),
+    }),
+  })
+  .superRefine((course, ctx) => {
+    course.lessons.forEach((lesson, i) => {
+      if (lesson.number !== i + 1) ctx.addIssue({ code: "custom", path: ["lessons", i, "number"], message: `expected lesson number ${i + 1}` });
+    });
+    const labs = new Set(course.lessons.flatMap((l) => (l.lab ? [l.lab.slug] : [])));
+    const benches = new Set(course.lessons.flatMap((l) => (l.bench ? [l.bench.slug] : [])));
+    course.completion.labs.forEach((entry, i) => {
+      if (!labs.has(entry.lab)) ctx.addIssue({ code: "custom", path: ["completion", "labs", i, "lab"], message: `no lab "${entry.lab}" in the course` });
+    });
+    course.completion.benchExercises.forEach((slugValue, i) => {
+      if (!benches.has(slugValue)) ctx.addIssue({ code: "custom", path: ["completion", "benchExercises", i], message: `no bench exercise "${slugValue}"` });
+    });
+    const slugs = course.lessons.map((l) => l.slug);
+    if (new Set(slugs).size !== slugs.length) ctx.addIssue({ code: "custom", path: ["lessons"], message: "lesson slugs must be unique" });
+  });
+
+export type NumericAnswer = z.infer<typeof numericAnswerSchema>;
+export type Block = z.infer<typeof blockSchema>;
+export type CheckBlock = z.infer<typeof checkBlockSchema>;
+export type Driver = z.infer<typeof driverSchema>;
+export type Receiver = z.infer<typeof receiverSchema>;
+export type Signal = z.infer<typeof signalSchema>;
+export type Scenario = z.infer<typeof scenarioSchema>;
+export type ChoiceSpec = z.infer<typeof choiceSpecSchema>;
+export type VariantSpec = z.infer<typeof variantSpecSchema>;
+export type RunSpec = z.infer<typeof runSpecSchema>;
+export type RunChoices = z.infer<typeof runChoicesSchema>;
+export type LabQuestion = z.infer<typeof labQuestionSchema>;
+export type PassRule = z.infer<typeof passRuleSchema>;
+export type Scoring = z.infer<typeof scoringSchema>;
+export type Mechanism = z.infer<typeof mechanismSchema>;
+export type Lab = z.infer<typeof labSchema>;
+export type BenchExercise = z.infer<typeof benchExerciseSchema>;
+export type Lesson = z.infer<typeof lessonSchema>;
+export type Course = z.infer<typeof courseSchema>;
+export type LessonInput = z.input<typeof lessonSchema>;
+export type LabInput = z.input<typeof labSchema>;
+export type CourseInput = z.input<typeof courseSchema>;
+export type BenchExerciseInput = z.input<typeof benchExerciseSchema>;
