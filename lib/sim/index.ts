@@ -1,0 +1,17 @@
+export { CABLE_KINDS, cableCatalogue, perMetreFromGeometry, characteristicImpedance, delayPerMetre } from "./cables";
+export type { CableEntry, CableGeometry, CableKind, CoaxGeometry, PerMetre, TwoWireGeometry } from "./cables";
+export { awgDiameter, awgResistancePerMetre, ANNEALED_COPPER_RESISTIVITY } from "./awg";
+export { eSeries, eSeriesValues, E_SERIES_NAMES } from "./e-series";
+export type { ESeriesName } from "./e-series";
+export { colourBits, BYTE_ORDERS } from "./signal";
+export type { ByteOrder, Colour } from "./signal";
+export { simInputSchema, parseSimInput, DEFAULT_DEGLITCH_TIME } from "./schema";
+export type { SimInput, ResolvedSimInput } from "./schema";
+export { SimInputError, SimSolveBudgetError } from "./errors";
+export type { SimInputIssue } from "./errors";
+export { CLAMP_DIODE_MODEL } from "./far-node";
+export { MAX_SOLVER_STEPS } from "./line-solver";
+export { simulateRun } from "./simulate";
+export type { SimBit, SimLine, SimResult, SimulateOptions } from "./simulate";
+export type { RunMetrics } from "./metrics";
+export type { Verdict, VerdictReason } from "./verdict";

@@ -1,0 +1,194 @@
+import { cableCatalogue, characteristicImpedance, delayPerMetre, type PerMetre } from "./cables";
+import { decodeWaveform } from "./decoder";
+import type { DriveSchedule } from "./drive-source";
+import { SimSolveBudgetError } from "./errors";
+import { pinEquilibrium } from "./far-node";
+import { planSolve, solveLine, type LineTotals } from "./line-solver";
+import { measureBitLevels, measureRun, type RunMetrics } from "./metrics";
+import { parseSimInput, type ResolvedSimInput, type SimInput } from "./schema";
+import { bitSlots, colourBits } from "./signal";
+import { judgeVerdict, type Verdict } from "./verdict";
+import { expandRuns, sampleUniform, waveformFromRuns } from "./waveform";
+
+export type SimBit = {
+  sent: 0 | 1;
+  received: "0" | "1" | "x";
+  /** Pulse width at the thresholds (s); null when the slot holds no single complete pulse. */
+  width: number | null;
+  /** Distance from a wrong decision (s), negative when wrong; null when the slot holds no single complete pulse. */
+  timingMargin: number | null;
+  /** The driver's rising edge of this bit (s). */
+  start: number;
+  /** Worst of: peak above the high threshold while high, low threshold minus the ring-back while low (V). */
+  voltageMargin: number;
+};
+
+export type SimLine = { z0: number; delay: number; perMetre: PerMetre; length: number; segments: number; timeStep: number };
+
+export type SimResult = {
+  time: number[];
+  nearEnd: number[];
+  farEnd: number[];
+  full?: { time: Float64Array; nearEnd: Float64Array; farEnd: Float64Array };
+  decoded: string;
+  bits: SimBit[];
+  metrics: RunMetrics;
+  verdict: Verdict;
+  line: SimLine;
+};
+
+export type SimulateOptions = { keepFullResolution?: boolean };
+
+const MAX_DRAWN_POINTS = 4000;
+const MAX_SAMPLED_POINTS = 1_000_000;
+
+/** Rounds an interval up to 1, 2, 2.5 or 5 times a power of ten, so the drawn grid is readable. */
+function niceInterval(raw: number): number {
+  const decade = 10 ** Math.floor(Math.log10(raw));
+  for (const step of [1, 2, 2.5, 5, 10]) {
+    if (step * decade >= raw * (1 - 1e-9)) return step * decade;
+  }
+  return 10 * decade;
+}
+
+const roundTime = (t: number) => Number(t.toPrecision(12));
+const roundVolts = (v: number) => Math.round(v * 1e6) / 1e6;
+
+function lineOf(input: ResolvedSimInput): { perMetre: PerMetre; totals: LineTotals } {
+  const perMetre = input.cable.kind ? cableCatalogue[input.cable.kind].perMetre : (input.cable.perMetre as PerMetre);
+  const length = input.cable.length;
+  return {
+    perMetre,
+    totals: {
+      z0: characteristicImpedance(perMetre),
+      delay: length * delayPerMetre(perMetre),
+      resistance: perMetre.resistance * length,
+      conductance: perMetre.conductance * length,
+      capacitance: perMetre.capacitance * length,
+    },
+  };
+}
+
+function driveSchedule(input: ResolvedSimInput, slots: ReturnType<typeof bitSlots>): DriveSchedule {
+  const edgeStarts = new Float64Array(slots.length * 2);
+  const rising = new Uint8Array(slots.length * 2);
+  slots.forEach((slot, i) => {
+    edgeStarts[2 * i] = slot.start;
+    rising[2 * i] = 1;
+    edgeStarts[2 * i + 1] = slot.fall;
+  });
+  return { edgeStarts, rising, edgeTime: input.driver.edgeTime, highVoltage: input.driver.highVoltage };
+}
+
+/** Simulates one run: waveforms, decoded bits, metrics and verdict. */
+export function simulateRun(input: SimInput | ResolvedSimInput, options: SimulateOptions = {}): SimResult {
+  const resolved = parseSimInput(input);
+  const { driver, receiver, signal } = resolved;
+  const { perMetre, totals } = lineOf(resolved);
+  const bits = signal.bits ?? colourBits(signal.colours ?? [], signal.byteOrder);
+  const slots = bitSlots(bits, signal);
+  const endTime = signal.leadIn + bits.length * signal.bitPeriod + Math.max(signal.latchGap ?? 0, totals.delay + signal.bitPeriod);
+
+  const plan = planSolve(totals, driver.edgeTime, endTime);
+  const resistanceHigh = driver.outputResistance + resolved.seriesResistance;
+  const resistanceLow = (driver.outputResistanceLow ?? driver.outputResistance) + resolved.seriesResistance;
+  const solved = solveLine(
+    plan,
+    totals,
+    driveSchedule(resolved, slots),
+    { high: resistanceHigh, low: resistanceLow },
+    { capacitance: receiver.inputCapacitance, supply: receiver.supplyVoltage, clamps: receiver.clampDiodes },
+  );
+  const far = waveformFromRuns(solved.far, solved.dt, solved.stepCount);
+  const near = waveformFromRuns(solved.near, solved.dt, solved.stepCount);
+
+  const highLevel = receiver.highThreshold * receiver.supplyVoltage;
+  const lowLevel = receiver.lowThreshold * receiver.supplyVoltage;
+  const decoding = decodeWaveform(far, slots, signal.bitPeriod, totals.delay, {
+    highLevel,
+    lowLevel,
+    deglitchTime: receiver.deglitchTime,
+    minPulse: receiver.minPulse,
+    decisionTime: receiver.decisionTime,
+  });
+  const falls = slots.map((slot) => slot.fall);
+  const levels = decoding.bits.map((bit, i) => measureBitLevels(far, bit, falls[i], totals.delay));
+  const settledHigh = pinEquilibrium(
+    driver.highVoltage,
+    1 / Math.max(resistanceHigh + totals.resistance, 1e-3),
+    receiver.supplyVoltage,
+    receiver.clampDiodes,
+  );
+  const metrics = measureRun({
+    wave: far,
+    bits: decoding.bits,
+    falls,
+    levels,
+    delay: totals.delay,
+    settledHigh,
+    supply: receiver.supplyVoltage,
+    highLevel,
+    lowLevel,
+    clampCurrentPeak: solved.clampCurrentPeak,
+  });
+  const verdict = judgeVerdict(decoding, levels, metrics, {
+    highVoltage: driver.highVoltage,
+    sourceResistanceHigh: resistanceHigh,
+    sourceResistanceLow: resistanceLow,
+    z0: totals.z0,
+    delay: totals.delay,
+    cableCapacitance: totals.capacitance,
+    inputCapacitance: receiver.inputCapacitance,
+    supply: receiver.supplyVoltage,
+    highLevel,
+    lowLevel,
+    settledHigh,
+    deglitchTime: receiver.deglitchTime,
+    minPulse: receiver.minPulse,
+    decisionTime: receiver.decisionTime,
+    latchGap: signal.latchGap,
+    falls,
+    clampCurrentPeakTime: solved.clampCurrentPeakTime,
+  });
+
+  const interval = resolved.output.sampleInterval ?? niceInterval(endTime / (MAX_DRAWN_POINTS - 1));
+  const points = Math.floor(endTime / interval + 1e-9) + 1;
+  if (points > MAX_SAMPLED_POINTS) {
+    throw new SimSolveBudgetError(
+      `output.sampleInterval of ${interval} s gives ${points.toLocaleString("en")} points over ${(endTime * 1e6).toPrecision(4)} µs, more than ${MAX_SAMPLED_POINTS.toLocaleString("en")}`,
+    );
+  }
+  const time = Array.from({ length: points }, (_, i) => roundTime(i * interval));
+  const result: SimResult = {
+    time,
+    nearEnd: Array.from(sampleUniform(near, interval, points), roundVolts),
+    farEnd: Array.from(sampleUniform(far, interval, points), roundVolts),
+    decoded: decoding.bits.map((bit) => bit.received).join(""),
+    bits: decoding.bits.map((bit, i) => ({
+      sent: bit.sent,
+      received: bit.received,
+      width: bit.width,
+      timingMargin: bit.timingMargin,
+      start: bit.start,
+      voltageMargin: Math.min(levels[i].highPeak - highLevel, lowLevel - levels[i].lowPeak),
+    })),
+    metrics,
+    verdict,
+    line: {
+      z0: totals.z0,
+      delay: totals.delay,
+      perMetre,
+      length: resolved.cable.length,
+      segments: plan.segments,
+      timeStep: plan.dt,
+    },
+  };
+  if (options.keepFullResolution) {
+    result.full = {
+      time: Float64Array.from({ length: solved.stepCount }, (_, i) => i * solved.dt),
+      nearEnd: expandRuns(solved.near, solved.stepCount),
+      farEnd: expandRuns(solved.far, solved.stepCount),
+    };
+  }
+  return result;
+}
