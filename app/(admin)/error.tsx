@@ -1,7 +1,7 @@
 "use client";
 
-import { ErrorPanel } from "@/components/ui/error-panel";
+import { ErrorScreen } from "@/components/ui/error-screen";
 
 export default function AdminError({ error, retry }: { error: unknown; retry: () => void }) {
-  return <ErrorPanel error={error} retry={retry} what="the school overview" />;
+  return <ErrorScreen error={error} retry={retry} what="the school overview" />;
 }

@@ -8,7 +8,7 @@ export default function AuthLayout({ children }: { children: React.ReactNode }) 
       </header>
       <main className="mx-auto w-full max-w-md flex-1 px-5 py-8">{children}</main>
       <footer className="mx-auto w-full max-w-md px-5 pb-8 text-sm text-ink-faint">
-        Trouble signing in? Your school&apos;s Edgewise admin can send you a new invitation.
+        Accounts are created by your school. Trouble signing in? Ask your school&apos;s Edgewise admin.
       </footer>
     </div>
   );

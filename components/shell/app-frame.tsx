@@ -1,11 +1,23 @@
-import { AppHeader } from "./app-header";
+import { BrandMark } from "@/components/brand/brand-mark";
 import type { SessionUser } from "@/lib/auth/session-store";
+import { AppHeader } from "./app-header";
 
-/** The signed-in frame: header, then the page in a readable column. */
+/**
+ * The page frame: the signed-in header when there is a user, the plain brand bar when not. Pages
+ * and the 403/404 screens render it themselves, so a status screen never sits inside a second frame.
+ */
 export function AppFrame({ user, children }: { user: SessionUser | null; children: React.ReactNode }) {
   return (
     <div className="flex min-h-dvh flex-col">
-      {user ? <AppHeader user={user} /> : null}
+      {user ? (
+        <AppHeader user={user} />
+      ) : (
+        <header className="border-b border-line bg-surface">
+          <div className="mx-auto max-w-6xl px-5 py-3">
+            <BrandMark />
+          </div>
+        </header>
+      )}
       <main className="mx-auto w-full max-w-6xl flex-1 px-5 py-8 sm:py-10">{children}</main>
       <footer className="border-t border-line">
         <p className="mx-auto max-w-6xl px-5 py-5 text-sm text-ink-faint">

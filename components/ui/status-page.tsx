@@ -1,6 +1,4 @@
-import { BrandMark } from "@/components/brand/brand-mark";
-
-/** Full-page message used by the 403, 404 and error screens. */
+/** The body of the 403 and 404 screens: a code, a plain title, what to do next. */
 export function StatusPage({
   code,
   title,
@@ -13,14 +11,11 @@ export function StatusPage({
   actions: React.ReactNode;
 }) {
   return (
-    <main className="mx-auto flex min-h-dvh w-full max-w-xl flex-col justify-center px-5 py-12">
-      <div className="mb-10">
-        <BrandMark />
-      </div>
+    <section className="mx-auto max-w-xl py-6 sm:py-16">
       <p className="font-mono text-sm font-semibold text-copper">{code}</p>
       <h1 className="mt-2 text-3xl font-semibold tracking-tight sm:text-4xl">{title}</h1>
       <div className="mt-4 space-y-3 text-base text-ink-soft">{children}</div>
       <div className="mt-8 flex flex-wrap gap-3">{actions}</div>
-    </main>
+    </section>
   );
 }

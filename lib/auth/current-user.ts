@@ -13,7 +13,7 @@ type CurrentSession = { user: SessionUser; sessionId: string } | null;
 
 /** The signed-in user for this request, looked up once per request however many callers ask. */
 export const getCurrentSession = cache(async (): Promise<CurrentSession> => {
-  const token = await readSessionToken(sessionCookieName());
+  const token = await readSessionToken(sessionCookieName);
   if (!token) return null;
   const result = await validateSessionToken(token);
   if (result.refreshedCookie) {

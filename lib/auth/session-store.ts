@@ -29,11 +29,13 @@ export type SessionCookie = {
   };
 };
 
+export const sessionCookieName = "edgewise_session";
+
 function createLucia() {
   return new Lucia(new DrizzlePostgreSQLAdapter(db, sessions, users), {
     sessionExpiresIn: new TimeSpan(30, "d"),
     sessionCookie: {
-      name: "edgewise_session",
+      name: sessionCookieName,
       attributes: { sameSite: "lax", secure: readAppEnv().APP_URL.startsWith("https:") },
     },
     getUserAttributes: (row): Omit<SessionUser, "id"> => ({
@@ -57,10 +59,6 @@ declare module "lucia" {
 let lucia: ReturnType<typeof createLucia> | undefined;
 function getLucia() {
   return (lucia ??= createLucia());
-}
-
-export function sessionCookieName(): string {
-  return getLucia().sessionCookieName;
 }
 
 export async function createSession(userId: string): Promise<SessionCookie> {

@@ -30,6 +30,17 @@ export class AppError extends Error {
 
 export type ErrorBody = { error: { code: ErrorCode; message: string; fieldErrors?: Record<string, string[]> } };
 
+// Connection refused, database missing or shutting down, too many clients, connection lost.
+const unavailableCodes = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "3D000", "57P01", "57P03", "53300", "08001", "08006"]);
+
+function isServiceOutage(error: unknown): boolean {
+  for (let current = error, depth = 0; current instanceof Error && depth < 4; current = current.cause, depth += 1) {
+    const code = (current as { code?: unknown }).code;
+    if (typeof code === "string" && unavailableCodes.has(code)) return true;
+  }
+  return false;
+}
+
 /** Maps any thrown value to a status and a safe body; logs what the client must not see. */
 export function describeError(error: unknown): { status: number; body: ErrorBody } {
   if (error instanceof AppError) {
@@ -41,5 +52,5 @@ export function describeError(error: unknown): { status: number; body: ErrorBody
     return describeError(new AppError("invalid-input", undefined, fieldErrors as Record<string, string[]>));
   }
   console.error(error);
-  return describeError(new AppError("internal"));
+  return describeError(new AppError(isServiceOutage(error) ? "unavailable" : "internal"));
 }

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { describeError } from "./errors";
 
 // The result a server action hands back to its form: errors are returned, not thrown, and the
 // typed values come back so the form can be refilled.
@@ -42,4 +43,12 @@ export function failedFormState<Field extends string>(
   fieldErrors: Partial<Record<Field, string>> = {},
 ): FormState<Field> {
   return { status: "error", message, fieldErrors, values };
+}
+
+/** For a failure the person cannot fix by editing the form: logged, and answered with a safe sentence. */
+export function unexpectedFormState<Field extends string>(
+  error: unknown,
+  values: Partial<Record<Field, string>>,
+): FormState<Field> {
+  return failedFormState(describeError(error).body.error.message, values);
 }

@@ -5,7 +5,13 @@ import { z } from "zod";
 import { requirePermission } from "@/lib/auth/current-user";
 import { emailSchema } from "@/lib/auth/fields";
 import { issueInvitation } from "@/lib/auth/invitations";
-import { failedFormState, invalidFormState, readFormValues, type FormState } from "@/lib/http/form-state";
+import {
+  failedFormState,
+  invalidFormState,
+  readFormValues,
+  unexpectedFormState,
+  type FormState,
+} from "@/lib/http/form-state";
 
 export type InviteField = "email" | "role" | "cohortId";
 export type InviteState = FormState<InviteField>;
@@ -37,8 +43,7 @@ export async function invitePerson(_previous: InviteState, formData: FormData): 
     }
     if (!result.ok) return failedFormState("That cohort is not part of your school.", values, { cohortId: "Choose a cohort from the list." });
   } catch (error) {
-    console.error("Invitation could not be sent", error);
-    return failedFormState("The invitation could not be e-mailed. Check the mail settings, then send it again.", values);
+    return unexpectedFormState(error, values);
   }
   revalidatePath("/admin");
   return { status: "success", message: `Invitation sent to ${parsed.data.email}.` };

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { AppFrame } from "@/components/shell/app-frame";
 import { Card } from "@/components/ui/card";
 import { formatDayRange, formatMoment } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
@@ -23,7 +24,7 @@ export default async function AdminHomePage() {
   ]);
 
   return (
-    <>
+    <AppFrame user={admin}>
       <PageHeading
         eyebrow="School admin"
         title={school?.name ?? "Your school"}
@@ -106,6 +107,6 @@ export default async function AdminHomePage() {
           </Card>
         </div>
       </div>
-    </>
+    </AppFrame>
   );
 }

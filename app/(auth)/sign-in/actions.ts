@@ -7,8 +7,14 @@ import { readClientAddress } from "@/lib/auth/client-address";
 import { emailSchema } from "@/lib/auth/fields";
 import { homePathFor } from "@/lib/auth/permissions";
 import { writeSessionCookie } from "@/lib/auth/session-cookie";
-import { signInWithPassword } from "@/lib/auth/sign-in";
-import { failedFormState, invalidFormState, readFormValues, type FormState } from "@/lib/http/form-state";
+import { signInWithPassword, type SignInResult } from "@/lib/auth/sign-in";
+import {
+  failedFormState,
+  invalidFormState,
+  readFormValues,
+  unexpectedFormState,
+  type FormState,
+} from "@/lib/http/form-state";
 
 export type SignInField = "email" | "password" | "next";
 export type SignInState = FormState<SignInField>;
@@ -24,11 +30,16 @@ export async function signIn(_previous: SignInState, formData: FormData): Promis
   const parsed = signInSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return invalidFormState(parsed.error, values);
 
-  const result = await signInWithPassword({
-    email: parsed.data.email,
-    password: parsed.data.password,
-    clientAddress: await readClientAddress(),
-  });
+  let result: SignInResult;
+  try {
+    result = await signInWithPassword({
+      email: parsed.data.email,
+      password: parsed.data.password,
+      clientAddress: await readClientAddress(),
+    });
+  } catch (error) {
+    return unexpectedFormState(error, values);
+  }
   if (!result.ok && result.reason === "throttled") {
     const minutes = result.retryAfterMinutes;
     return failedFormState(`Too many attempts. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`, values);

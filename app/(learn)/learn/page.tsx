@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { AppFrame } from "@/components/shell/app-frame";
 import { Card } from "@/components/ui/card";
 import { formatDayRange } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
@@ -13,7 +14,7 @@ export default async function LearnerHomePage() {
   const firstName = user.name.split(/\s+/)[0];
 
   return (
-    <>
+    <AppFrame user={user}>
       <PageHeading
         eyebrow="Your course"
         title={`Welcome, ${firstName}`}
@@ -49,6 +50,6 @@ export default async function LearnerHomePage() {
           )}
         </Card>
       </div>
-    </>
+    </AppFrame>
   );
 }

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { AppFrame } from "@/components/shell/app-frame";
 import { Card } from "@/components/ui/card";
 import { formatDayRange } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
@@ -13,7 +14,7 @@ export default async function InstructorHomePage() {
   const cohorts = await listCohortsByMember({ userId: user.id, role: "instructor" });
 
   return (
-    <>
+    <AppFrame user={user}>
       <PageHeading
         eyebrow="Teaching"
         title="My cohorts"
@@ -41,6 +42,6 @@ export default async function InstructorHomePage() {
           ))}
         </ul>
       )}
-    </>
+    </AppFrame>
   );
 }

@@ -3,10 +3,16 @@
 import { redirect } from "next/navigation";
 import { z } from "zod";
 import { newPasswordSchema, personNameSchema, tokenSchema, withMatchingPasswords } from "@/lib/auth/fields";
-import { acceptInvitation } from "@/lib/auth/invitations";
+import { acceptInvitation, type AcceptInvitationResult } from "@/lib/auth/invitations";
 import { homePathFor } from "@/lib/auth/permissions";
 import { writeSessionCookie } from "@/lib/auth/session-cookie";
-import { failedFormState, invalidFormState, readFormValues, type FormState } from "@/lib/http/form-state";
+import {
+  failedFormState,
+  invalidFormState,
+  readFormValues,
+  unexpectedFormState,
+  type FormState,
+} from "@/lib/http/form-state";
 import { invitationProblems } from "../../link-problems";
 
 export type AcceptInvitationField = "token" | "name" | "password" | "confirmPassword";
@@ -29,7 +35,12 @@ export async function acceptInvitationAction(
   const parsed = acceptSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return invalidFormState(parsed.error, values);
 
-  const result = await acceptInvitation(parsed.data);
+  let result: AcceptInvitationResult;
+  try {
+    result = await acceptInvitation(parsed.data);
+  } catch (error) {
+    return unexpectedFormState(error, values);
+  }
   if (!result.ok) return failedFormState(invitationProblems[result.reason], values);
   await writeSessionCookie(result.cookie);
   redirect(homePathFor(result.role));

@@ -3,10 +3,16 @@
 import { redirect } from "next/navigation";
 import { z } from "zod";
 import { newPasswordSchema, tokenSchema, withMatchingPasswords } from "@/lib/auth/fields";
-import { completePasswordReset } from "@/lib/auth/password-reset";
+import { completePasswordReset, type CompletePasswordResetResult } from "@/lib/auth/password-reset";
 import { homePathFor } from "@/lib/auth/permissions";
 import { writeSessionCookie } from "@/lib/auth/session-cookie";
-import { failedFormState, invalidFormState, readFormValues, type FormState } from "@/lib/http/form-state";
+import {
+  failedFormState,
+  invalidFormState,
+  readFormValues,
+  unexpectedFormState,
+  type FormState,
+} from "@/lib/http/form-state";
 import { passwordResetProblems } from "../../link-problems";
 
 export type CompleteResetField = "token" | "password" | "confirmPassword";
@@ -28,7 +34,12 @@ export async function completePasswordResetAction(
   const parsed = completeSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return invalidFormState(parsed.error, values);
 
-  const result = await completePasswordReset({ token: parsed.data.token, password: parsed.data.password });
+  let result: CompletePasswordResetResult;
+  try {
+    result = await completePasswordReset({ token: parsed.data.token, password: parsed.data.password });
+  } catch (error) {
+    return unexpectedFormState(error, values);
+  }
   if (!result.ok) return failedFormState(passwordResetProblems[result.reason], values);
   await writeSessionCookie(result.cookie);
   redirect(homePathFor(result.role));

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
+import { AppFrame } from "@/components/shell/app-frame";
 import { Card } from "@/components/ui/card";
 import { formatDayRange } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
@@ -21,7 +22,7 @@ export default async function CohortPage({ params }: { params: Promise<{ cohortI
   const learners = await listCohortMembers({ cohortId: cohort.id, role: "learner" });
 
   return (
-    <>
+    <AppFrame user={user}>
       <p className="mb-4 text-sm">
         <Link href="/cohorts" className="font-medium text-accent underline-offset-2 hover:underline">
           ← My cohorts
@@ -46,6 +47,6 @@ export default async function CohortPage({ params }: { params: Promise<{ cohortI
           Lesson progress and lab verdicts appear here once the course is published.
         </p>
       </Card>
-    </>
+    </AppFrame>
   );
 }
