@@ -16,7 +16,7 @@ export const CLAMP_DIODE_MODEL = {
 const IS = CLAMP_DIODE_MODEL.saturationCurrent;
 const VT = CLAMP_DIODE_MODEL.thermalVoltage * CLAMP_DIODE_MODEL.emissionCoefficient;
 /** Within this distance outside the rails a clamp carries under 1 nA: treated as open. */
-const NEGLIGIBLE_CONDUCTION = 0.3;
+export const NEGLIGIBLE_CONDUCTION = 0.3;
 const EXP_LIMIT = 40;
 const EXP_AT_LIMIT = Math.exp(EXP_LIMIT);
 
@@ -36,25 +36,25 @@ export function clampCurrent(v: number, supply: number): number {
  * answer (usually a few millivolts away) and a shrinking bracket with bisection catches any
  * step that leaves it.
  */
-function solveClamped(conductance: number, injected: number, supply: number, guess: number): number {
+export function solveClamped(conductance: number, injected: number, supply: number, guess: number): number {
   const open = injected / conductance;
   const above = open > supply;
   let low = above ? supply : open;
   let high = above ? open : 0;
   let v = guess > low && guess < high ? guess : open;
+  // Only the clamp on the conducting side matters: the other carries at most Is.
+  const rail = above ? supply : 0;
+  const sign = above ? 1 : -1;
   for (let iteration = 0; iteration < 60; iteration += 1) {
-    const xUp = (v - supply) / VT;
-    const xDown = -v / VT;
-    const expUp = xUp < EXP_LIMIT ? Math.exp(xUp) : EXP_AT_LIMIT * (1 + xUp - EXP_LIMIT);
-    const expDown = xDown < EXP_LIMIT ? Math.exp(xDown) : EXP_AT_LIMIT * (1 + xDown - EXP_LIMIT);
-    const residual = conductance * v - injected + IS * (expUp - expDown);
+    const x = (sign * (v - rail)) / VT;
+    const exponential = x < EXP_LIMIT ? Math.exp(x) : EXP_AT_LIMIT * (1 + x - EXP_LIMIT);
+    const residual = conductance * v - injected + sign * IS * (exponential - 1);
     if (residual > 0) high = v;
     else low = v;
-    const slope =
-      conductance + (IS / VT) * ((xUp < EXP_LIMIT ? expUp : EXP_AT_LIMIT) + (xDown < EXP_LIMIT ? expDown : EXP_AT_LIMIT));
+    const slope = conductance + (IS / VT) * (x < EXP_LIMIT ? exponential : EXP_AT_LIMIT);
     let next = v - residual / slope;
     if (!(next >= low && next <= high)) next = 0.5 * (low + high);
-    if (Math.abs(next - v) < 1e-9) return next;
+    if (Math.abs(next - v) < 1e-8) return next;
     v = next;
   }
   return v;

@@ -1,7 +1,7 @@
 import { DriveSource, type DriveSchedule } from "./drive-source";
 import { SimSolveBudgetError } from "./errors";
-import { FarNode, pinEquilibrium } from "./far-node";
-import { RunHistory, WaveChunk } from "./runs";
+import { clampCurrent, FarNode, NEGLIGIBLE_CONDUCTION, pinEquilibrium, solveClamped } from "./far-node";
+import { RUN_TOLERANCE, RunHistory, WaveChunk } from "./runs";
 
 /**
  * Transient solution of driver → series resistor → lossy line → pixel input by the method of
@@ -187,67 +187,217 @@ function dcState(
   return { level, forward, backward, near: portVoltage + endResistance * sourceCurrent, pin };
 }
 
-function solveDistributed(
-  plan: SolverPlan,
-  line: LineTotals,
-  drive: DriveSchedule,
-  resistances: DriverResistances,
-  receiver: ReceiverLoad,
-): SolveOutput {
-  const { dt, stepCount, segments, stepsPerSegment: m } = plan;
-  const z0 = line.z0;
-  const endResistance = line.resistance / (2 * segments);
-  const endConductance = line.conductance / (2 * segments);
-  const junctionResistance = line.resistance / segments;
-  const junctionConductance = line.conductance / segments;
+/**
+ * The distributed line, advanced one segment delay (a "chunk" of m steps) at a time: within a
+ * chunk every node reads only what the other nodes wrote in the previous chunk, so each node
+ * runs through its chunk alone, over runs of constant input rather than over single steps.
+ * The hot loops keep their state in locals and write the typed arrays directly.
+ */
+class DistributedLine {
+  private readonly m: number;
+  private readonly segments: number;
+  private readonly z0: number;
+  private readonly endResistance: number;
+  private readonly theveninScale: number;
+  private readonly theveninConductance: number;
+  private readonly junctionArm: number;
+  private readonly junctionDivider: number;
+  private readonly forward: Stream[];
+  private readonly backward: Stream[];
+  readonly near: RunHistory;
+  readonly far: RunHistory;
 
-  const source = new DriveSource(drive, dt);
-  const near = new RunHistory();
-  const far = new RunHistory();
-  const node = new FarNode(receiver.capacitance, dt, receiver.supply, receiver.clamps);
-  const high = nearEndCoefficients(resistances.high, endResistance, endConductance, z0);
-  const low = nearEndCoefficients(resistances.low, endResistance, endConductance, z0);
-  const forward: Stream[] = Array.from({ length: segments }, () => makeStream(m + 1));
-  const backward: Stream[] = Array.from({ length: segments }, () => makeStream(m + 1));
-  const streams = [...forward, ...backward];
+  private readonly rampStart: Int32Array;
+  private readonly rampEnd: Int32Array;
+  private readonly edgeStart: Float64Array;
+  private readonly rising: Uint8Array;
+  private cursor = 0;
+  private readonly high: ReturnType<typeof nearEndCoefficients>;
+  private readonly low: ReturnType<typeof nearEndCoefficients>;
 
-  const theveninScale = 1 / (1 + endConductance * z0);
-  const theveninConductance = 1 / (endResistance + z0 * theveninScale);
-  const junctionArm = z0 + junctionResistance / 2;
-  const junctionDivider = 1 / (2 + junctionConductance * junctionArm);
+  private readonly capacitiveConductance: number;
+  private readonly historyWeight1: number;
+  private readonly historyWeight2: number;
+  private readonly safeLow: number;
+  private readonly safeHigh: number;
+  private v1 = 0;
+  private v2 = 0;
+  private held = false;
+  private heldInput = 0;
+  private heldOutput = 0;
+  clampCurrentPeak = 0;
+  clampCurrentPeakTime = 0;
 
-  let clampCurrentPeak = 0;
-  let clampCurrentPeakTime = 0;
+  constructor(
+    private readonly plan: SolverPlan,
+    line: LineTotals,
+    private readonly drive: DriveSchedule,
+    resistances: DriverResistances,
+    private readonly receiver: ReceiverLoad,
+  ) {
+    const { segments, stepsPerSegment: m, dt } = plan;
+    this.m = m;
+    this.segments = segments;
+    this.z0 = line.z0;
+    this.endResistance = line.resistance / (2 * segments);
+    const endConductance = line.conductance / (2 * segments);
+    const junctionResistance = line.resistance / segments;
+    const junctionConductance = line.conductance / segments;
+    this.theveninScale = 1 / (1 + endConductance * this.z0);
+    this.theveninConductance = 1 / (this.endResistance + this.z0 * this.theveninScale);
+    this.junctionArm = this.z0 + junctionResistance / 2;
+    this.junctionDivider = 1 / (2 + junctionConductance * this.junctionArm);
+    this.forward = Array.from({ length: segments }, () => makeStream(m + 1));
+    this.backward = Array.from({ length: segments }, () => makeStream(m + 1));
+    const initialRuns = Math.min(1 << 18, Math.max(1024, plan.stepCount >> 4));
+    this.near = new RunHistory(initialRuns);
+    this.far = new RunHistory(initialRuns);
 
-  const processNearEnd = (start: number, incoming: WaveChunk, out: WaveChunk) => {
+    const edges = drive.edgeStarts.length;
+    this.edgeStart = drive.edgeStarts;
+    this.rising = drive.rising;
+    this.rampStart = new Int32Array(edges);
+    this.rampEnd = new Int32Array(edges);
+    for (let k = 0; k < edges; k += 1) {
+      this.rampStart[k] = Math.ceil(drive.edgeStarts[k] / dt - 1e-9);
+      this.rampEnd[k] = Math.ceil((drive.edgeStarts[k] + drive.edgeTime) / dt - 1e-9);
+    }
+    this.high = nearEndCoefficients(resistances.high, this.endResistance, endConductance, this.z0);
+    this.low = nearEndCoefficients(resistances.low, this.endResistance, endConductance, this.z0);
+
+    this.capacitiveConductance = (3 * receiver.capacitance) / (2 * dt);
+    this.historyWeight1 = (2 * receiver.capacitance) / dt;
+    this.historyWeight2 = receiver.capacitance / (2 * dt);
+    this.safeLow = receiver.clamps ? -NEGLIGIBLE_CONDUCTION : -Infinity;
+    this.safeHigh = receiver.clamps ? receiver.supply + NEGLIGIBLE_CONDUCTION : Infinity;
+
+    const dc = (level: number, sourceResistance: number) =>
+      dcState(level, sourceResistance, segments, this.z0, this.endResistance, endConductance, junctionResistance, junctionConductance, receiver);
+    this.dcHigh = dc(drive.highVoltage, resistances.high);
+    this.dcLow = dc(0, resistances.low);
+  }
+
+  private readonly dcHigh: DcState;
+  private readonly dcLow: DcState;
+
+  run(): void {
+    const { m, segments, forward, backward, plan } = this;
+    const streams = [...forward, ...backward];
+    let chunk = 0;
+    while (chunk * m < plan.stepCount) {
+      const start = chunk * m;
+      this.near.reserve(m + 2);
+      this.far.reserve(m + 2);
+      this.nearEnd(start, backward[0].read, forward[0].write);
+      for (let j = 1; j < segments; j += 1) {
+        this.junction(forward[j - 1].read, backward[j].read, backward[j - 1].write, forward[j].write);
+      }
+      this.farEnd(start, forward[segments - 1].read, backward[segments - 1].write);
+      for (const stream of streams) {
+        const written = stream.write;
+        stream.write = stream.read;
+        stream.read = written;
+        stream.write.count = 0;
+      }
+      chunk += 1;
+      chunk = this.skipWhileQuiet(chunk);
+    }
+  }
+
+  /** Index of the first edge not finished at `step`, from the cursor on. */
+  private edgeAt(step: number): number {
+    let k = this.cursor;
+    while (k < this.rampEnd.length && this.rampEnd[k] <= step) k += 1;
+    this.cursor = k;
+    return k;
+  }
+
+  /** When the whole line sits at the DC state of a flat drive, set it there and jump to the next edge. */
+  private skipWhileQuiet(chunk: number): number {
+    const next = chunk * this.m;
+    const k = this.edgeAt(next);
+    const edges = this.rampStart.length;
+    if (k < edges && this.rampStart[k] <= next) return chunk;
+    const state = k > 0 && this.rising[k - 1] ? this.dcHigh : this.dcLow;
+    if (Math.abs(this.v1 - state.pin) > QUIET_BAND || Math.abs(this.v2 - state.pin) > QUIET_BAND) return chunk;
+    for (let j = 0; j < this.segments; j += 1) {
+      if (!this.forward[j].read.isNear(state.forward[j], QUIET_BAND)) return chunk;
+      if (!this.backward[j].read.isNear(state.backward[j], QUIET_BAND)) return chunk;
+    }
+    for (let j = 0; j < this.segments; j += 1) {
+      this.forward[j].read.fillConstant(state.forward[j]);
+      this.backward[j].read.fillConstant(state.backward[j]);
+    }
+    this.v1 = state.pin;
+    this.v2 = state.pin;
+    this.held = false;
+    this.near.push(next, state.near);
+    this.far.push(next, state.pin);
+    const nextEdge = k < edges ? this.rampStart[k] : Number.MAX_SAFE_INTEGER;
+    return Math.max(chunk, Math.floor(nextEdge / this.m));
+  }
+
+  private nearEnd(start: number, incoming: WaveChunk, out: WaveChunk): void {
+    const { m, rampStart, rampEnd, rising, edgeStart, high, low } = this;
+    const dt = this.plan.dt;
+    const edgeTime = this.drive.edgeTime;
+    const highVoltage = this.drive.highVoltage;
+    const edges = rampStart.length;
+    const inOffsets = incoming.offsets;
+    const inValues = incoming.values;
+    const inCount = incoming.count;
+    const outOffsets = out.offsets;
+    const outValues = out.values;
+    let outCount = out.count;
+    const history = this.near;
+    const historySteps = history.steps;
+    const historyValues = history.values;
+    let historyCount = history.count;
+    let k = this.cursor;
     const end = start + m;
     let run = 0;
     let step = start;
     while (step < end) {
-      const runEnd = start + (run + 1 < incoming.count ? incoming.offsets[run + 1] : m);
-      const arriving = incoming.values[run];
-      source.seek(step);
-      const c = source.drivingHigh(step) ? high : low;
-      if (source.inRamp(step)) {
-        const stop = Math.min(source.rampEnd(), runEnd);
-        for (; step < stop; step += 1) {
-          const drive = source.rampValue(step);
-          const port = c.fromSource * drive + c.fromLine * arriving;
-          out.push(step - start, 2 * port - arriving);
-          near.push(step, port + c.sourceShare * (drive - port));
+      const runEnd = start + (run + 1 < inCount ? inOffsets[run + 1] : m);
+      const arriving = inValues[run];
+      while (k < edges && rampEnd[k] <= step) k += 1;
+      const ramping = k < edges && rampStart[k] <= step;
+      const up = ramping ? rising[k] === 1 : k > 0 && rising[k - 1] === 1;
+      const c = up ? high : low;
+      // A flat drive and a constant arriving wave give one output for the whole stretch.
+      const stop = ramping ? Math.min(rampEnd[k], runEnd) : step + 1;
+      const resume = ramping ? stop : Math.min(k < edges ? rampStart[k] : runEnd, runEnd);
+      const rampOrigin = ramping ? edgeStart[k] : 0;
+      for (; step < stop; step += 1) {
+        let drive = up ? highVoltage : 0;
+        if (ramping) {
+          const progress = Math.min(1, Math.max(0, (step * dt - rampOrigin) / edgeTime));
+          drive = up ? highVoltage * progress : highVoltage * (1 - progress);
         }
-      } else {
-        const drive = source.level();
         const port = c.fromSource * drive + c.fromLine * arriving;
-        out.push(step - start, 2 * port - arriving);
-        near.push(step, port + c.sourceShare * (drive - port));
-        step = Math.min(source.nextChange(), runEnd);
+        const wave = 2 * port - arriving;
+        if (outCount === 0 || wave !== outValues[outCount - 1]) {
+          outOffsets[outCount] = step - start;
+          outValues[outCount] = wave;
+          outCount += 1;
+        }
+        const nearVoltage = port + c.sourceShare * (drive - port);
+        if (historyCount === 0 || Math.abs(nearVoltage - historyValues[historyCount - 1]) > RUN_TOLERANCE) {
+          historySteps[historyCount] = step;
+          historyValues[historyCount] = nearVoltage;
+          historyCount += 1;
+        }
       }
+      step = resume;
       if (step >= runEnd) run += 1;
     }
-  };
+    out.count = outCount;
+    history.count = historyCount;
+    this.cursor = k;
+  }
 
-  const processJunction = (fromLeft: WaveChunk, fromRight: WaveChunk, toLeft: WaveChunk, toRight: WaveChunk) => {
+  private junction(fromLeft: WaveChunk, fromRight: WaveChunk, toLeft: WaveChunk, toRight: WaveChunk): void {
+    const { m, z0, junctionArm, junctionDivider } = this;
     let left = 0;
     let right = 0;
     let offset = 0;
@@ -263,40 +413,79 @@ function solveDistributed(
       if (offset >= leftEnd) left += 1;
       if (offset >= rightEnd) right += 1;
     }
-  };
+  }
 
-  let held = false;
-  let heldInput = 0;
-  let heldOutput = 0;
+  private farEnd(start: number, incoming: WaveChunk, out: WaveChunk): void {
+    const { m, endResistance, theveninScale, theveninConductance, safeLow, safeHigh } = this;
+    const dt = this.plan.dt;
+    const supply = this.receiver.supply;
+    const clamps = this.receiver.clamps;
+    const total = theveninConductance + this.capacitiveConductance;
+    const weight1 = this.historyWeight1;
+    const weight2 = this.historyWeight2;
+    const inOffsets = incoming.offsets;
+    const inValues = incoming.values;
+    const inCount = incoming.count;
+    const outOffsets = out.offsets;
+    const outValues = out.values;
+    let outCount = out.count;
+    const history = this.far;
+    const historySteps = history.steps;
+    const historyValues = history.values;
+    let historyCount = history.count;
+    let v1 = this.v1;
+    let v2 = this.v2;
+    let held = this.held;
+    let heldInput = this.heldInput;
+    let heldOutput = this.heldOutput;
 
-  const processFarEnd = (start: number, incoming: WaveChunk, out: WaveChunk) => {
-    for (let run = 0; run < incoming.count; run += 1) {
-      const runStart = start + incoming.offsets[run];
-      const runEnd = start + (run + 1 < incoming.count ? incoming.offsets[run + 1] : m);
-      const arriving = incoming.values[run];
+    for (let run = 0; run < inCount; run += 1) {
+      const runStart = start + inOffsets[run];
+      const runEnd = start + (run + 1 < inCount ? inOffsets[run + 1] : m);
+      const arriving = inValues[run];
       if (held && Math.abs(arriving - heldInput) <= INPUT_DEADBAND) {
-        out.push(runStart - start, heldOutput);
+        if (outCount === 0 || heldOutput !== outValues[outCount - 1]) {
+          outOffsets[outCount] = runStart - start;
+          outValues[outCount] = heldOutput;
+          outCount += 1;
+        }
         continue;
       }
       held = false;
       const thevenin = arriving * theveninScale;
+      const driven = theveninConductance * thevenin;
       let equilibrium = Number.NaN;
       let previous = Number.NaN;
       for (let step = runStart; step < runEnd; step += 1) {
-        const v = node.step(thevenin, theveninConductance);
-        const current = Math.abs(node.current);
-        if (current > clampCurrentPeak) {
-          clampCurrentPeak = current;
-          clampCurrentPeakTime = step * dt;
+        const injected = driven + weight1 * v1 - weight2 * v2;
+        let v = injected / total;
+        if (v > safeHigh || v < safeLow) {
+          v = solveClamped(total, injected, supply, v1);
+          const current = Math.abs(clampCurrent(v, supply));
+          if (current > this.clampCurrentPeak) {
+            this.clampCurrentPeak = current;
+            this.clampCurrentPeakTime = step * dt;
+          }
         }
+        v2 = v1;
+        v1 = v;
         const port = v + endResistance * (thevenin - v) * theveninConductance;
         const wave = 2 * port - arriving;
-        out.push(step - start, wave);
-        far.push(step, v);
+        if (outCount === 0 || wave !== outValues[outCount - 1]) {
+          outOffsets[outCount] = step - start;
+          outValues[outCount] = wave;
+          outCount += 1;
+        }
+        if (historyCount === 0 || Math.abs(v - historyValues[historyCount - 1]) > RUN_TOLERANCE) {
+          historySteps[historyCount] = step;
+          historyValues[historyCount] = v;
+          historyCount += 1;
+        }
         if (Math.abs(v - previous) <= SETTLED_TOLERANCE) {
-          if (Number.isNaN(equilibrium)) equilibrium = node.equilibrium(thevenin, theveninConductance);
-          if (node.isSettledAt(equilibrium, SETTLED_TOLERANCE)) {
-            node.holdAt(equilibrium);
+          if (Number.isNaN(equilibrium)) equilibrium = pinEquilibrium(thevenin, theveninConductance, supply, clamps);
+          if (Math.abs(v1 - equilibrium) <= SETTLED_TOLERANCE && Math.abs(v2 - equilibrium) <= SETTLED_TOLERANCE) {
+            v1 = equilibrium;
+            v2 = equilibrium;
             held = true;
             heldInput = arriving;
             heldOutput = wave;
@@ -306,61 +495,33 @@ function solveDistributed(
         previous = v;
       }
     }
-  };
-
-  const dc = (level: number, sourceResistance: number) =>
-    dcState(level, sourceResistance, segments, z0, endResistance, endConductance, junctionResistance, junctionConductance, receiver);
-  const dcHigh = dc(drive.highVoltage, resistances.high);
-  const dcLow = dc(0, resistances.low);
-
-  const isQuiet = (state: DcState) => {
-    if (!node.isSettledAt(state.pin, QUIET_BAND)) return false;
-    for (let j = 0; j < segments; j += 1) {
-      if (!forward[j].read.isNear(state.forward[j], QUIET_BAND)) return false;
-      if (!backward[j].read.isNear(state.backward[j], QUIET_BAND)) return false;
-    }
-    return true;
-  };
-
-  const settleTo = (state: DcState, step: number) => {
-    for (let j = 0; j < segments; j += 1) {
-      forward[j].read.fillConstant(state.forward[j]);
-      backward[j].read.fillConstant(state.backward[j]);
-    }
-    node.holdAt(state.pin);
-    held = false;
-    near.push(step, state.near);
-    far.push(step, state.pin);
-  };
-
-  let chunk = 0;
-  while (chunk * m < stepCount) {
-    const start = chunk * m;
-    processNearEnd(start, backward[0].read, forward[0].write);
-    for (let j = 1; j < segments; j += 1) {
-      processJunction(forward[j - 1].read, backward[j].read, backward[j - 1].write, forward[j].write);
-    }
-    processFarEnd(start, forward[segments - 1].read, backward[segments - 1].write);
-    for (const stream of streams) {
-      const written = stream.write;
-      stream.write = stream.read;
-      stream.read = written;
-      stream.write.count = 0;
-    }
-    chunk += 1;
-
-    const next = chunk * m;
-    source.seek(next);
-    if (!source.inRamp(next)) {
-      const state = source.drivingHigh(next) ? dcHigh : dcLow;
-      if (state.level === source.level() && isQuiet(state)) {
-        settleTo(state, next);
-        chunk = Math.max(chunk, Math.floor(source.nextChange() / m));
-      }
-    }
+    out.count = outCount;
+    history.count = historyCount;
+    this.v1 = v1;
+    this.v2 = v2;
+    this.held = held;
+    this.heldInput = heldInput;
+    this.heldOutput = heldOutput;
   }
+}
 
-  return { dt, stepCount, near, far, clampCurrentPeak, clampCurrentPeakTime };
+function solveDistributed(
+  plan: SolverPlan,
+  line: LineTotals,
+  drive: DriveSchedule,
+  resistances: DriverResistances,
+  receiver: ReceiverLoad,
+): SolveOutput {
+  const solver = new DistributedLine(plan, line, drive, resistances, receiver);
+  solver.run();
+  return {
+    dt: plan.dt,
+    stepCount: plan.stepCount,
+    near: solver.near,
+    far: solver.far,
+    clampCurrentPeak: solver.clampCurrentPeak,
+    clampCurrentPeakTime: solver.clampCurrentPeakTime,
+  };
 }
 
 /** A line with (almost) no delay: its resistance in series, its capacitance at the pin. */

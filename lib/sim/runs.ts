@@ -60,6 +60,11 @@ export class RunHistory {
     this.count = count + 1;
   }
 
+  /** Makes room for `extra` more runs, so that a caller may write them directly. */
+  reserve(extra: number): void {
+    while (this.count + extra > this.steps.length) this.grow();
+  }
+
   private grow(): void {
     const steps = new Int32Array(this.steps.length * 2);
     const values = new Float64Array(this.values.length * 2);
