@@ -16,7 +16,7 @@ function tracePath(response: (t: number) => number): string {
   return points.join(" ");
 }
 
-const ringing = tracePath((t) => 1 - Math.exp(-t * 1.1) * Math.cos(t * 11));
+const ringing = tracePath((t) => 1 - Math.exp(-t * 0.8) * Math.cos(t * 11));
 const damped = tracePath((t) => 1 - Math.exp(-t * 6) * (1 + t * 6));
 
 export function EdgeSketch() {
