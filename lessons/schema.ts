@@ -31,7 +31,7 @@ export const checkBlockSchema = z.strictObject({
   explanation: markdown,
 });
 
-export const blockSchema = z.union([textBlockSchema, cautionBlockSchema, figureBlockSchema, checkBlockSchema]);
+export const blockSchema = z.discriminatedUnion("kind", [textBlockSchema, cautionBlockSchema, figureBlockSchema, checkBlockSchema]);
 
 export const driverSchema = z.strictObject({
   id: slug,

@@ -12,13 +12,21 @@ export interface LabVariant {
   runs: RunVariant[];
 }
 
-/** FNV-1a, 32 bit: spreads any seed string over the PRNG's state. */
+/**
+ * FNV-1a over the seed string, then the murmur3 finaliser: seeds that differ in one character
+ * (learner-1, learner-2) must land far apart in the PRNG's state, which FNV alone does not ensure.
+ */
 function hashSeed(text: string): number {
   let hash = 0x811c9dc5;
   for (let i = 0; i < text.length; i += 1) {
     hash ^= text.charCodeAt(i);
     hash = Math.imul(hash, 0x01000193);
   }
+  hash ^= hash >>> 16;
+  hash = Math.imul(hash, 0x85ebca6b);
+  hash ^= hash >>> 13;
+  hash = Math.imul(hash, 0xc2b2ae35);
+  hash ^= hash >>> 16;
   return hash >>> 0;
 }
 

@@ -160,6 +160,13 @@ So the resistor trades edge speed for protection. In this lesson's lab you find 
 `,
     },
     {
+      kind: "caution",
+      title: "An unpowered strip is not always dead",
+      markdown: `
+Back-powering works both ways: a strip whose supply is switched off can still be partly alive through its data input, and a strip whose supply is on carries enough current to burn a careless connection. Before changing wiring, disconnect the strip's supply and the data lead. Low-voltage DC at high current can start fires: keep every supply feed fused as the supply and strip manufacturers' instructions require. Any work on the mains side of the power supplies is for a licensed electrician, and local electrical codes and the manufacturers' instructions take precedence over this course.
+`,
+    },
+    {
       kind: "check",
       id: "clamp-current",
       prompt:

@@ -145,7 +145,7 @@ So, at 3.3 V into a 5 V pixel, **R_src between about a quarter and three-quarter
 | 75 Ω coax | 75.0 Ω | 0 Ω to about 25 Ω | |
 | three-core | 70.3 Ω | 0 Ω to about 22 Ω | |
 
-The two windows for lone lead and data beside ground **do not overlap**. That is the sentence to take away: **no single resistor suits every cable** at 3.3 V. A controller sold with a 33 Ω resistor on its outputs is right for a cable with a ground beside the data and wrong for a lone lead, and vice versa for one fitted with 270 Ω.
+In this arithmetic the windows for lone lead and data beside ground **do not overlap**, and in the simulator they meet at most at one value on the edge of both, with no margin to spare on either. That is the sentence to take away: **no single resistor suits every cable** at 3.3 V. A controller sold with a 33 Ω resistor on its outputs is right for a cable with a ground beside the data and wrong for a lone lead, and vice versa for one fitted with 270 Ω.
 
 The course simulator agrees with this arithmetic closely on data beside ground. On the lone lead it finds the window a little wider at the bottom (about 39 Ω at 10 m), because the clamp diodes absorb part of the ringing that the linear formula ignores. That is a gift of the pixel's protection circuit, not something to design for.
 `,
@@ -168,15 +168,15 @@ Repeat the argument with a 5 V driver (a level shifter, lesson 2) into the same 
 
 How late does not matter, as long as the *falling* edge is delayed by about the same amount, and with thresholds at 0.7 and 0.3 of a 5 V swing it is (lesson 3): the staircase down crosses 1.5 V after as many round trips as the staircase up needed to cross 3.5 V. The pulse width survives. So with a 5 V driver most 10 m runs decode across the whole range of 33 Ω to 249 Ω, on every cable in the catalogue.
 
-The limit comes back only when the staircase becomes too slow to finish within a 0 bit's 0.4 µs. Count it: the far end after n arrivals is 5 × (1 − Γ_s^n), which passes 3.5 V when Γ_s^n < 0.3. The nth arrival comes (2n − 1) one-way delays after the switch.
+The limit comes back only when the staircase becomes too slow to finish within a 0 bit. Count it: the far end after n arrivals is 5 × (1 − Γ_s^n), which passes 3.5 V when Γ_s^n < 0.3. The nth arrival comes (2n − 1) one-way delays after the switch. The driver's fall, 0.4 µs after the switch for a 0 bit, reaches the far end one delay later, at 0.4 µs + T_d. The crossing must come before that, and early enough to leave a pulse the pixel can measure.
 
-### Worked example: three-core, 15 m, 330 Ω, 5 V
+### Worked example: three-core, 15 m, 5 V
 
-- R_src = 20 + 330 = 350 Ω; Z0 = 70.3 Ω; Γ_s = (350 − 70.3) / (350 + 70.3) = 0.665
-- 0.665² = 0.44, 0.665³ = 0.29 < 0.3, so the third arrival crosses
-- one-way delay: 15 m × 5.58 ns/m = 83.7 ns; third arrival at 5 × 83.7 ns ≈ 419 ns
+- one-way delay: T_d = 15 m × 5.58 ns/m = 83.7 ns; the fall of a 0 bit reaches the far end at 400 ns + 83.7 ns ≈ 484 ns
+- with 330 Ω: R_src = 350 Ω, Γ_s = (350 − 70.3) / (350 + 70.3) = 0.665; 0.665² = 0.44, 0.665³ = 0.29 < 0.3, so the third arrival crosses, at 5 × 83.7 ns ≈ 419 ns. The pulse starts only 65 ns before the far end turns down: it decodes, with a thin timing margin.
+- with 390 Ω: R_src = 410 Ω, Γ_s = (410 − 70.3) / (410 + 70.3) = 0.707; 0.707³ = 0.35, 0.707⁴ = 0.25, so only the fourth arrival would cross, at 7 × 83.7 ns ≈ 586 ns. The fall has arrived at 484 ns. A 0 bit never clears the threshold: the 0s decode as "x".
 
-The driver has already dropped a 0 bit at 400 ns. The pulse never crosses the threshold: the 0s decode as "x". This is the same physics as lesson 3's large RC (15 m of three-core is 1,190 pF), and the reason the high-capacitance three-core cable and runs of 15 m and more can still fail at a few hundred ohms even with a 5 V driver. This is the **opposite pull** of a long, high-capacitance, low-impedance cable: the ringing argument wants R_src up near Z0, which is small; anything much bigger, and the cable's capacitance makes the edge too slow.
+This is the same physics as lesson 3's large RC (15 m of three-core is 1,190 pF), and the reason the high-capacitance three-core cable and runs of 15 m and more can still fail at a few hundred ohms even with a 5 V driver. This is the **opposite pull** of a long, high-capacitance, low-impedance cable: the ringing argument wants R_src up near Z0, which is small; anything much bigger, and the cable's capacitance makes the edge too slow.
 `,
     },
     {
@@ -186,7 +186,7 @@ The driver has already dropped a 0 bit at 400 ns. The pulse never crosses the th
         "A 5 V driver with R_src = 350 Ω drives 15 m of three-core cable (Z0 = 70.3 Ω, 5.58 ns/m). The third arrival is the first above 3.5 V. How long after the driver switches does it arrive?",
       answer: { value: 5 * 15 * 5.58e-9, unit: "ns", tolerance: 0.02 },
       hint: "The nth arrival comes (2n − 1) one-way delays after the switch.",
-      explanation: "One way: 15 m × 5.58 ns/m = 83.7 ns. Third arrival: 5 × 83.7 ns ≈ 419 ns, later than a 0 bit's 400 ns high time.",
+      explanation: "One way: 15 m × 5.58 ns/m = 83.7 ns. Third arrival: 5 × 83.7 ns ≈ 419 ns. The 0 bit's fall reaches the far end at 400 ns + 83.7 ns ≈ 484 ns, so the pixel sees a pulse of barely 65 ns before the far end turns down.",
     },
     {
       kind: "text",
@@ -198,14 +198,14 @@ Put it all together and the rule of thumb gets its fine print:
 1. It is **series termination**: ≈ 250 Ω is near a match for a lone lead (351 Ω with a 30 Ω driver), ≈ 33 Ω is near a match for a cable with ground beside the data (94 Ω). Choose by the cable's Z0, not by habit.
 2. It is **decisive at 3.3 V into a 5 V pixel**, where only the doubled first arrival clears the threshold. Then the source must be a little below the match (R_src between about 0.25 and 0.74 of Z0 for a 0.3 V margin), and a resistor meant for another cable fails outright.
 3. With a **5 V driver** most runs of about 10 m decode across 33 Ω to 249 Ω; the choice then mostly sets the overshoot and clamp current, not whether bits arrive.
-4. **Long, high-capacitance runs** (three-core, 15 m and more) can still fail at a few hundred ohms even at 5 V, because the staircase is too slow for a 0 bit.
+4. **Long, high-capacitance runs** (three-core, 15 m and more) can still fail at a few hundred ohms even at 5 V, because the staircase is too slow for a 0 bit: it must clear the threshold before the driver's fall reaches the far end.
 5. Up to **2–3 m**, one-way delays are around 10–15 ns; a little ringing dies out long before the pixel decides, and nearly anything works.
 
 The course simulator is a teaching model. Before an installation is signed off, the run is confirmed on the bench with an oscilloscope at the first pixel (lesson 8).
 
 ## The lab
 
-A 3.3 V controller pin drives a long run of a lone data lead to a 5 V pixel. Choose an E24 resistor that decodes every bit with at least 0.3 V of voltage margin and 120 ns of timing margin, without ringing that crosses a threshold (even if the pixel's deglitch filter would hide it). Use the window arithmetic first, then confirm it on the workbench. Your variant's length differs from your neighbour's; the window barely moves with length on this cable, and it is worth asking yourself why.
+A 3.3 V controller pin drives a long run of a lone data lead to a 5 V pixel. Choose an E24 resistor that decodes every bit with at least 0.3 V of voltage margin and 120 ns of timing margin, without ringing that crosses a threshold (even if the pixel's deglitch filter would hide it) and with less than 5 mA driven into the pixel's clamp diodes. Use the window arithmetic first, then confirm it on the workbench. Your variant's length differs from your neighbour's; the window barely moves with length on this cable, and it is worth asking yourself why.
 `,
     },
   ],

@@ -9,7 +9,8 @@ A controller's 3.3 V output pin (30 Ω) drives a long data lead run on its own, 
 Choose a series resistor from the E24 series (IEC 60063) so that:
 
 - every bit decodes with at least 120 ns of timing margin and 0.3 V of voltage margin;
-- no ringing crosses a threshold, even briefly enough for the pixel's deglitch filter to hide it.
+- no ringing crosses a threshold, even briefly enough for the pixel's deglitch filter to hide it;
+- the current the overshoot drives into the pixel's clamp diodes stays under 5 mA.
 
 Use the 3.3 V window of the lesson: R_src between about 0.25 × Z0 and 0.74 × Z0, with R_src the pin's 30 Ω plus your resistor.
 `,
@@ -30,7 +31,7 @@ Use the 3.3 V window of the lesson: R_src between about 0.25 × Z0 and 0.74 × Z
     },
   ],
   questions: [],
-  passRule: { allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.3, rejectFilteredRinging: true },
+  passRule: { allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.3, maxClampCurrent: 5e-3, rejectFilteredRinging: true },
   scoring: {
     fullMarksMargin: { timing: 180e-9, voltage: 0.9 },
     passBase: 60,
@@ -45,7 +46,7 @@ Use the 3.3 V window of the lesson: R_src between about 0.25 × Z0 and 0.74 × Z
       {
         choices: { main: { seriesResistance: 33 } },
         mechanism: "ringing",
-        explanation: "63 Ω of source on a 351 Ω line gives Γ_s ≈ −0.70: the far end rings back through the pixel's thresholds after every edge.",
+        explanation: "63 Ω of source on a 351 Ω line gives Γ_s ≈ −0.70: the far end overshoots into the clamp diodes and rings back through the pixel's thresholds after every edge.",
       },
       {
         choices: { main: { seriesResistance: 470 } },

@@ -46,7 +46,7 @@ If the pixels run at 5 V, use a 5 V driver: a level shifter at the controller (l
 
 ### Step 6: check the slow side
 
-Wherever R_src is larger than Z0, the far end climbs a staircase: after n arrivals it stands at V × (1 − Γ_s^n), and the nth arrival comes (2n − 1) × T_d after the switch. The pixel threshold must be crossed well inside a 0 bit's 0.4 µs, and with a 3.3 V driver it must be crossed by the first arrival or not at all.
+Wherever R_src is larger than Z0, the far end climbs a staircase: after n arrivals it stands at V × (1 − Γ_s^n), and the nth arrival comes (2n − 1) × T_d after the switch. A 0 bit's fall reaches the far end at 0.4 µs + T_d; the pixel threshold must be crossed well before that, and with a 3.3 V driver it must be crossed by the first arrival or not at all.
 
 ### Step 7: choose the standard value, then confirm on the bench
 
@@ -97,6 +97,23 @@ Writing the three results in a table for the installation file is part of the jo
 | B | data beside ground | 18 m | 5 V buffer | 68 Ω | 5.16 V |
 | C | data beside ground | 2.5 m | 3.3 V pin | 33 Ω | 3.95 V |
 `,
+    },
+    {
+      kind: "figure",
+      figure: "series-termination",
+      caption:
+        "Run A as designed: a 3.3 V pin, 22 Ω and twisted pair into a 5 V pixel. Stretch the run and watch the first arrival and the margins: the resistor window hardly depends on length, but loss and every imperfection the model leaves out grow with it.",
+      params: {
+        cable: "twisted-pair",
+        length: 12,
+        seriesResistance: 22,
+        highVoltage: 3.3,
+        outputResistance: 30,
+        edgeTime: 4e-9,
+        supplyVoltage: 5,
+        bits: "01100",
+        slider: { field: "length", min: 2, max: 40, step: 1 },
+      },
     },
     {
       kind: "check",
@@ -175,7 +192,7 @@ The other tool uses the pixel chain itself. Every pixel regenerates the data wit
       prompt: "How long is the one-way delay of a 25 m twisted-pair run (5.20 ns/m)?",
       answer: { value: 25 * 5.2e-9, unit: "ns", tolerance: 0.02 },
       hint: "Length × delay per metre.",
-      explanation: "25 m × 5.20 ns/m = 130 ns. A staircase needing three arrivals would cross after 5 × 130 ns = 650 ns, longer than a 0 bit.",
+      explanation: "25 m × 5.20 ns/m = 130 ns. A staircase needing three arrivals would cross 5 × 130 ns = 650 ns after the switch, after a 0 bit's fall has reached the far end (400 ns + 130 ns = 530 ns): the 0s would be lost.",
     },
     {
       kind: "text",

@@ -1,0 +1,232 @@
+/**
+ * Every number the course asks a learner for, recomputed from its own formula, and the tables the
+ * lessons print, recomputed from their sources:
+ * - protocol timing and receiver thresholds: the simulator's defaults (parseSimInput, docs/simulator.md);
+ * - cable constants: the simulator's catalogue, computed from geometry with the two-wire and coax
+ *   line formulas of transmission-line textbooks;
+ * - wire: ASTM B258 diameters and annealed copper (1.7241e-8 Ω·m, IEC 60028) through lib/sim/awg;
+ * - TTL-compatible input levels (2.0 V / 0.8 V): JEDEC JESD8;
+ * - resistor tolerance per series: IEC 60063;
+ * - rise time = τ·ln 9 for an RC charge, scope rise ≈ 0.35 / bandwidth, root-sum-of-squares of
+ *   cascaded rise times, LC resonance 1/(2π√(LC)), reflection coefficients and the open-end
+ *   bounce series V·(1 − Γs^n): electronics textbook formulas;
+ * - silicon diode forward drop 0.7 V: textbook figure.
+ * A learner who types the formula's result must be accepted: each answer lies within half its
+ * tolerance of the recomputed value.
+ */
+import { describe, expect, it } from "vitest";
+import {
+  awgDiameter,
+  awgResistancePerMetre,
+  cableCatalogue,
+  colourBits,
+  parseSimInput,
+  perMetreFromGeometry,
+  type TwoWireGeometry,
+} from "@/lib/sim";
+import { getCourse, type Lesson, type NumericAnswer } from "@/lessons";
+
+const defaults = parseSimInput({ cable: { kind: "beside-ground", length: 1 }, signal: { bits: "0" } });
+const T_BIT = defaults.signal.bitPeriod;
+const ZERO_HIGH = defaults.signal.zeroHigh;
+const ONE_HIGH = defaults.signal.oneHigh;
+const DECISION = defaults.receiver.decisionTime;
+const HIGH = defaults.receiver.highThreshold;
+const INPUT_C = defaults.receiver.inputCapacitance;
+const WORD_BITS = 24;
+const LN9 = Math.log(9);
+const SPEED_OF_LIGHT = 299_792_458;
+const TTL_HIGH = 2.0;
+const DIODE_DROP = 0.7;
+const PROBE_C = 10e-12;
+
+const lone = cableCatalogue["lone-lead"];
+const beside = cableCatalogue["beside-ground"];
+const twisted = cableCatalogue["twisted-pair"];
+const threeCore = cableCatalogue["three-core"];
+const gamma = (source: number, z0: number) => (source - z0) / (source + z0);
+const frame = (pixels: number, latch: number) => pixels * WORD_BITS * T_BIT + latch;
+const ones = (bits: string) => [...bits].filter((b) => b === "1").length;
+
+/** Source resistance below which the doubled first arrival of `volts` clears `threshold` by `margin`. */
+const firstArrivalLimit = (z0: number, volts: number, threshold: number, margin: number) => z0 * ((2 * volts) / (threshold + margin) - 1);
+
+type Formula = { source: string; value: () => number };
+
+const formulas: Record<string, Formula> = {
+  "pixel-data-stream/bit-rate": { source: "f = 1/T; simulator default bit period", value: () => 1 / T_BIT },
+  "pixel-data-stream/word-high-time": {
+    source: "sum of high times of a GRB word (simulator defaults)",
+    value: () => {
+      const bits = colourBits([[0, 170, 0]], "GRB");
+      return ones(bits) * ONE_HIGH + (bits.length - ones(bits)) * ZERO_HIGH;
+    },
+  },
+  "pixel-data-stream/frame-time-200": { source: "T = N·24·T_bit + T_latch", value: () => frame(200, 280e-6) },
+  "pixel-data-stream/refresh-200": { source: "f = 1 / T_frame", value: () => 1 / frame(200, 280e-6) },
+  "pixel-data-stream/max-pixels-40hz": {
+    source: "N = floor((1/f − T_latch) / (24·T_bit))",
+    value: () => Math.floor((1 / 40 - 50e-6) / (WORD_BITS * T_BIT)),
+  },
+  "timing-budget/frame-time": { source: "T = N·24·T_bit + T_latch", value: () => frame(360, 300e-6) },
+  "timing-budget/refresh-rate": { source: "f = 1 / T_frame", value: () => 1 / frame(360, 300e-6) },
+
+  "logic-levels/high-threshold-5v": { source: "simulator default high threshold × VDD", value: () => HIGH * 5 },
+  "logic-levels/margin-sagged-supply": { source: "NM_high = V_OH − 0.7·VDD", value: () => 3.3 - HIGH * 4.5 },
+  "logic-levels/shifter-input-margin": { source: "JEDEC JESD8 TTL-compatible V_IH = 2.0 V", value: () => 3.3 - TTL_HIGH },
+  "logic-levels/ground-offset": { source: "Ohm's law; 20 AWG from ASTM B258 + IEC 60028", value: () => 4 * 2.5 * awgResistancePerMetre(20) },
+  "logic-levels/mid-supply-margin": { source: "V_OH − VDD/2", value: () => 3.3 - 5 / 2 },
+  "thresholds/direct-high-margin": { source: "NM_high = V_OH − 0.7·VDD", value: () => 3.3 - HIGH * 5 },
+  "thresholds/shifted-high-margin": { source: "NM_high = V_OH − 0.7·VDD", value: () => 5 - HIGH * 5 },
+
+  "edges/time-constant": {
+    source: "τ = R·C; C from the catalogue (2 m) plus the simulator's default input capacitance",
+    value: () => 350 * (2 * beside.perMetre.capacitance + INPUT_C),
+  },
+  "edges/rise-time": { source: "RC charge: t(10→90 %) = τ·ln 9", value: () => LN9 * 350 * (2 * beside.perMetre.capacitance + INPUT_C) },
+  "edges/cable-capacitance": { source: "C′·length + input capacitance", value: () => 4 * beside.perMetre.capacitance + INPUT_C },
+  "edges/largest-resistance": { source: "R = t_rise / (C·ln 9)", value: () => 100e-9 / (LN9 * (4 * beside.perMetre.capacitance + INPUT_C)) },
+  "edges/clamp-current": { source: "Ohm's law with a 0.7 V silicon diode drop (textbook)", value: () => (5 - DIODE_DROP) / (20 + 330) },
+
+  "transmission-line/z0-from-per-metre": { source: "Z0 = √(L′/C′)", value: () => Math.sqrt(520e-9 / 52e-12) },
+  "transmission-line/delay-per-metre": { source: "delay = √(L′·C′)", value: () => Math.sqrt(520e-9 * 52e-12) },
+  "transmission-line/run-delay": { source: "length × catalogue delay per metre", value: () => 12 * beside.delayPerMetre },
+  "transmission-line/launched-step": { source: "voltage divider with Z0 (catalogue)", value: () => (5 * beside.z0) / (53 + beside.z0) },
+  "transmission-line/effective-permittivity": {
+    source: "delay = √ε_eff / c",
+    value: () => (beside.delayPerMetre * SPEED_OF_LIGHT) ** 2,
+  },
+  "cable-spec/capacitance-10m": { source: "C′·length (catalogue)", value: () => 10 * beside.perMetre.capacitance },
+  "cable-spec/round-trip-twisted": { source: "2 · length · delay per metre (catalogue)", value: () => 2 * 10 * twisted.delayPerMetre },
+
+  "reflections/source-coefficient": { source: "Γ = (R − Z0)/(R + Z0)", value: () => gamma(53, beside.z0) },
+  "reflections/first-arrival": { source: "V_far(1) = V·(1 − Γs)", value: () => 5 * (1 - gamma(53, beside.z0)) },
+  "reflections/ringing-period": { source: "four one-way delays (catalogue)", value: () => 4 * 10 * lone.delayPerMetre },
+  "reflections/staircase-second-step": { source: "V_far(n) = V·(1 − Γs^n)", value: () => 5 * (1 - gamma(290, beside.z0) ** 2) },
+
+  "series-termination/matching-resistor": { source: "R_s = Z0 − R_out (catalogue Z0)", value: () => lone.z0 - 30 },
+  "series-termination/first-arrival-3v3": { source: "V_far(1) = 2·V·Z0/(R_src + Z0)", value: () => (2 * 3.3 * lone.z0) / (280 + lone.z0) },
+  "series-termination/beside-ground-limit": {
+    source: "first arrival equals 0.7·VDD: R_src = Z0·(2V/V_th − 1)",
+    value: () => firstArrivalLimit(beside.z0, 3.3, HIGH * 5, 0) - 30,
+  },
+  "series-termination/staircase-arrival": { source: "(2n − 1)·T_d with n = 3 (catalogue delay)", value: () => 5 * 15 * threeCore.delayPerMetre },
+
+  "designing-a-run/twisted-pair-limit": {
+    source: "first arrival 0.3 V above 0.7·VDD",
+    value: () => firstArrivalLimit(twisted.z0, 3.3, HIGH * 5, 0.3) - 30,
+  },
+  "designing-a-run/resistor-tolerance": { source: "IEC 60063: E24 with ±5 %", value: () => 68 * 1.05 },
+  "designing-a-run/supply-drop": { source: "Ohm's law over the loop; 18 AWG from ASTM B258 + IEC 60028", value: () => 10 * 2 * 5 * awgResistancePerMetre(18) },
+  "designing-a-run/long-run-delay": { source: "length × catalogue delay per metre", value: () => 25 * twisted.delayPerMetre },
+
+  "on-the-bench/scope-rise-time": { source: "t_rise ≈ 0.35 / bandwidth", value: () => 0.35 / 100e6 },
+  "on-the-bench/measured-rise": { source: "root sum of squares of cascaded rise times", value: () => Math.hypot(10e-9, 0.35 / 100e6) },
+  "on-the-bench/ground-lead-ring": { source: "f = 1/(2π√(LC))", value: () => 1 / (2 * Math.PI * Math.sqrt(150e-9 * PROBE_C)) },
+  "on-the-bench/probe-loading": { source: "far-end τ = Z0·C, rise = τ·ln 9", value: () => LN9 * lone.z0 * (INPUT_C + PROBE_C) },
+};
+
+const course = getCourse();
+const asked: { key: string; answer: NumericAnswer }[] = course.lessons.flatMap((lesson: Lesson) => [
+  ...lesson.blocks.flatMap((b) => (b.kind === "check" ? [{ key: `${lesson.slug}/${b.id}`, answer: b.answer }] : [])),
+  ...(lesson.lab?.questions ?? []).map((q) => ({ key: `${lesson.lab!.slug}/${q.id}`, answer: q.answer })),
+]);
+
+describe("every quick check and lab question against its formula", () => {
+  it("has a formula for each numeric question, and no formula without a question", () => {
+    expect(asked.map((a) => a.key).sort()).toEqual(Object.keys(formulas).sort());
+  });
+
+  it.each(asked)("$key", ({ key, answer }) => {
+    const expected = formulas[key].value();
+    expect(Math.abs(answer.value - expected)).toBeLessThanOrEqual(0.5 * answer.tolerance * Math.abs(expected));
+  });
+
+  it("sanity of the decision time the lessons teach (0.6 µs between the two high times)", () => {
+    expect(ZERO_HIGH).toBeLessThan(DECISION);
+    expect(ONE_HIGH).toBeGreaterThan(DECISION);
+    expect(DECISION - ZERO_HIGH).toBeCloseTo(200e-9, 12);
+  });
+});
+
+/** Rows of the first markdown table after `heading` in the lesson's text blocks, as cells. */
+function tableAfter(lesson: Lesson, heading: string): string[][] {
+  const text = lesson.blocks.flatMap((b) => (b.kind === "text" ? [b.markdown] : [])).join("\n");
+  const from = text.indexOf(heading);
+  if (from < 0) throw new Error(`no "${heading}" in ${lesson.slug}`);
+  const lines = text.slice(from).split("\n");
+  const start = lines.findIndex((l) => l.trim().startsWith("|"));
+  const rows: string[][] = [];
+  for (let i = start + 2; i < lines.length && lines[i].trim().startsWith("|"); i += 1) {
+    rows.push(lines[i].split("|").slice(1, -1).map((c) => c.trim()));
+  }
+  return rows;
+}
+
+const lessonBySlug = (slug: string) => course.lessons.find((l) => l.slug === slug)!;
+const number = (cell: string) => Number(cell.replace(/[^\d.]/g, ""));
+const closeTo = (stated: number, exact: number, relative: number) => Math.abs(stated - exact) <= relative * Math.abs(exact);
+
+describe("tables printed in the lessons", () => {
+  it("lesson 4's cable table matches the simulator's catalogue (to its printed rounding)", () => {
+    const rows = tableAfter(lessonBySlug("transmission-line"), "## The course's cables");
+    expect(rows).toHaveLength(5);
+    for (const [name, z0, c, l, delay, r] of rows) {
+      const kind = name.match(/\(([a-z0-9-]+)\)/)![1] as keyof typeof cableCatalogue;
+      const entry = cableCatalogue[kind];
+      expect(closeTo(number(z0), entry.z0, 0.005), `${kind} Z0`).toBe(true);
+      expect(closeTo(number(c) * 1e-12, entry.perMetre.capacitance, 0.005), `${kind} C′`).toBe(true);
+      expect(closeTo(number(l) * 1e-9, entry.perMetre.inductance, 0.005), `${kind} L′`).toBe(true);
+      expect(closeTo(number(delay) * 1e-9, entry.delayPerMetre, 0.005), `${kind} delay`).toBe(true);
+      expect(closeTo(number(r) * 1e-3, entry.perMetre.resistance, 0.01), `${kind} R′`).toBe(true);
+    }
+  });
+
+  it("lesson 2's wire table matches ASTM B258 diameters and annealed-copper resistance", () => {
+    const rows = tableAfter(lessonBySlug("logic-levels"), "## Whose 0 V?");
+    expect(rows.length).toBeGreaterThanOrEqual(4);
+    for (const [size, diameter, resistance] of rows) {
+      const gauge = number(size);
+      expect(closeTo(number(diameter) * 1e-3, awgDiameter(gauge), 0.002), `${gauge} AWG diameter`).toBe(true);
+      expect(closeTo(number(resistance) * 1e-3, awgResistancePerMetre(gauge), 0.02), `${gauge} AWG resistance`).toBe(true);
+    }
+  });
+
+  it("lesson 1's frame table follows T = N·24·T_bit + 280 µs", () => {
+    const rows = tableAfter(lessonBySlug("pixel-data-stream"), "The same arithmetic for other chain lengths");
+    expect(rows).toHaveLength(4);
+    for (const [pixels, data, frameTime, refresh] of rows) {
+      const n = number(pixels);
+      expect(closeTo(number(data) * 1e-3, n * WORD_BITS * T_BIT, 0.002)).toBe(true);
+      expect(closeTo(number(frameTime) * 1e-3, frame(n, 280e-6), 0.002)).toBe(true);
+      expect(closeTo(number(refresh), 1 / frame(n, 280e-6), 0.005)).toBe(true);
+    }
+  });
+
+  it("lesson 6's 3.3 V window table follows R_src from 0.248·Z0 to 0.737·Z0 (0.3 V margin each side)", () => {
+    const rows = tableAfter(lessonBySlug("series-termination"), "## The 3.3 V design window");
+    expect(rows).toHaveLength(5);
+    const kinds = ["lone-lead", "beside-ground", "twisted-pair", "coax-75", "three-core"] as const;
+    rows.forEach(([, z0, window], i) => {
+      const entry = cableCatalogue[kinds[i]];
+      expect(closeTo(number(z0), entry.z0, 0.005)).toBe(true);
+      const upper = firstArrivalLimit(entry.z0, 3.3, HIGH * 5, 0.3) - 30;
+      const stated = [...window.matchAll(/(\d+(?:\.\d+)?) Ω/g)].map((m) => Number(m[1]));
+      expect(Math.abs(stated[stated.length - 1] - upper), `${kinds[i]} upper edge`).toBeLessThanOrEqual(1);
+      const ringLimit = Math.sqrt((1.5 - 0.3) / 3.3);
+      const lower = Math.max(0, entry.z0 * ((1 - ringLimit) / (1 + ringLimit)) - 30);
+      expect(Math.abs(stated[0] - lower), `${kinds[i]} lower edge`).toBeLessThanOrEqual(1);
+    });
+  });
+
+  it("lesson 7's lone-lead impedances at 5 mm and 30 mm follow the unequal two-wire formula", () => {
+    const geometry = lone.geometry as TwoWireGeometry;
+    const z0At = (spacing: number) => {
+      const perMetre = perMetreFromGeometry({ ...geometry, centreSpacing: spacing });
+      return Math.sqrt(perMetre.inductance / perMetre.capacitance);
+    };
+    const text = lessonBySlug("designing-a-run").blocks.flatMap((b) => (b.kind === "text" ? [b.markdown] : [])).join("\n");
+    expect(text).toContain(`at 5 mm the figure is about ${Math.round(z0At(5e-3))} Ω`);
+    expect(text).toContain(`at 30 mm about ${Math.round(z0At(30e-3))} Ω`);
+  });
+});
