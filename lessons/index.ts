@@ -60,6 +60,7 @@ export function getLessonOfLab(labSlug: string): Lesson | undefined {
 export type { Block, BenchExercise, CheckBlock, Course, Lab, Lesson, NumericAnswer, PassRule, RunChoices, RunSpec, Scenario, Scoring } from "./schema";
 export type { FigureBlock, FigureId, FigureParams } from "./figures";
 export { FIGURE_IDS } from "./figures";
+export { figureSimInputs } from "./figure-sim-inputs";
 export { labVariant, defaultVariant, type LabVariant, type RunVariant } from "./variant";
 export { buildSimInput } from "./build-run";
 export { labChoicesSchemaFor, runChoicesSchemaFor, resistorValuesOnOffer, lengthsOnOffer, startingChoices, type LabChoices } from "./run-choices";
