@@ -12,7 +12,7 @@ export const demoAdmin = { name: "Noor Whitcombe", email: `admin@${domain}` } as
 export const demoCohorts = [
   {
     name: "Data lines — January evenings",
-    courseSlug: "led-data-lines",
+    courseSlug: "data-runs",
     startsOn: "2026-01-12",
     endsOn: "2026-04-03",
     instructor: { name: "Tomasz Brennholt", email: `tomasz.brennholt@${domain}` },
@@ -27,7 +27,7 @@ export const demoCohorts = [
   },
   {
     name: "Data lines — February days",
-    courseSlug: "led-data-lines",
+    courseSlug: "data-runs",
     startsOn: "2026-02-02",
     endsOn: "2026-05-22",
     instructor: { name: "Adaeze Lindqvist", email: `adaeze.lindqvist@${domain}` },
