@@ -4,6 +4,8 @@ import { fileURLToPath } from "node:url";
 import { migrate } from "drizzle-orm/node-postgres/migrator";
 import { createDatabase, createPool } from "../db/connection";
 import { describeDatabaseFailure } from "../db/describe-failure";
+import { syncCourseCatalogue } from "../db/sync-course-catalogue";
+import { getCourse } from "../lessons";
 import { readDatabaseEnv } from "../lib/env";
 
 const migrationsFolder = fileURLToPath(new URL("../drizzle", import.meta.url));
@@ -12,8 +14,10 @@ async function main(): Promise<void> {
   const { DATABASE_URL } = readDatabaseEnv();
   const pool = createPool(DATABASE_URL, 1);
   try {
-    await migrate(createDatabase(pool), { migrationsFolder });
-    console.log(`Database migrated (${new URL(DATABASE_URL).pathname.slice(1)}).`);
+    const database = createDatabase(pool);
+    await migrate(database, { migrationsFolder });
+    await syncCourseCatalogue(database, getCourse());
+    console.log(`Database migrated and course catalogue refreshed (${new URL(DATABASE_URL).pathname.slice(1)}).`);
   } finally {
     await pool.end();
   }

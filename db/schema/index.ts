@@ -5,3 +5,4 @@ export * from "./cohorts";
 export * from "./invitations";
 export * from "./password-resets";
 export * from "./sign-in-attempts";
+export * from "./course";
