@@ -131,7 +131,7 @@ The catalogue the simulator uses, computed from each cable's geometry with the f
 
 Some notes on the rows:
 
-- **Twisted pair** here is one pair of a data-network cable: data on one conductor, ground on its twisted partner. Such cables are made for about 100 Ω between the two conductors of a pair, and the catalogue's 99 Ω agrees.
+- **Twisted pair** here is one pair of a data-network cable: data on one conductor, ground on its twisted partner. Such cables are made for 100 Ω between the two conductors of a pair (the figure of the TIA-568 cabling standards), and the catalogue's 99 Ω agrees.
 - **Three-core**: in a round cable of data, ground and supply, the data core touches both others, and at the speed of an edge both carry its return current (the supply conductor is tied to ground through the supply's capacitors). Two returns mean more capacitance, 4/3 of the two-core value, and less inductance: Z0 drops to about 70 Ω.
 - **R′**, the resistance per metre, is tiny next to Z0: 10 m of data beside ground has 0.67 Ω. For runs of the lengths in this course the lines are very nearly lossless. The simulator includes the loss anyway.
 `,

@@ -81,7 +81,7 @@ A shop display has one controller with 3.3 V outputs and three strips of 5 V pix
 The installer fits a one-direction 5 V buffer at the controller for the longest run (lesson 2).
 
 - Line: Z0 = 93.8 Ω; T_d = 18 × 5.58 ns ≈ 100 ns; C = 18 × 59.5 pF ≈ 1,071 pF.
-- At 5 V aim for a match: R_s = 93.8 − 20 ≈ 74 Ω. The E24 neighbours are 68 Ω and 75 Ω; take 68 Ω (R_src = 88 Ω, Γ_s = −0.032).
+- At 5 V aim for a match: R_s = 93.8 − 20 ≈ 74 Ω. The E24 neighbours are 68 Ω and 75 Ω. Either works at 5 V; take 68 Ω, which keeps the source just below the match, so any error shows as a slight overshoot rather than a slight staircase (R_src = 88 Ω, Γ_s = −0.032).
 - First arrival: 5 × 1.032 = 5.16 V. A clean step with a 0.16 V overshoot; no staircase, so the 1,071 pF never shows as a slow edge.
 
 ### Run C: 2.5 m of data beside ground, 3.3 V pin direct

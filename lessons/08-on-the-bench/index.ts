@@ -33,7 +33,7 @@ t_rise,seen ≈ √(t_signal² + t_scope² + t_probe²).
 
 ### Worked example
 
-A true 10 ns edge, a 100 MHz scope and a probe fast enough to ignore: √(10² + 3.5²) ns = √112.25 ns ≈ 10.6 ns. The scope adds 6 %. On a 20 MHz scope the same edge shows as √(10² + 17.5²) ns ≈ 20.2 ns: you are measuring the scope. A working habit of the trade (common practice): use a scope whose own rise time is at most a third of the edge you want to measure. For the 3 ns edges of a 5 V buffer driving a matched run, that means 300 MHz or more; for the tens of nanoseconds of most real runs at the first pixel, 100 MHz is enough.
+A true 10 ns edge, a 100 MHz scope and a probe fast enough to ignore: √(10² + 3.5²) ns = √112.25 ns ≈ 10.6 ns. The scope adds 6 %. On a 20 MHz scope the same edge shows as √(10² + 17.5²) ns ≈ 20.2 ns: you are measuring the scope. A working habit of the trade (common practice): use a scope whose own rise time is at most a third of the edge you want to measure. For the 3 ns edges of a 5 V buffer driving a matched run, that means a scope rise time of 1 ns, 0.35 / 1 ns = 350 MHz or more; for the tens of nanoseconds of most real runs at the first pixel, 100 MHz is enough.
 
 The scope's **sample rate** matters too: it must take several samples during the edge. A scope sampling at 1 GS/s takes one sample per nanosecond, enough for a 10 ns edge. Check the rate at the timebase you use, since many scopes lower it on slow timebases.
 `,
