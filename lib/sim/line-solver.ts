@@ -69,6 +69,7 @@ const SETTLED_TOLERANCE = 2e-4;
  * the ringing stops once it is far below anything the decoder can see.
  */
 const INPUT_DEADBAND = 5e-4;
+const JUNCTION_DEADBAND = 1e-4;
 /**
  * When every wave on the line and the pin lie this close to the DC state of a flat drive, the
  * state is set to that DC state and the solver jumps to the driver's next edge.
@@ -203,6 +204,8 @@ class DistributedLine {
   private readonly junctionArm: number;
   private readonly junctionDivider: number;
   private readonly forward: Stream[];
+  /** Per inner junction: the two inputs it last answered and its two outputs. */
+  private readonly junctionState: Float64Array;
   private readonly backward: Stream[];
   readonly near: RunHistory;
   readonly far: RunHistory;
@@ -249,6 +252,7 @@ class DistributedLine {
     this.junctionDivider = 1 / (2 + junctionConductance * this.junctionArm);
     this.forward = Array.from({ length: segments }, () => makeStream(m + 1));
     this.backward = Array.from({ length: segments }, () => makeStream(m + 1));
+    this.junctionState = new Float64Array(4 * segments);
     const initialRuns = Math.min(1 << 18, Math.max(1024, plan.stepCount >> 4));
     this.near = new RunHistory(initialRuns);
     this.far = new RunHistory(initialRuns);
@@ -290,7 +294,7 @@ class DistributedLine {
       this.far.reserve(m + 2);
       this.nearEnd(start, backward[0].read, forward[0].write);
       for (let j = 1; j < segments; j += 1) {
-        this.junction(forward[j - 1].read, backward[j].read, backward[j - 1].write, forward[j].write);
+        this.junction(j, forward[j - 1].read, backward[j].read, backward[j - 1].write, forward[j].write);
       }
       this.farEnd(start, forward[segments - 1].read, backward[segments - 1].write);
       for (const stream of streams) {
@@ -327,6 +331,12 @@ class DistributedLine {
     for (let j = 0; j < this.segments; j += 1) {
       this.forward[j].read.fillConstant(state.forward[j]);
       this.backward[j].read.fillConstant(state.backward[j]);
+    }
+    for (let j = 1; j < this.segments; j += 1) {
+      this.junctionState[4 * j] = state.forward[j - 1];
+      this.junctionState[4 * j + 1] = state.backward[j];
+      this.junctionState[4 * j + 2] = state.backward[j - 1];
+      this.junctionState[4 * j + 3] = state.forward[j];
     }
     this.v1 = state.pin;
     this.v2 = state.pin;
@@ -396,8 +406,18 @@ class DistributedLine {
     this.cursor = k;
   }
 
-  private junction(fromLeft: WaveChunk, fromRight: WaveChunk, toLeft: WaveChunk, toRight: WaveChunk): void {
-    const { m, z0, junctionArm, junctionDivider } = this;
+  /**
+   * An inner junction (R/N in series, G/N to ground). It ignores input changes within
+   * JUNCTION_DEADBAND of the inputs it last answered: the small reflections of the lumped
+   * resistors would otherwise bounce between junctions without end.
+   */
+  private junction(j: number, fromLeft: WaveChunk, fromRight: WaveChunk, toLeft: WaveChunk, toRight: WaveChunk): void {
+    const { m, z0, junctionArm, junctionDivider, junctionState } = this;
+    const base = 4 * j;
+    let heldLeft = junctionState[base];
+    let heldRight = junctionState[base + 1];
+    let outLeft = junctionState[base + 2];
+    let outRight = junctionState[base + 3];
     let left = 0;
     let right = 0;
     let offset = 0;
@@ -406,13 +426,23 @@ class DistributedLine {
       const rightEnd = right + 1 < fromRight.count ? fromRight.offsets[right + 1] : m;
       const waveLeft = fromLeft.values[left];
       const waveRight = fromRight.values[right];
-      const middle = (waveLeft + waveRight) * junctionDivider;
-      toLeft.push(offset, waveLeft - (2 * z0 * (waveLeft - middle)) / junctionArm);
-      toRight.push(offset, waveRight - (2 * z0 * (waveRight - middle)) / junctionArm);
+      if (Math.abs(waveLeft - heldLeft) > JUNCTION_DEADBAND || Math.abs(waveRight - heldRight) > JUNCTION_DEADBAND) {
+        heldLeft = waveLeft;
+        heldRight = waveRight;
+        const middle = (waveLeft + waveRight) * junctionDivider;
+        outLeft = waveLeft - (2 * z0 * (waveLeft - middle)) / junctionArm;
+        outRight = waveRight - (2 * z0 * (waveRight - middle)) / junctionArm;
+      }
+      toLeft.push(offset, outLeft);
+      toRight.push(offset, outRight);
       offset = Math.min(leftEnd, rightEnd);
       if (offset >= leftEnd) left += 1;
       if (offset >= rightEnd) right += 1;
     }
+    junctionState[base] = heldLeft;
+    junctionState[base + 1] = heldRight;
+    junctionState[base + 2] = outLeft;
+    junctionState[base + 3] = outRight;
   }
 
   private farEnd(start: number, incoming: WaveChunk, out: WaveChunk): void {

@@ -63,12 +63,14 @@ function countNote(indices: number[], total: number): string {
   return indices.length === total ? `every bit` : `${indices.length} of ${total} bits`;
 }
 
-function slowEdgeCause(facts: CircuitFacts, resistance: number): string {
+function slowEdgeCause(facts: CircuitFacts, resistance: number, edge: "rising" | "falling"): string {
   const capacitance = facts.cableCapacitance + facts.inputCapacitance;
   const tau = resistance * capacitance;
-  let cause = `the resistor and the cable capacitance make the edge too slow (${ohms(resistance)} charging ${picofarads(capacitance)}, a time constant of about ${duration(tau)})`;
+  const verb = edge === "rising" ? "charging" : "discharging";
+  let cause = `the resistor and the cable capacitance make the ${edge} edge too slow (${ohms(resistance)} ${verb} ${picofarads(capacitance)}, a time constant of about ${duration(tau)})`;
   if (facts.delay > 0 && resistance > 1.5 * facts.z0) {
-    cause += `; with the source well above the line's ${ohms(facts.z0)} the far end climbs in a staircase, one step per ${duration(2 * facts.delay)} round trip`;
+    const motion = edge === "rising" ? "climbs" : "falls";
+    cause += `; with the source well above the line's ${ohms(facts.z0)} the far end ${motion} in a staircase, one step per ${duration(2 * facts.delay)} round trip`;
   }
   return cause;
 }
@@ -92,7 +94,7 @@ function neverHighMessage(facts: CircuitFacts, kinds: string): string {
         : `a source of ${ohms(resistance)} against the line's ${ohms(facts.z0)} gives no overshoot to lift it`;
     return `${head}: the driver's ${volts(facts.highVoltage)} high level sits below that threshold, and ${lift}`;
   }
-  return `${head}: ${slowEdgeCause(facts, resistance)}`;
+  return `${head}: ${slowEdgeCause(facts, resistance, "rising")}`;
 }
 
 type Finding = { code: string; index: number; time: number };
@@ -133,19 +135,19 @@ function failMessage(code: string, bits: DecodedBit[], indices: number[], facts:
     case "never-high":
       return neverHighMessage(facts, kinds);
     case "slow-fall":
-      return `the far end does not fall below the low threshold (${volts(facts.lowLevel)}) before the next bit starts, so that bit's pulse is missed: ${slowEdgeCause(facts, low)}`;
+      return `the far end does not fall below the low threshold (${volts(facts.lowLevel)}) before the next bit starts, so that bit's pulse is missed: ${slowEdgeCause(facts, low, "falling")}`;
     case "ring-after-rise":
       return `ringing after the rising edge re-crosses the low threshold (${volts(facts.lowLevel)}) and breaks the pulse: ${ringingCause(facts, high, "down")}`;
     case "ring-after-fall":
       return `ringing after the falling edge rises back above the high threshold (${volts(facts.highLevel)}) and the pixel reads an extra pulse: ${ringingCause(facts, low, "up")}`;
     case "stuck-high":
-      return `the far end never falls below the low threshold (${volts(facts.lowLevel)}) after the pulse: ${slowEdgeCause(facts, low)}`;
+      return `the far end never falls below the low threshold (${volts(facts.lowLevel)}) after the pulse: ${slowEdgeCause(facts, low, "falling")}`;
     case "narrow-pulse":
-      return `a pulse only ${duration(first.width ?? 0)} wide at the thresholds counts as a glitch (shorter than ${duration(facts.minPulse)}): the far end crosses the high threshold late and leaves it early, because ${slowEdgeCause(facts, high)}`;
+      return `a pulse only ${duration(first.width ?? 0)} wide at the thresholds counts as a glitch (shorter than ${duration(facts.minPulse)}): the far end crosses the high threshold late and leaves it early, because ${slowEdgeCause(facts, high, "rising")}`;
     case "stretched-zero":
-      return `0 bits read as 1: the pulse is ${duration(first.width ?? 0)} wide at the thresholds, longer than the ${duration(facts.decisionTime)} decision time, because the far end falls below the low threshold late: ${slowEdgeCause(facts, low)}`;
+      return `0 bits read as 1: the pulse is ${duration(first.width ?? 0)} wide at the thresholds, longer than the ${duration(facts.decisionTime)} decision time, because the far end falls below the low threshold late: ${slowEdgeCause(facts, low, "falling")}`;
     case "shortened-one":
-      return `1 bits read as 0: the pulse is only ${duration(first.width ?? 0)} wide at the thresholds, shorter than the ${duration(facts.decisionTime)} decision time, because the far end reaches the high threshold late: ${slowEdgeCause(facts, high)}`;
+      return `1 bits read as 0: the pulse is only ${duration(first.width ?? 0)} wide at the thresholds, shorter than the ${duration(facts.decisionTime)} decision time, because the far end reaches the high threshold late: ${slowEdgeCause(facts, high, "rising")}`;
     default:
       return `${kinds} do not decode`;
   }
@@ -213,10 +215,14 @@ function warningReasons(decoding: Decoding, levels: BitLevels[], metrics: RunMet
   if (!failing && levels[ringBack].lowPeak > facts.lowLevel) {
     const mid = facts.supply / 2;
     const peak = levels[ringBack].lowPeak;
+    const consequence =
+      peak >= facts.highLevel
+        ? `above the high threshold before the far end has fallen below the low threshold (${volts(facts.lowLevel)}), so the pulse ends late; it still decodes, but with little to spare`
+        : `above the guaranteed low level (${volts(facts.lowLevel)}); it stays below the high threshold so the pulse count is right, but ${peak > mid ? `a pixel switching near mid-supply (${volts(mid)}) would read it as a high` : "the noise margin is gone"}`;
     reasons.push({
       code: "ringing-undefined-zone",
       severity: "warning",
-      message: `ringing after the falling edge climbs back to ${volts(peak)}, above the guaranteed low level (${volts(facts.lowLevel)}); it stays below the high threshold so the pulse count is right, but ${peak > mid ? `a pixel switching near mid-supply (${volts(mid)}) would read it as a high` : "the noise margin is gone"}.`,
+      message: `ringing after the falling edge swings back up to ${volts(peak)}, ${consequence}: ${ringingCause(facts, facts.sourceResistanceLow, "up")}.`,
       at: { time: levels[ringBack].lowPeakTime, bit: ringBack },
     });
   } else if (!failing && metrics.voltageMargin < THIN_VOLTAGE_SHARE * facts.supply) {
