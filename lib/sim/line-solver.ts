@@ -253,7 +253,7 @@ class DistributedLine {
     this.forward = Array.from({ length: segments }, () => makeStream(m + 1));
     this.backward = Array.from({ length: segments }, () => makeStream(m + 1));
     this.junctionState = new Float64Array(4 * segments);
-    const initialRuns = Math.min(1 << 18, Math.max(1024, plan.stepCount >> 4));
+    const initialRuns = Math.min(1 << 16, Math.max(1024, plan.stepCount >> 6));
     this.near = new RunHistory(initialRuns);
     this.far = new RunHistory(initialRuns);
 
@@ -451,6 +451,7 @@ class DistributedLine {
     const supply = this.receiver.supply;
     const clamps = this.receiver.clamps;
     const total = theveninConductance + this.capacitiveConductance;
+    const inverseTotal = 1 / total;
     const weight1 = this.historyWeight1;
     const weight2 = this.historyWeight2;
     const inOffsets = incoming.offsets;
@@ -488,7 +489,7 @@ class DistributedLine {
       let previous = Number.NaN;
       for (let step = runStart; step < runEnd; step += 1) {
         const injected = driven + weight1 * v1 - weight2 * v2;
-        let v = injected / total;
+        let v = injected * inverseTotal;
         if (v > safeHigh || v < safeLow) {
           v = solveClamped(total, injected, supply, v1);
           const current = Math.abs(clampCurrent(v, supply));

@@ -8,7 +8,7 @@ import { measureBitLevels, measureRun, type RunMetrics } from "./metrics";
 import { parseSimInput, type ResolvedSimInput, type SimInput } from "./schema";
 import { bitSlots, colourBits } from "./signal";
 import { judgeVerdict, type Verdict } from "./verdict";
-import { expandRuns, sampleUniform, waveformFromRuns } from "./waveform";
+import { expandRuns, sampleRuns, sampleUniform, waveformFromRuns } from "./waveform";
 
 export type SimBit = {
   sent: 0 | 1;
@@ -51,8 +51,12 @@ function niceInterval(raw: number): number {
   return 10 * decade;
 }
 
-const roundTime = (t: number) => Number(t.toPrecision(12));
-const roundVolts = (v: number) => Math.round(v * 1e6) / 1e6;
+/** Times to the femtosecond and volts to the microvolt: enough, and the JSON stays short. */
+function roundedArray(values: ArrayLike<number>, scale: number): number[] {
+  const out = new Array<number>(values.length);
+  for (let i = 0; i < values.length; i += 1) out[i] = Math.round(values[i] * scale) / scale;
+  return out;
+}
 
 function lineOf(input: ResolvedSimInput): { perMetre: PerMetre; totals: LineTotals } {
   const perMetre = input.cable.kind ? cableCatalogue[input.cable.kind].perMetre : (input.cable.perMetre as PerMetre);
@@ -100,7 +104,6 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
     { capacitance: receiver.inputCapacitance, supply: receiver.supplyVoltage, clamps: receiver.clampDiodes },
   );
   const far = waveformFromRuns(solved.far, solved.dt, solved.stepCount);
-  const near = waveformFromRuns(solved.near, solved.dt, solved.stepCount);
 
   const highLevel = receiver.highThreshold * receiver.supplyVoltage;
   const lowLevel = receiver.lowThreshold * receiver.supplyVoltage;
@@ -158,11 +161,10 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
       `output.sampleInterval of ${interval} s gives ${points.toLocaleString("en")} points over ${(endTime * 1e6).toPrecision(4)} µs, more than ${MAX_SAMPLED_POINTS.toLocaleString("en")}`,
     );
   }
-  const time = Array.from({ length: points }, (_, i) => roundTime(i * interval));
   const result: SimResult = {
-    time,
-    nearEnd: Array.from(sampleUniform(near, interval, points), roundVolts),
-    farEnd: Array.from(sampleUniform(far, interval, points), roundVolts),
+    time: roundedArray(Float64Array.from({ length: points }, (_, i) => i * interval), 1e15),
+    nearEnd: roundedArray(sampleRuns(solved.near, solved.dt, solved.stepCount, interval, points), 1e6),
+    farEnd: roundedArray(sampleUniform(far, interval, points), 1e6),
     decoded: decoding.bits.map((bit) => bit.received).join(""),
     bits: decoding.bits.map((bit, i) => ({
       sent: bit.sent,

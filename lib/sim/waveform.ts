@@ -39,6 +39,26 @@ export function expandRuns(history: RunHistory, stepCount: number): Float64Array
   return values;
 }
 
+/** Samples runs directly onto a uniform grid (linear between solver steps), without building breakpoints. */
+export function sampleRuns(history: RunHistory, dt: number, stepCount: number, interval: number, points: number): Float64Array {
+  const out = new Float64Array(points);
+  const { steps, values, count } = history;
+  let k = 0;
+  for (let p = 0; p < points; p += 1) {
+    const position = Math.min((p * interval) / dt, stepCount - 1);
+    const step = Math.floor(position);
+    while (k + 1 < count && steps[k + 1] <= step) k += 1;
+    const here = values[k];
+    const fraction = position - step;
+    if (fraction > 0 && k + 1 < count && steps[k + 1] === step + 1) {
+      out[p] = here + fraction * (values[k + 1] - here);
+    } else {
+      out[p] = here;
+    }
+  }
+  return out;
+}
+
 /** Index of the last breakpoint at or before t (0 when t is before the first). */
 export function indexAt(wave: Waveform, t: number): number {
   let low = 0;
