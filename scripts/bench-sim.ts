@@ -9,6 +9,7 @@
  * difference from ngspice (smallest difference within ±0.5 ns, docs/simulator.md).
  * Targets are printed as met or not met; nothing here fails a build.
  */
+import { availableParallelism, loadavg } from "node:os";
 import { cableCatalogue, CABLE_KINDS, parseSimInput, simulateRun } from "@/lib/sim";
 import { runNgspice, timeNgspice } from "@/tests/reference/support/ngspice-runner";
 import { decodeWaveform } from "@/tests/reference/support/receiver-decode";
@@ -161,12 +162,22 @@ function table(rows: Row[]): string {
   return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...body.map(line)].join("\n");
 }
 
+/** Wall-clock medians mean little when other work competes for the cores: say so beside the figures. */
+function loadNote(): string {
+  const load = loadavg()[0];
+  const cores = availableParallelism();
+  const busy = load > cores * 0.75 ? " — machine busy, times are inflated; the ratios, measured side by side, suffer less" : "";
+  return `load average ${load.toFixed(2)} on ${cores} cores${busy}`;
+}
+
 async function main() {
   console.log(`line simulator benchmark: Node ${process.version}, one thread; ngspice lossless T, 0.1 ns step, same circuits`);
+  console.log(`at start: ${loadNote()}`);
   console.log("ours: median of simulateRun; grade: JSON in → validate → simulate → decode → verdict → JSON out; ngspice ms: its transient analysis time\n");
   const rows: Row[] = [];
   for (const c of CASES) rows.push(await benchCase(c));
   console.log(table(rows));
+  console.log(`at end: ${loadNote()}`);
 
   const tenMetre = rows.filter((r) => r.isTenMetreFull);
   const verdict = (ok: boolean) => (ok ? "met" : "NOT MET");

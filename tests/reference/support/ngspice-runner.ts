@@ -13,7 +13,7 @@ import type { ReferenceCircuit } from "./reference-circuit";
 
 const run = promisify(execFile);
 
-export const NGSPICE_BINARY = process.env.NGSPICE ?? "ngspice";
+const NGSPICE_BINARY = process.env.NGSPICE ?? "ngspice";
 
 export interface NgspiceResult {
   time: Float64Array;

@@ -25,18 +25,3 @@ export function pulseTrainBreakpoints(circuit: ReferenceCircuit): Breakpoints {
   }
   return { time, value };
 }
-
-export function evaluatePiecewiseLinear(points: Breakpoints, t: number): number {
-  const { time, value } = points;
-  if (t <= time[0]) return value[0];
-  if (t >= time[time.length - 1]) return value[value.length - 1];
-  let lo = 0;
-  let hi = time.length - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (time[mid] <= t) lo = mid;
-    else hi = mid;
-  }
-  const f = (t - time[lo]) / (time[hi] - time[lo]);
-  return value[lo] + f * (value[hi] - value[lo]);
-}
