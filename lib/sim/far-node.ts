@@ -15,8 +15,8 @@ export const CLAMP_DIODE_MODEL = {
 
 const IS = CLAMP_DIODE_MODEL.saturationCurrent;
 const VT = CLAMP_DIODE_MODEL.thermalVoltage * CLAMP_DIODE_MODEL.emissionCoefficient;
-/** Within this distance outside the rails a clamp carries under 1 nA: treated as open. */
-export const NEGLIGIBLE_CONDUCTION = 0.3;
+/** Within this distance outside the rails a clamp carries under 0.1 µA (tens of µV across the line): treated as open. */
+export const NEGLIGIBLE_CONDUCTION = 0.4;
 const EXP_LIMIT = 40;
 const EXP_AT_LIMIT = Math.exp(EXP_LIMIT);
 
@@ -36,6 +36,9 @@ export function clampCurrent(v: number, supply: number): number {
  * answer (usually a few millivolts away) and a shrinking bracket with bisection catches any
  * step that leaves it.
  */
+/** Clamp current (A, positive into VDD) at the answer of the last solveClamped call. */
+export let lastClampCurrent = 0;
+
 export function solveClamped(conductance: number, injected: number, supply: number, guess: number): number {
   const open = injected / conductance;
   const above = open > supply;
@@ -54,7 +57,9 @@ export function solveClamped(conductance: number, injected: number, supply: numb
     const slope = conductance + (IS / VT) * (x < EXP_LIMIT ? exponential : EXP_AT_LIMIT);
     let next = v - residual / slope;
     if (!(next >= low && next <= high)) next = 0.5 * (low + high);
-    if (Math.abs(next - v) < 1e-8) return next;
+    lastClampCurrent = sign * IS * (exponential - 1);
+    // Newton converges quadratically: after a 10 µV correction the remaining error is far below 1 µV.
+    if (Math.abs(next - v) < 1e-5) return next;
     v = next;
   }
   return v;
@@ -97,7 +102,7 @@ export class FarNode {
     let v = injected / total;
     if (v > this.safeHigh || v < this.safeLow) {
       v = solveClamped(total, injected, this.supply, this.v1);
-      this.current = clampCurrent(v, this.supply);
+      this.current = lastClampCurrent;
     } else {
       this.current = 0;
     }

@@ -1,6 +1,6 @@
 import { DriveSource, type DriveSchedule } from "./drive-source";
 import { SimSolveBudgetError } from "./errors";
-import { clampCurrent, FarNode, NEGLIGIBLE_CONDUCTION, pinEquilibrium, solveClamped } from "./far-node";
+import { FarNode, lastClampCurrent, NEGLIGIBLE_CONDUCTION, pinEquilibrium, solveClamped } from "./far-node";
 import { RUN_TOLERANCE, RunHistory, WaveChunk } from "./runs";
 
 /**
@@ -492,7 +492,7 @@ class DistributedLine {
         let v = injected * inverseTotal;
         if (v > safeHigh || v < safeLow) {
           v = solveClamped(total, injected, supply, v1);
-          const current = Math.abs(clampCurrent(v, supply));
+          const current = Math.abs(lastClampCurrent);
           if (current > this.clampCurrentPeak) {
             this.clampCurrentPeak = current;
             this.clampCurrentPeakTime = step * dt;
