@@ -12,7 +12,6 @@ synchronous_commit = off"
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/edgewise_test"
 export APP_PORT=3100
 export APP_URL="http://127.0.0.1:$APP_PORT" E2E_BASE_URL="http://127.0.0.1:$APP_PORT"
-export NEXT_DIST_DIR=.next-test
 unset SMTP_HOST UPLOADTHING_TOKEN
 
 pids=()
