@@ -55,8 +55,8 @@ export const MAX_SOLVER_STEPS = 5_000_000;
 /** Fixed step for 3 ns edges (0.1 ns, see docs/simulator.md); finer for faster edges. */
 const BASE_STEP = 1e-10;
 const STEPS_PER_EDGE = 25;
-/** Segments per unit of R/Z0: keeps the lumped-loss error of the first arrival under about 0.2 %. */
-const SEGMENTS_PER_LOSS = 125;
+/** Segments per unit of R/Z0: keeps the lumped-loss error of the first arrival, about R/(4N·Z0), under 0.3 %. */
+const SEGMENTS_PER_LOSS = 80;
 const MAX_SEGMENTS = 16;
 /**
  * Once the pin is this close to the DC value for a constant arriving wave it is held there, so
