@@ -1,0 +1,82 @@
+import { NextResponse } from "next/server";
+import { z } from "zod";
+import { findLearnerCohortId, listLabAttemptsByLearner, recordLabAttempt } from "@/db/queries/attempts";
+import { getCourse } from "@/lessons";
+import { gradeWork, outcomeOf, scoreWork, toAttemptView, variantSeedFor, verdictLines } from "@/lib/grading";
+import { invalidInput, issuesOf } from "@/lib/grading/input-error";
+import { AppError } from "@/lib/http/errors";
+import { errorResponse } from "@/lib/http/respond";
+import { findLab, requireLearner, withSession } from "../../learner-request";
+
+export const dynamic = "force-dynamic";
+
+type Context = { params: Promise<{ labSlug: string }> };
+
+const submissionSchema = z.strictObject({
+  choices: z.record(z.string(), z.unknown(), { error: "must be an object of choices by run" }),
+  answers: z.record(z.string(), z.string({ error: "must be text" }).max(200, { error: "must be at most 200 characters" })).optional(),
+  idempotencyKey: z.uuid({ error: "must be a UUID made by the client for this submission" }),
+});
+
+async function readJson(request: Request): Promise<unknown> {
+  try {
+    return await request.json();
+  } catch {
+    throw new AppError("bad-request", "The body must be JSON.");
+  }
+}
+
+/**
+ * Grades a submission on the server (the browser's own preview is never trusted) and stores it as
+ * the learner's next attempt. A retried submission with the same idempotency key gets the stored
+ * attempt back instead of a second one.
+ */
+export async function POST(request: Request, context: Context): Promise<NextResponse> {
+  try {
+    const learner = await requireLearner(request);
+    const lab = findLab((await context.params).labSlug);
+    const body = submissionSchema.safeParse(await readJson(request));
+    if (!body.success) throw invalidInput(issuesOf(body.error));
+    const { user } = learner;
+    const seed = variantSeedFor(user.id, lab.slug);
+    const work = gradeWork({ lab, seed, choices: body.data.choices, answers: body.data.answers });
+
+    const recorded = await recordLabAttempt({
+      userId: user.id,
+      labSlug: lab.slug,
+      cohortId: await findLearnerCohortId({ userId: user.id, courseSlug: getCourse().slug }),
+      idempotencyKey: body.data.idempotencyKey,
+      variantSeed: seed,
+      choices: work.choices,
+      score: (attemptNumber) => {
+        const grade = scoreWork(lab, work, attemptNumber);
+        return { outcome: outcomeOf(grade), score: grade.score, passed: grade.passed };
+      },
+    });
+    if (recorded.status === "key-taken") {
+      throw new AppError("conflict", "That submission key was already used for another lab. Submit again.");
+    }
+    const attempt = toAttemptView(recorded.attempt);
+    return withSession(
+      NextResponse.json(
+        { attempt, score: attempt.score, passed: attempt.passed, reasons: verdictLines(attempt), replayed: recorded.status === "replayed" },
+        { status: recorded.status === "created" ? 201 : 200 },
+      ),
+      learner,
+    );
+  } catch (error) {
+    return errorResponse(error);
+  }
+}
+
+/** The learner's own attempts at the lab, newest first. */
+export async function GET(request: Request, context: Context): Promise<NextResponse> {
+  try {
+    const learner = await requireLearner(request);
+    const lab = findLab((await context.params).labSlug);
+    const attempts = await listLabAttemptsByLearner({ userId: learner.user.id, labSlug: lab.slug });
+    return withSession(NextResponse.json({ attempts: attempts.map(toAttemptView) }), learner);
+  } catch (error) {
+    return errorResponse(error);
+  }
+}

@@ -1,0 +1,42 @@
+import "server-only";
+import type { NextResponse } from "next/server";
+import { decideRoleAccess } from "@/lib/auth/access";
+import { sessionCookieName, validateSessionToken, type SessionCookie, type SessionUser } from "@/lib/auth/session-store";
+import { getLab, type Lab } from "@/lessons";
+import { AppError } from "@/lib/http/errors";
+
+// Route handlers answer in JSON: no redirect to sign-in and no 403 page, but 401 and 403 bodies.
+// The session is read from the request itself, so the handlers run the same under a test.
+
+function sessionToken(request: Request): string | null {
+  const header = request.headers.get("cookie") ?? "";
+  for (const part of header.split(";")) {
+    const [name, ...value] = part.trim().split("=");
+    if (name === sessionCookieName) return decodeURIComponent(value.join("="));
+  }
+  return null;
+}
+
+export type LearnerRequest = { user: SessionUser; refreshedCookie: SessionCookie | null };
+
+export async function requireLearner(request: Request): Promise<LearnerRequest> {
+  const token = sessionToken(request);
+  const session = token ? await validateSessionToken(token) : null;
+  const decision = decideRoleAccess(session?.user ?? null, ["learner"]);
+  if (decision === "sign-in") throw new AppError("unauthenticated");
+  if (decision === "forbidden") throw new AppError("forbidden", "Only learners work on the lab bench.");
+  return { user: session!.user!, refreshedCookie: session!.refreshedCookie };
+}
+
+export function findLab(labSlug: string): Lab {
+  const lab = getLab(labSlug);
+  if (!lab) throw new AppError("not-found", "There is no lab with that name.");
+  return lab;
+}
+
+/** Carries a session extension back to the browser, as pages cannot. */
+export function withSession<T extends NextResponse>(response: T, learner: LearnerRequest): T {
+  const cookie = learner.refreshedCookie;
+  if (cookie) response.cookies.set(cookie.name, cookie.value, cookie.attributes);
+  return response;
+}

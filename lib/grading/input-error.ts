@@ -1,0 +1,21 @@
+import type { z } from "zod";
+import { AppError } from "@/lib/http/errors";
+
+/** A 422 whose field errors are keyed by the full dotted path of each bad value ("choices.main.seriesResistance"). */
+export function invalidInput(issues: { path: string; message: string }[]): AppError {
+  const fieldErrors: Record<string, string[]> = {};
+  for (const issue of issues) (fieldErrors[issue.path] ??= []).push(issue.message);
+  const first = issues[0];
+  const summary = first ? `${first.path || "the request"}: ${first.message}` : undefined;
+  return new AppError("invalid-input", summary, fieldErrors);
+}
+
+/** Each issue at its dotted path; a key that is not allowed is reported at its own path. */
+export function issuesOf(error: z.ZodError, prefix: readonly PropertyKey[] = []): { path: string; message: string }[] {
+  const at = (path: readonly PropertyKey[]) => [...prefix, ...path].map(String).join(".");
+  return error.issues.flatMap((issue) =>
+    issue.code === "unrecognized_keys"
+      ? issue.keys.map((key) => ({ path: at([...issue.path, key]), message: "is not expected here" }))
+      : [{ path: at(issue.path), message: issue.message }],
+  );
+}
