@@ -6,3 +6,4 @@ export * from "./invitations";
 export * from "./password-resets";
 export * from "./sign-in-attempts";
 export * from "./course";
+export * from "./bench";
