@@ -42,6 +42,9 @@ export type SolverPlan = {
   stepsPerSegment: number;
 };
 
+/** Run histories a caller lends to the solver so that repeated runs reuse their memory. */
+export type SolverScratch = { near: RunHistory; far: RunHistory };
+
 export type SolveOutput = {
   dt: number;
   stepCount: number;
@@ -70,6 +73,8 @@ const SETTLED_TOLERANCE = 2e-4;
  */
 const INPUT_DEADBAND = 5e-4;
 const JUNCTION_DEADBAND = 1e-4;
+/** The wave a moving pin sends back is passed on only when it has moved this much. */
+const OUTPUT_DEADBAND = 2e-4;
 /**
  * When every wave on the line and the pin lie this close to the DC state of a flat drive, the
  * state is set to that DC state and the solver jumps to the driver's next edge.
@@ -123,10 +128,11 @@ export function solveLine(
   drive: DriveSchedule,
   resistances: DriverResistances,
   receiver: ReceiverLoad,
+  scratch: SolverScratch = { near: new RunHistory(), far: new RunHistory() },
 ): SolveOutput {
   return plan.segments === 0
-    ? solveLumped(plan, line, drive, resistances, receiver)
-    : solveDistributed(plan, line, drive, resistances, receiver);
+    ? solveLumped(plan, line, drive, resistances, receiver, scratch)
+    : solveDistributed(plan, line, drive, resistances, receiver, scratch);
 }
 
 type DcState = {
@@ -228,6 +234,7 @@ class DistributedLine {
   private held = false;
   private heldInput = 0;
   private heldOutput = 0;
+  private lastWave = 0;
   clampCurrentPeak = 0;
   clampCurrentPeakTime = 0;
 
@@ -237,6 +244,7 @@ class DistributedLine {
     private readonly drive: DriveSchedule,
     resistances: DriverResistances,
     private readonly receiver: ReceiverLoad,
+    scratch: SolverScratch,
   ) {
     const { segments, stepsPerSegment: m, dt } = plan;
     this.m = m;
@@ -253,9 +261,10 @@ class DistributedLine {
     this.forward = Array.from({ length: segments }, () => makeStream(m + 1));
     this.backward = Array.from({ length: segments }, () => makeStream(m + 1));
     this.junctionState = new Float64Array(4 * segments);
-    const initialRuns = Math.min(1 << 16, Math.max(1024, plan.stepCount >> 6));
-    this.near = new RunHistory(initialRuns);
-    this.far = new RunHistory(initialRuns);
+    this.near = scratch.near;
+    this.far = scratch.far;
+    this.near.clear();
+    this.far.clear();
 
     const edges = drive.edgeStarts.length;
     this.edgeStart = drive.edgeStarts;
@@ -469,6 +478,7 @@ class DistributedLine {
     let held = this.held;
     let heldInput = this.heldInput;
     let heldOutput = this.heldOutput;
+    let lastWave = outCount > 0 ? outValues[outCount - 1] : this.lastWave;
 
     for (let run = 0; run < inCount; run += 1) {
       const runStart = start + inOffsets[run];
@@ -502,7 +512,8 @@ class DistributedLine {
         v1 = v;
         const port = v + endResistance * (thevenin - v) * theveninConductance;
         const wave = 2 * port - arriving;
-        if (outCount === 0 || wave !== outValues[outCount - 1]) {
+        if (Math.abs(wave - lastWave) > OUTPUT_DEADBAND || outCount === 0) {
+          lastWave = wave;
           outOffsets[outCount] = step - start;
           outValues[outCount] = wave;
           outCount += 1;
@@ -519,7 +530,7 @@ class DistributedLine {
             v2 = equilibrium;
             held = true;
             heldInput = arriving;
-            heldOutput = wave;
+            heldOutput = lastWave;
             break;
           }
         }
@@ -533,6 +544,7 @@ class DistributedLine {
     this.held = held;
     this.heldInput = heldInput;
     this.heldOutput = heldOutput;
+    this.lastWave = lastWave;
   }
 }
 
@@ -542,8 +554,9 @@ function solveDistributed(
   drive: DriveSchedule,
   resistances: DriverResistances,
   receiver: ReceiverLoad,
+  scratch: SolverScratch,
 ): SolveOutput {
-  const solver = new DistributedLine(plan, line, drive, resistances, receiver);
+  const solver = new DistributedLine(plan, line, drive, resistances, receiver, scratch);
   solver.run();
   return {
     dt: plan.dt,
@@ -562,11 +575,13 @@ function solveLumped(
   drive: DriveSchedule,
   resistances: DriverResistances,
   receiver: ReceiverLoad,
+  scratch: SolverScratch,
 ): SolveOutput {
   const { dt, stepCount } = plan;
   const source = new DriveSource(drive, dt);
-  const near = new RunHistory();
-  const far = new RunHistory();
+  const { near, far } = scratch;
+  near.clear();
+  far.clear();
   const node = new FarNode(receiver.capacitance + line.capacitance, dt, receiver.supply, receiver.clamps);
   const seriesConductance = (resistance: number) => 1 / Math.max(resistance + line.resistance, 1e-3);
   const gHigh = seriesConductance(resistances.high);

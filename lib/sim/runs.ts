@@ -60,6 +60,10 @@ export class RunHistory {
     this.count = count + 1;
   }
 
+  clear(): void {
+    this.count = 0;
+  }
+
   /** Makes room for `extra` more runs, so that a caller may write them directly. */
   reserve(extra: number): void {
     while (this.count + extra > this.steps.length) this.grow();

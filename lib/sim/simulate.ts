@@ -8,7 +8,8 @@ import { measureBitLevels, measureRun, type RunMetrics } from "./metrics";
 import { parseSimInput, type ResolvedSimInput, type SimInput } from "./schema";
 import { bitSlots, colourBits } from "./signal";
 import { judgeVerdict, type Verdict } from "./verdict";
-import { expandRuns, sampleRuns, sampleUniform, waveformFromRuns } from "./waveform";
+import { RunHistory } from "./runs";
+import { expandRuns, sampleRuns, sampleUniform, waveformFromRuns, type Waveform } from "./waveform";
 
 export type SimBit = {
   sent: 0 | 1;
@@ -40,6 +41,13 @@ export type SimResult = {
 export type SimulateOptions = { keepFullResolution?: boolean };
 
 const MAX_DRAWN_POINTS = 4000;
+
+/**
+ * Memory reused from run to run (the workbench re-simulates on every drag). Nothing in a
+ * returned SimResult points into it, and a run is synchronous, so sharing it is safe.
+ */
+const scratch = { near: new RunHistory(1 << 16), far: new RunHistory(1 << 16) };
+let farScratch: Waveform | undefined;
 const MAX_SAMPLED_POINTS = 1_000_000;
 
 /** Rounds an interval up to 1, 2, 2.5 or 5 times a power of ten, so the drawn grid is readable. */
@@ -102,8 +110,10 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
     driveSchedule(resolved, slots),
     { high: resistanceHigh, low: resistanceLow },
     { capacitance: receiver.inputCapacitance, supply: receiver.supplyVoltage, clamps: receiver.clampDiodes },
+    scratch,
   );
-  const far = waveformFromRuns(solved.far, solved.dt, solved.stepCount);
+  const far = waveformFromRuns(solved.far, solved.dt, solved.stepCount, farScratch);
+  farScratch = far;
 
   const highLevel = receiver.highThreshold * receiver.supplyVoltage;
   const lowLevel = receiver.lowThreshold * receiver.supplyVoltage;

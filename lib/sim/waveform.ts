@@ -7,20 +7,25 @@ import type { RunHistory } from "./runs";
  */
 export type Waveform = { time: Float64Array; value: Float64Array; count: number };
 
-export function waveformFromRuns(history: RunHistory, dt: number, stepCount: number): Waveform {
-  const time = new Float64Array(history.count * 2);
-  const value = new Float64Array(history.count * 2);
+/** `reuse` lends arrays to fill when they are large enough. */
+export function waveformFromRuns(history: RunHistory, dt: number, stepCount: number, reuse?: Waveform): Waveform {
+  const needed = history.count * 2;
+  const fits = reuse !== undefined && reuse.time.length >= needed;
+  const time = fits ? reuse.time : new Float64Array(needed);
+  const value = fits ? reuse.value : new Float64Array(needed);
+  const { steps, values } = history;
+  const runs = history.count;
   let count = 0;
-  for (let k = 0; k < history.count; k += 1) {
-    const first = history.steps[k];
+  for (let k = 0; k < runs; k += 1) {
+    const first = steps[k];
     if (first >= stepCount) break;
-    const last = Math.min(k + 1 < history.count ? history.steps[k + 1] : stepCount, stepCount) - 1;
+    const last = Math.min(k + 1 < runs ? steps[k + 1] : stepCount, stepCount) - 1;
     time[count] = first * dt;
-    value[count] = history.values[k];
+    value[count] = values[k];
     count += 1;
     if (last > first) {
       time[count] = last * dt;
-      value[count] = history.values[k];
+      value[count] = values[k];
       count += 1;
     }
   }
