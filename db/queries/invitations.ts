@@ -1,6 +1,7 @@
 import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import { db } from "../client";
 import { cohortMemberships, cohorts, invitations, schools, users, type Invitation, type Role } from "../schema";
+import { unsetPasswordHash } from "./users";
 
 /** Issues an invitation and revokes any earlier pending one for the same address, so one link is live. */
 export async function createInvitation(params: {
@@ -57,8 +58,9 @@ export type AcceptInvitationResult =
   | { ok: false; reason: Exclude<InvitationState, "usable"> | "already-registered" };
 
 /**
- * Creates the account, adds it to the invited cohort and spends the invitation in one
- * transaction; the row lock makes a double submit of the same link create one account.
+ * Creates the account (or completes the one enrolment made), adds it to the invited cohort and
+ * spends the invitation in one transaction; the row lock makes a double submit of the same link
+ * create one account.
  */
 export async function acceptInvitation(params: {
   tokenHash: string;
@@ -76,21 +78,37 @@ export async function acceptInvitation(params: {
     const state = describeInvitationState(invitation, params.now);
     if (state !== "usable" || !invitation) return { ok: false, reason: state === "usable" ? "unknown" : state };
 
-    const [existing] = await tx.select({ id: users.id }).from(users).where(eq(users.email, invitation.email)).limit(1);
-    if (existing) return { ok: false, reason: "already-registered" };
+    const [existing] = await tx
+      .select({ id: users.id, schoolId: users.schoolId, passwordHash: users.passwordHash })
+      .from(users)
+      .where(eq(users.email, invitation.email))
+      .for("update")
+      .limit(1);
+    // An enrolled learner already has an account waiting for them; anyone else is registered.
+    const awaiting = existing?.schoolId === invitation.schoolId && existing.passwordHash === unsetPasswordHash;
+    if (existing && !awaiting) return { ok: false, reason: "already-registered" };
 
-    const [user] = await tx
-      .insert(users)
-      .values({
-        schoolId: invitation.schoolId,
-        email: invitation.email,
-        name: params.name,
-        role: invitation.role,
-        passwordHash: params.passwordHash,
-      })
-      .returning({ id: users.id });
+    const [user] = existing
+      ? await tx
+          .update(users)
+          .set({ name: params.name, passwordHash: params.passwordHash, active: true, updatedAt: params.now })
+          .where(eq(users.id, existing.id))
+          .returning({ id: users.id })
+      : await tx
+          .insert(users)
+          .values({
+            schoolId: invitation.schoolId,
+            email: invitation.email,
+            name: params.name,
+            role: invitation.role,
+            passwordHash: params.passwordHash,
+          })
+          .returning({ id: users.id });
     if (invitation.cohortId && invitation.role !== "admin") {
-      await tx.insert(cohortMemberships).values({ cohortId: invitation.cohortId, userId: user!.id, role: invitation.role });
+      await tx
+        .insert(cohortMemberships)
+        .values({ cohortId: invitation.cohortId, userId: user!.id, role: invitation.role })
+        .onConflictDoNothing();
     }
     await tx.update(invitations).set({ usedAt: params.now }).where(eq(invitations.id, invitation.id));
     return { ok: true, userId: user!.id };

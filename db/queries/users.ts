@@ -7,6 +7,12 @@ export async function findUserByEmail(params: { email: string }): Promise<User |
   return user;
 }
 
+/**
+ * The password hash of an account made by enrolment before its owner accepted the invitation. It
+ * is no valid hash, so no password matches it; accepting the invitation replaces it.
+ */
+export const unsetPasswordHash = "!unset";
+
 export type SchoolPerson = Pick<User, "id" | "name" | "email" | "role" | "active">;
 
 export async function listUsersBySchool(params: { schoolId: string }): Promise<SchoolPerson[]> {

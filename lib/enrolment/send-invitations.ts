@@ -1,0 +1,63 @@
+import { readAppEnv } from "@/lib/env";
+import { sendInvitationEmail } from "@/lib/mail/send";
+
+// E-mails invitation links after their rows are committed. A failure never undoes an invitation:
+// the caller reports how many letters did not go out and the admin can send them again.
+
+export type InvitationLetter = { to: string; token: string; cohortName: string | null; expiresAt: Date };
+export type LetterOutcome = { sent: number; unsent: number };
+
+// Each message opens its own SMTP connection, so several run side by side to keep a large import
+// from waiting on one round trip at a time.
+const parallelLetters = 16;
+
+// These concern one message (a refused recipient); anything else means the mail server is not
+// usable right now, and trying thousands more would only repeat the wait.
+const perMessageErrorCodes = new Set(["EENVELOPE", "EMESSAGE"]);
+
+function isPerMessageFailure(error: unknown): boolean {
+  const code = (error as { code?: unknown } | null)?.code;
+  return typeof code === "string" && perMessageErrorCodes.has(code);
+}
+
+export function acceptUrlFor(token: string): string {
+  return `${readAppEnv().APP_URL}/invitations/${token}`;
+}
+
+export async function sendInvitationLetters(params: {
+  schoolName: string;
+  inviterName: string | null;
+  letters: InvitationLetter[];
+}): Promise<LetterOutcome> {
+  let next = 0;
+  let sent = 0;
+  let serverDown = false;
+  const worker = async () => {
+    while (!serverDown && next < params.letters.length) {
+      const letter = params.letters[next++]!;
+      try {
+        await sendInvitationEmail({
+          to: letter.to,
+          schoolName: params.schoolName,
+          cohortName: letter.cohortName,
+          inviterName: params.inviterName,
+          acceptUrl: acceptUrlFor(letter.token),
+          expiresAt: letter.expiresAt,
+        });
+        sent += 1;
+      } catch (error) {
+        console.error("An invitation e-mail was not sent:", error);
+        if (!isPerMessageFailure(error)) serverDown = true;
+      }
+    }
+  };
+  await Promise.all(Array.from({ length: Math.min(parallelLetters, params.letters.length) }, worker));
+  return { sent, unsent: params.letters.length - sent };
+}
+
+/** The sentence an admin reads when some letters did not go out. */
+export function describeUnsent(outcome: LetterOutcome): string | null {
+  if (outcome.unsent === 0) return null;
+  const what = outcome.unsent === 1 ? "1 invitation e-mail was" : `${outcome.unsent.toLocaleString("en-GB")} invitation e-mails were`;
+  return `${what} not sent because the mail server did not answer. The invitations are saved: use “Resend” (or “Resend all waiting”) once mail works again.`;
+}
