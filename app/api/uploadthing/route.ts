@@ -1,0 +1,3 @@
+import { createUploadRouteHandler } from "@/lib/uploads/route-handler";
+
+export const { GET, POST } = createUploadRouteHandler();
