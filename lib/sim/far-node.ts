@@ -20,25 +20,17 @@ export const NEGLIGIBLE_CONDUCTION = 0.4;
 const EXP_LIMIT = 40;
 const EXP_AT_LIMIT = Math.exp(EXP_LIMIT);
 
-/** exp(x), continued as a straight line beyond x = 40 so that Newton steps never overflow. */
-function limitedExp(x: number): number {
-  return x < EXP_LIMIT ? Math.exp(x) : EXP_AT_LIMIT * (1 + x - EXP_LIMIT);
-}
-
-/** Current out of the pin through both clamps (A); positive into VDD. */
-export function clampCurrent(v: number, supply: number): number {
-  return IS * (limitedExp((v - supply) / VT) - limitedExp(-v / VT));
-}
+/** Clamp current (A, positive into VDD) at the answer of the last solveClamped call. */
+export let lastClampCurrent = 0;
 
 /**
- * Solves G·v − J + clampCurrent(v) = 0 when J/G lies beyond a rail. The left side is monotonic,
+ * Solves G·v − J + I(v) = 0 when J/G lies beyond a rail, with I(v) the current out of the pin
+ * through both clamps, Is·(e^((v−VDD)/Vt) − 1) − Is·(e^(−v/Vt) − 1); the exponential is continued
+ * as a straight line beyond 40·Vt so that no step overflows. The left side is monotonic,
  * so the root lies between the rail and J/G; Newton's method starts from the previous step's
  * answer (usually a few millivolts away) and a shrinking bracket with bisection catches any
  * step that leaves it.
  */
-/** Clamp current (A, positive into VDD) at the answer of the last solveClamped call. */
-export let lastClampCurrent = 0;
-
 export function solveClamped(conductance: number, injected: number, supply: number, guess: number): number {
   const open = injected / conductance;
   const above = open > supply;
