@@ -89,7 +89,7 @@ export async function findCohortForAdmin(params: { schoolId: string; cohortId: s
       cohort: cohorts,
       instructorIds: sql<string[]>`coalesce((
         select array_agg(m.user_id::text order by m.created_at) from ${cohortMemberships} m
-        where m.cohort_id = ${cohorts.id} and m.role = 'instructor'
+        where m.cohort_id = ${cohorts}.id and m.role = 'instructor'
       ), '{}')`,
     })
     .from(cohorts)

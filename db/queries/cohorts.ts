@@ -4,14 +4,16 @@ import { cohortMemberships, cohorts, users, type Cohort, type CohortRole } from 
 
 export type CohortSummary = Cohort & { learnerCount: number; instructorNames: string[] };
 
+// "cohorts".id spelled out: in a single-table select the column would render unqualified, and
+// inside the subquery a bare "id" binds to the joined users row instead of the cohort.
 const learnerCount = sql<number>`(
   select count(*)::int from ${cohortMemberships} m
-  where m.cohort_id = ${cohorts.id} and m.role = 'learner'
+  where m.cohort_id = ${cohorts}.id and m.role = 'learner'
 )`;
 const instructorNames = sql<string[]>`coalesce((
   select array_agg(u.name order by u.name) from ${cohortMemberships} m
   join ${users} u on u.id = m.user_id
-  where m.cohort_id = ${cohorts.id} and m.role = 'instructor'
+  where m.cohort_id = ${cohorts}.id and m.role = 'instructor'
 ), '{}')`;
 
 export async function listCohortsBySchool(params: { schoolId: string }): Promise<CohortSummary[]> {

@@ -1,4 +1,4 @@
-import { and, count, desc, eq, gt, isNull, ne, sql } from "drizzle-orm";
+import { and, count, desc, eq, gt, inArray, isNull, ne, sql } from "drizzle-orm";
 import { db } from "../client";
 import type { Transaction } from "../connection";
 import { cohortMemberships, cohorts, invitations, sessions, users, type Invitation, type Role } from "../schema";
@@ -8,7 +8,8 @@ import { unsetPasswordHash } from "./users";
 // invitation links and whether an account may sign in. Every statement is scoped to the admin's
 // school; ids from another school match nothing.
 
-// 1,000 rows of at most 8 columns stay far below PostgreSQL's 65,535 bind parameters per statement.
+// 1,000 rows of at most 8 columns stay far below PostgreSQL's 65,535 bind parameters per statement;
+// lookups by address take one parameter per address, and a roster has at most 10,000.
 const insertBatchSize = 1_000;
 
 function inBatches<T>(items: readonly T[]): T[][] {
@@ -38,14 +39,14 @@ export async function findRosterConflicts(params: {
         )`,
       })
       .from(users)
-      .where(sql`${users.email} = any(${params.emails}::text[])`),
+      .where(inArray(users.email, params.emails)),
     db
       .selectDistinct({ email: invitations.email })
       .from(invitations)
       .where(
         and(
           eq(invitations.schoolId, params.schoolId),
-          sql`${invitations.email} = any(${params.emails}::text[])`,
+          inArray(invitations.email, params.emails),
           isNull(invitations.usedAt),
           isNull(invitations.revokedAt),
           gt(invitations.expiresAt, params.now),
@@ -262,7 +263,7 @@ async function revokeOpenInvitations(tx: Transaction, params: { schoolId: string
     .where(
       and(
         eq(invitations.schoolId, params.schoolId),
-        sql`${invitations.email} = any(${params.emails}::text[])`,
+        inArray(invitations.email, params.emails),
         isNull(invitations.usedAt),
         isNull(invitations.revokedAt),
       ),

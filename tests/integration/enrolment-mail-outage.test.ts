@@ -1,0 +1,99 @@
+import { spawn, type ChildProcess } from "node:child_process";
+import net from "node:net";
+import { eq, inArray } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { db } from "@/db/client";
+import { invitations, users } from "@/db/schema";
+import { acceptInvitation } from "@/lib/auth/invitations";
+import { describeUnsent, enrolLearner, importRoster, resendWaitingInvitations } from "@/lib/enrolment";
+import { findLinks } from "@/lib/mail/sink";
+import { createTestSchool, csvFile, rosterCsv, type TestSchool } from "./enrolment-fixtures";
+
+// The mail server is down while learners are enrolled: the invitations must be kept and reported
+// as not sent, and once a mail server answers on that port, "resend all waiting" delivers them.
+// This file points the app's SMTP settings at a port nothing listens on, then starts the real
+// sink script there.
+
+async function freePort(): Promise<number> {
+  const server = net.createServer();
+  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+  const { port } = server.address() as net.AddressInfo;
+  await new Promise((resolve) => server.close(resolve));
+  return port;
+}
+
+async function waitForPort(port: number): Promise<void> {
+  const deadline = Date.now() + 15_000;
+  while (Date.now() < deadline) {
+    const open = await new Promise<boolean>((resolve) => {
+      const socket = net.connect(port, "127.0.0.1", () => resolve(socket.end() && true));
+      socket.on("error", () => resolve(false));
+    });
+    if (open) return;
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  }
+  throw new Error(`Nothing listened on ${port} in time.`);
+}
+
+let school: TestSchool;
+let smtpPort: number;
+let sink: ChildProcess | undefined;
+const savedPort = process.env.SMTP_PORT;
+
+beforeAll(async () => {
+  smtpPort = await freePort();
+  // Read on the first e-mail this file sends, so it must be set before any is sent.
+  process.env.SMTP_PORT = String(smtpPort);
+  school = await createTestSchool("outage");
+});
+
+afterAll(() => {
+  sink?.kill();
+  process.env.SMTP_PORT = savedPort;
+});
+
+describe("enrolling while the mail server is down", () => {
+  const roster = () => [
+    { name: "Asha Verne", email: `asha@${school.domain}` },
+    { name: "Bram Ostrova", email: `bram@${school.domain}` },
+    { name: "Cleo Marchetti", email: `cleo@${school.domain}` },
+  ];
+
+  it("keeps the invitation of a single enrolment and says the e-mail was not sent", async () => {
+    const result = await enrolLearner({ actor: school.admin, cohortId: school.cohortId, name: "Dina Ferro", email: `dina@${school.domain}` });
+    expect(result).toEqual({ ok: true, outcome: "invited", letters: { sent: 0, unsent: 1 } });
+    if (result.ok && result.outcome === "invited") expect(describeUnsent(result.letters)).toMatch(/^1 invitation e-mail was not sent.*Resend/);
+    expect(await db.select().from(invitations).where(eq(invitations.email, `dina@${school.domain}`))).toHaveLength(1);
+  });
+
+  it("commits an import and reports every letter as not sent", async () => {
+    const result = await importRoster({ actor: school.admin, cohortId: school.cohortId, file: csvFile(rosterCsv(roster())), expectedValid: 3 });
+    if (!result.ok) throw new Error(result.problem);
+    expect(result.imported).toBe(3);
+    expect(result.letters).toEqual({ sent: 0, unsent: 3 });
+    expect(describeUnsent(result.letters)).toMatch(/^3 invitation e-mails were not sent/);
+    const emails = roster().map((person) => person.email);
+    expect(await db.select().from(users).where(inArray(users.email, emails))).toHaveLength(3);
+    expect(await db.select().from(invitations).where(inArray(invitations.email, emails))).toHaveLength(3);
+  });
+
+  it("delivers every waiting invitation once a mail server answers, with links that work", async () => {
+    const apiPort = await freePort();
+    sink = spawn(process.execPath, ["scripts/mail-sink.mjs"], {
+      env: { ...process.env, SMTP_PORT: String(smtpPort), MAIL_SINK_API_PORT: String(apiPort) },
+      stdio: "ignore",
+    });
+    await waitForPort(smtpPort);
+
+    const resent = await resendWaitingInvitations({ actor: school.admin, cohortId: school.cohortId });
+    expect(resent).toEqual({ ok: true, reissued: 4, letters: { sent: 4, unsent: 0 } });
+
+    const response = await fetch(`http://127.0.0.1:${apiPort}/messages?to=${encodeURIComponent(school.domain)}`);
+    const caught = (await response.json()) as { to: string; text: string }[];
+    expect(caught.map((message) => message.to).sort()).toEqual([...roster().map((p) => p.email), `dina@${school.domain}`].sort());
+
+    const link = findLinks(caught.find((message) => message.to === `asha@${school.domain}`)!.text).find((l) => l.includes("/invitations/"));
+    const token = new URL(link!).pathname.split("/").pop()!;
+    expect((await acceptInvitation({ token, name: "Asha Verne", password: "ground lead probe" })).ok).toBe(true);
+  });
+});
