@@ -4,12 +4,17 @@ export type { Role };
 
 // Pages are guarded by role (see route-access.ts); server actions and data functions that change
 // things are guarded by permission, so a capability can move between roles here alone.
-export type Permission = "invitations:create" | "bench:submit" | "bench:review";
+export type Permission =
+  | "invitations:create"
+  | "cohorts:manage"
+  | "learners:manage"
+  | "bench:submit"
+  | "bench:review";
 
 export const rolePermissions: Record<Role, readonly Permission[]> = {
   learner: ["bench:submit"],
   instructor: ["bench:review"],
-  admin: ["invitations:create"],
+  admin: ["invitations:create", "cohorts:manage", "learners:manage"],
 };
 
 export function hasPermission(role: Role, permission: Permission): boolean {
