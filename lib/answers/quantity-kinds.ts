@@ -3,16 +3,16 @@ import { quantityMath, type QuantityUnit } from "./quantity-math";
 /** Names of the quantities the course asks for, and an entry of each kind to show as an example. */
 const kinds: readonly { unit: string; name: string; example: number }[] = [
   { unit: "s", name: "a time", example: 330 },
-  { unit: "Hz", name: "a frequency", example: 800 },
-  { unit: "V", name: "a voltage", example: 3.5 },
-  { unit: "A", name: "a current", example: 12 },
+  { unit: "Hz", name: "a frequency", example: 12 },
+  { unit: "V", name: "a voltage", example: 2.7 },
+  { unit: "A", name: "a current", example: 40 },
   { unit: "ohm", name: "a resistance", example: 47 },
   { unit: "F", name: "a capacitance", example: 120 },
   { unit: "H", name: "an inductance", example: 150 },
   { unit: "m", name: "a length", example: 5 },
   { unit: "F/m", name: "a capacitance per metre", example: 60 },
   { unit: "H/m", name: "an inductance per metre", example: 520 },
-  { unit: "s/m", name: "a delay per metre", example: 5 },
+  { unit: "s/m", name: "a delay per metre", example: 8 },
   { unit: "ohm/m", name: "a resistance per metre", example: 0.02 },
   { unit: "m/s", name: "a speed", example: 2 },
   { unit: "V/s", name: "a rate of change of voltage", example: 1 },
@@ -49,4 +49,11 @@ export function exampleEntry(unit: string): string {
   if (unit === "") return "0.25";
   const kind = kindOf(quantityMath.unit(unit));
   return `${kind?.example ?? 2.5} ${displayUnit(unit)}`;
+}
+
+/** What to type, for the answer field's help line: "A time with its unit, e.g. 330 ns". */
+export function describeExpectedEntry(unit: string): string {
+  if (unit === "") return `A plain number, e.g. ${exampleEntry(unit)}`;
+  const kind = describeQuantity(quantityMath.unit(unit)).replace(/^an? /, "");
+  return `${kind.charAt(0).toUpperCase()}${kind.slice(1)} with its unit, e.g. ${exampleEntry(unit)}`;
 }

@@ -7,6 +7,7 @@ import type { Role } from "./permissions";
  */
 export const protectedRoutes = {
   "/learn": ["learner"],
+  "/lessons/[lessonSlug]": ["learner"],
   "/cohorts": ["instructor"],
   "/cohorts/[cohortId]": ["instructor"],
   "/admin": ["admin"],

@@ -1,54 +1,113 @@
 import type { Metadata } from "next";
+import Link from "next/link";
+import { CourseMap } from "@/components/lesson/course-map";
+import { LabScoreChart } from "@/components/lesson/lab-score-chart";
 import { AppFrame } from "@/components/shell/app-frame";
+import { buttonClass } from "@/components/ui/button-class";
 import { Card } from "@/components/ui/card";
 import { formatDayRange } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
 import { listCohortsByMember } from "@/db/queries/cohorts";
 import { requireRouteAccess } from "@/lib/auth/current-user";
+import { getCourseProgress, type CourseProgress } from "@/lib/progress";
 
 export const metadata: Metadata = { title: "Your course" };
 
+function NextStep({ progress }: { progress: CourseProgress }) {
+  const next = progress.next;
+  const total = progress.lessons.length;
+  if (!next) {
+    return (
+      <Card className="border-ok/40 bg-ok-soft">
+        <p className="text-sm font-semibold uppercase tracking-wide text-ok">Course finished</p>
+        <h2 className="mt-1 text-2xl font-semibold tracking-tight">Every lesson is done</h2>
+        <p className="mt-2 text-ink-soft">You can go back to any lesson or lab to revise.</p>
+      </Card>
+    );
+  }
+  const started = next.startedAt !== null || next.checks.answered > 0 || (next.lab?.attempts ?? 0) > 0;
+  const todo = [
+    next.checks.correct < next.checks.total ? `${next.checks.total - next.checks.correct} quick check${next.checks.total - next.checks.correct === 1 ? "" : "s"} to answer` : null,
+    next.lab && !next.lab.passed ? "the lab to pass" : null,
+  ].filter(Boolean);
+  return (
+    <Card className="border-accent/40">
+      <p className="text-sm font-semibold uppercase tracking-wide text-copper">Up next · lesson {next.number} of {total}</p>
+      <h2 className="mt-1 text-2xl font-semibold tracking-tight">{next.title}</h2>
+      <p className="mt-2 max-w-2xl text-ink-soft">{next.summary}</p>
+      {started && todo.length > 0 ? <p className="mt-2 text-sm font-medium text-ink">Still to do: {todo.join(" and ")}.</p> : null}
+      <Link href={`/lessons/${next.slug}`} className={buttonClass("primary", "mt-5 px-5 py-3 text-base")}>
+        {started ? `Continue lesson ${next.number}` : `Start lesson ${next.number}`}
+        <span aria-hidden="true">→</span>
+      </Link>
+    </Card>
+  );
+}
+
 export default async function LearnerHomePage() {
   const user = await requireRouteAccess("/learn");
-  const cohorts = await listCohortsByMember({ userId: user.id, role: "learner" });
+  const [cohorts, progress] = await Promise.all([listCohortsByMember({ userId: user.id, role: "learner" }), getCourseProgress({ userId: user.id })]);
   const firstName = user.name.split(/\s+/)[0];
+  const total = progress.lessons.length;
+  const scores = progress.lessons.flatMap((lesson) =>
+    lesson.lab ? [{ lesson: lesson.number, title: lesson.lab.title, bestScore: lesson.lab.bestScore, passed: lesson.lab.passed }] : [],
+  );
 
   return (
     <AppFrame user={user}>
       <PageHeading
-        eyebrow="Your course"
+        eyebrow={progress.course.title}
         title={`Welcome, ${firstName}`}
-        lead="Work through the lessons in order. Each one ends in a lab on the workbench, where the line simulator gives your design a verdict."
+        lead={`${progress.lessonsDone} of ${total} lessons done · ${progress.labsPassed} of ${scores.length} labs passed`}
       />
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
-        <Card>
-          <h2 className="text-lg font-semibold">Course map</h2>
-          <p className="mt-2 text-ink-soft">
-            The lessons come here: from the pixel data stream and logic levels, through edges, cables as transmission
-            lines and reflections, to series termination and designing a real run.
-          </p>
-          <p className="mt-4 rounded-lg border border-dashed border-line-strong bg-sunken px-4 py-3 text-sm text-ink-soft">
-            Your instructor will tell you when the first lesson opens.
-          </p>
-        </Card>
-        <Card>
-          <h2 className="text-lg font-semibold">Your cohort</h2>
-          {cohorts.length === 0 ? (
-            <p className="mt-2 text-ink-soft">You are not in a cohort yet. Your school&apos;s admin can add you.</p>
-          ) : (
-            <ul className="mt-3 space-y-4">
-              {cohorts.map((cohort) => (
-                <li key={cohort.id}>
-                  <p className="font-medium">{cohort.name}</p>
-                  <p className="text-sm text-ink-soft">{formatDayRange(cohort.startsOn, cohort.endsOn)}</p>
-                  {cohort.instructorNames.length > 0 ? (
-                    <p className="text-sm text-ink-soft">Instructor: {cohort.instructorNames.join(", ")}</p>
-                  ) : null}
-                </li>
-              ))}
-            </ul>
-          )}
-        </Card>
+        <div className="space-y-6">
+          <NextStep progress={progress} />
+          <Card>
+            <h2 className="text-lg font-semibold">Course map</h2>
+            <p className="mt-1 mb-4 text-sm text-ink-soft">
+              A lesson is done when its lab is passed on the workbench and each of its quick checks has been answered
+              correctly at least once.{" "}
+              {progress.course.unlockInOrder
+                ? "Lessons open in order: each one opens when the lesson before it is done."
+                : "Every lesson is open: take them in the order that suits you."}
+            </p>
+            <CourseMap progress={progress} />
+          </Card>
+        </div>
+        <div className="space-y-6">
+          <Card>
+            <h2 className="text-lg font-semibold">Best lab scores</h2>
+            <p className="mt-1 text-sm text-ink-soft">Out of 100, one bar per lesson&apos;s lab; ✓ marks a pass.</p>
+            {scores.some((s) => s.bestScore !== null) ? (
+              <div className="mt-3">
+                <LabScoreChart scores={scores} />
+              </div>
+            ) : (
+              <p className="mt-3 rounded-lg border border-dashed border-line-strong bg-sunken px-4 py-3 text-sm text-ink-soft">
+                Your scores appear here once you submit your first lab.
+              </p>
+            )}
+          </Card>
+          <Card>
+            <h2 className="text-lg font-semibold">Your cohort</h2>
+            {cohorts.length === 0 ? (
+              <p className="mt-2 text-ink-soft">You are not in a cohort yet. Your school&apos;s admin can add you.</p>
+            ) : (
+              <ul className="mt-3 space-y-4">
+                {cohorts.map((cohort) => (
+                  <li key={cohort.id}>
+                    <p className="font-medium">{cohort.name}</p>
+                    <p className="text-sm text-ink-soft">{formatDayRange(cohort.startsOn, cohort.endsOn)}</p>
+                    {cohort.instructorNames.length > 0 ? (
+                      <p className="text-sm text-ink-soft">Instructor: {cohort.instructorNames.join(", ")}</p>
+                    ) : null}
+                  </li>
+                ))}
+              </ul>
+            )}
+          </Card>
+        </div>
       </div>
     </AppFrame>
   );

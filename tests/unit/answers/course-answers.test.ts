@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatInUnit, gradeNumericAnswer } from "@/lib/answers";
+import { describeExpectedEntry, formatInUnit, gradeNumericAnswer } from "@/lib/answers";
 import { getCourse, type NumericAnswer } from "@/lessons";
 
 // Every numeric answer in the course, graded by the real grader: the answer typed in its own unit
@@ -20,5 +20,13 @@ describe("every numeric answer in the course can be typed and graded", () => {
     expect(gradeNumericAnswer(typed, answer)).toMatchObject({ status: "correct" });
     expect(gradeNumericAnswer(formatInUnit(answer.value * 1.1, answer.unit), answer)).toMatchObject({ status: "incorrect" });
     if (answer.unit !== "") expect(gradeNumericAnswer("3 kg", answer)).toMatchObject({ status: "unreadable", problem: "wrong-dimension" });
+  });
+});
+
+describe("the answer field's example", () => {
+  it.each(answers)("never gives away the answer to $where", ({ answer }) => {
+    const example = describeExpectedEntry(answer.unit).replace(/^.*e\.g\. /, "");
+    expect(gradeNumericAnswer(example, answer).correct).toBe(false);
+    expect(gradeNumericAnswer(example, answer).status).not.toBe("unreadable");
   });
 });

@@ -1,0 +1,122 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { LessonFigure } from "@/components/figures/lesson-figure";
+import { BenchExerciseBrief } from "@/components/lesson/bench-exercise-brief";
+import { CautionCallout } from "@/components/lesson/caution-callout";
+import { LabCard } from "@/components/lesson/lab-card";
+import { LessonMarkdown } from "@/components/lesson/lesson-markdown";
+import { LessonNeighbours } from "@/components/lesson/lesson-neighbours";
+import { LessonRail } from "@/components/lesson/lesson-rail";
+import { QuickCheckForm, type SavedCheck } from "@/components/lesson/quick-check-form";
+import { lessonSections } from "@/components/lesson/section-headings";
+import { AppFrame } from "@/components/shell/app-frame";
+import { listQuickCheckStatesByLesson } from "@/db/queries/quick-checks";
+import { getCourse, getLesson } from "@/lessons";
+import { describeExpectedEntry } from "@/lib/answers";
+import { requireRouteAccess } from "@/lib/auth/current-user";
+import { getCourseProgress, recordLessonOpened } from "@/lib/progress";
+import { answerQuickCheck } from "./actions";
+import { LockedLesson } from "./locked-lesson";
+
+type Props = { params: Promise<{ lessonSlug: string }> };
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const lesson = getLesson((await params).lessonSlug);
+  return { title: lesson ? `Lesson ${lesson.number}: ${lesson.title}` : "Lesson" };
+}
+
+export default async function LessonPage({ params }: Props) {
+  const { lessonSlug } = await params;
+  const user = await requireRouteAccess("/lessons/[lessonSlug]", { lessonSlug });
+  const lesson = getLesson(lessonSlug);
+  if (!lesson) notFound();
+
+  const progress = await getCourseProgress({ userId: user.id });
+  const view = progress.lessons.find((entry) => entry.slug === lesson.slug)!;
+  if (view.state === "locked") {
+    return (
+      <AppFrame user={user}>
+        <LockedLesson lesson={view} />
+      </AppFrame>
+    );
+  }
+
+  await recordLessonOpened({ userId: user.id, lessonSlug: lesson.slug });
+  const saved = new Map((await listQuickCheckStatesByLesson({ userId: user.id, lessonSlug: lesson.slug })).map((s) => [s.checkId, s]));
+  const checkIds = lesson.blocks.flatMap((block) => (block.kind === "check" ? [block.id] : []));
+  const sections = lessonSections(lesson.blocks);
+  const course = getCourse();
+  const index = course.lessons.findIndex((entry) => entry.slug === lesson.slug);
+
+  return (
+    <AppFrame user={user}>
+      <nav aria-label="Breadcrumb" className="mb-4 text-sm text-ink-soft">
+        <Link href="/learn" className="font-medium text-accent no-underline hover:underline">
+          Course map
+        </Link>
+        <span aria-hidden="true" className="mx-2 text-ink-faint">
+          /
+        </span>
+        <span aria-current="page">Lesson {lesson.number}</span>
+      </nav>
+      <header className="mb-8 max-w-3xl">
+        <p className="text-sm font-semibold uppercase tracking-wide text-copper">
+          Lesson {lesson.number} of {course.lessons.length} · about {lesson.minutes} minutes
+          {view.state === "done" ? " · done ✓" : ""}
+        </p>
+        <h1 className="mt-1 text-3xl font-semibold tracking-tight text-ink sm:text-4xl">{lesson.title}</h1>
+        <p className="mt-3 text-base text-ink-soft sm:text-lg">{lesson.summary}</p>
+      </header>
+
+      <div className="lg:grid lg:grid-cols-[minmax(0,1fr)_16rem] lg:gap-12">
+        <div className="min-w-0">
+          <LessonRail sections={sections} progress={view} variant="inline" />
+          <article className="max-w-[44rem]">
+            {lesson.blocks.map((block, i) => {
+              switch (block.kind) {
+                case "text":
+                  return <LessonMarkdown key={i} markdown={block.markdown} />;
+                case "caution":
+                  return <CautionCallout key={i} title={block.title} markdown={block.markdown} />;
+                case "figure":
+                  return <LessonFigure key={i} block={block} />;
+                case "check": {
+                  const state = saved.get(block.id);
+                  const savedCheck: SavedCheck = {
+                    answers: state?.answers ?? 0,
+                    lastEntry: state?.lastEntry ?? null,
+                    correctEntry: state?.correctEntry ?? null,
+                  };
+                  return (
+                    <QuickCheckForm
+                      key={block.id}
+                      action={answerQuickCheck}
+                      lessonSlug={lesson.slug}
+                      checkId={block.id}
+                      number={checkIds.indexOf(block.id) + 1}
+                      total={checkIds.length}
+                      prompt={<LessonMarkdown markdown={block.prompt} />}
+                      hint={<LessonMarkdown markdown={block.hint} />}
+                      explanation={savedCheck.correctEntry !== null ? <LessonMarkdown markdown={block.explanation} /> : null}
+                      expected={describeExpectedEntry(block.answer.unit)}
+                      saved={savedCheck}
+                    />
+                  );
+                }
+              }
+            })}
+            {lesson.lab && view.lab ? <LabCard lab={lesson.lab} progress={view.lab} /> : null}
+            {lesson.bench ? <BenchExerciseBrief exercise={lesson.bench} /> : null}
+            <LessonNeighbours previous={course.lessons[index - 1]} next={progress.lessons[index + 1]} />
+          </article>
+        </div>
+        <aside className="hidden lg:block" aria-label="In this lesson">
+          <div className="sticky top-6 max-h-[calc(100dvh-3rem)] overflow-y-auto pb-6">
+            <LessonRail sections={sections} progress={view} variant="side" />
+          </div>
+        </aside>
+      </div>
+    </AppFrame>
+  );
+}
