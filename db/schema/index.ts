@@ -7,3 +7,4 @@ export * from "./password-resets";
 export * from "./sign-in-attempts";
 export * from "./course";
 export * from "./bench";
+export * from "./certificates";
