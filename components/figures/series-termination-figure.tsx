@@ -30,6 +30,7 @@ export function SeriesTerminationFigure({ params, caption, resistorValues }: { p
   const vHigh = result ? result.receiver.highThreshold * result.receiver.supplyVoltage : 0;
   const vLow = result ? result.receiver.lowThreshold * result.receiver.supplyVoltage : 0;
   const failure = result?.verdict.reasons.find((reason) => reason.severity === "fail");
+  const warning = result?.verdict.reasons.find((reason) => reason.severity === "warning");
 
   return (
     <FigureFrame
@@ -60,7 +61,11 @@ export function SeriesTerminationFigure({ params, caption, resistorValues }: { p
             </p>
             <p className="font-medium">
               Sent <span className="font-mono">{params.bits}</span>, the pixel reads <span className="font-mono">{result.decoded || "nothing"}</span>
-              {result.verdict.pass ? ": the run works." : `: it fails — ${failure?.message ?? "bits are lost"}`}
+              {result.verdict.pass
+                ? warning
+                  ? `: the run works, but ${warning.message}`
+                  : ": the run works."
+                : `: it fails — ${failure?.message ?? "bits are lost"}`}
               {pending ? " (updating…)" : ""}
             </p>
           </div>

@@ -9,6 +9,9 @@ export type Level = { y: number; label: string; tone: Tone; dash?: Dash };
 export type Band = { from: number; to: number; label: string; tone: Tone };
 export type Mark = { x: number; label?: string; tone: Tone; dash?: Dash };
 export type Span = { from: number; to: number; y: number; label: string; tone: Tone };
+// A paper-coloured outline behind labels keeps them readable where they cross a trace.
+const halo = { stroke: "var(--color-surface)", strokeWidth: 3, paintOrder: "stroke", strokeLinejoin: "round" } as const;
+
 export type Note = { x: number; y: number; text: string; tone: Tone; bold?: boolean };
 
 
@@ -107,7 +110,7 @@ export function WaveChart({
                 strokeWidth={1.2}
               />
               {mark.label ? (
-                <text x={sx(mark.x) + 3} y={margin.top + 10} fontSize={10} fill={tone[mark.tone]}>
+                <text x={sx(mark.x) + 3} y={margin.top + 10} fontSize={10} fill={tone[mark.tone]} {...halo}>
                   {mark.label}
                 </text>
               ) : null}
@@ -124,7 +127,7 @@ export function WaveChart({
                 strokeDasharray={dash[level.dash ?? "dashed"]}
                 strokeWidth={1.3}
               />
-              <text x={width - margin.right - 4} y={sy(level.y) - 4} textAnchor="end" fontSize={11} fill={tone[level.tone]}>
+              <text x={width - margin.right - 4} y={sy(level.y) - 4} textAnchor="end" fontSize={11} fill={tone[level.tone]} {...halo}>
                 {level.label}
               </text>
             </g>
@@ -145,13 +148,13 @@ export function WaveChart({
               <line x1={sx(span.from)} x2={sx(span.to)} y1={sy(span.y)} y2={sy(span.y)} stroke={tone[span.tone]} strokeWidth={2} />
               <line x1={sx(span.from)} x2={sx(span.from)} y1={sy(span.y) - 5} y2={sy(span.y) + 5} stroke={tone[span.tone]} strokeWidth={2} />
               <line x1={sx(span.to)} x2={sx(span.to)} y1={sy(span.y) - 5} y2={sy(span.y) + 5} stroke={tone[span.tone]} strokeWidth={2} />
-              <text x={(sx(span.from) + sx(span.to)) / 2} y={sy(span.y) - 7} textAnchor="middle" fontSize={11} fontWeight={600} fill={tone[span.tone]}>
+              <text x={(sx(span.from) + sx(span.to)) / 2} y={sy(span.y) - 7} textAnchor="middle" fontSize={11} fontWeight={600} fill={tone[span.tone]} {...halo}>
                 {span.label}
               </text>
             </g>
           ))}
           {notes.map((note, i) => (
-            <text key={`n${i}`} x={sx(note.x)} y={sy(note.y)} textAnchor="middle" fontSize={12} fontWeight={note.bold ? 700 : 500} fill={tone[note.tone]}>
+            <text key={`n${i}`} x={sx(note.x)} y={sy(note.y)} textAnchor="middle" fontSize={12} fontWeight={note.bold ? 700 : 500} fill={tone[note.tone]} {...halo}>
               {note.text}
             </text>
           ))}

@@ -1,7 +1,7 @@
 import type { NumericAnswer } from "@/lessons/schema";
 import { evaluateEntry, type EntryValue } from "./evaluate-entry";
 import { normalizeEntry } from "./normalize-entry";
-import { quantityMath } from "./quantity-math";
+import { quantityMath, type QuantityUnit } from "./quantity-math";
 import { describeQuantity, displayUnit, exampleEntry } from "./quantity-kinds";
 
 /** Longer entries are refused before parsing: no worked answer needs more, and parsing stays cheap. */
@@ -48,6 +48,18 @@ function numericValue(value: EntryValue): number {
   return typeof value === "number" ? value : value.toSI().toNumber();
 }
 
+// mathjs reads "1/1.25 us" as (1/1.25) us, a time. When the entry divides by a number written
+// with a unit and dividing by that quantity would have given the kind asked for, the learner
+// almost certainly meant the latter.
+const divisionByNumberWithUnit = /\/\s*[\d.]+(e[-+]?\d+)?\s*[a-zA-Z\u00b5\u03bc\u03a9]/;
+
+function bracketAdvice(entry: string, value: EntryValue, expected: number | QuantityUnit): string {
+  if (!divisionByNumberWithUnit.test(entry) || typeof value === "number" || typeof expected === "number") return "";
+  const inverse = quantityMath.divide(1, value) as unknown as EntryValue;
+  if (typeof inverse === "number" || !inverse.equalBase(expected)) return "";
+  return " To divide by a quantity, put it in brackets with its unit, e.g. 1/(2 ms).";
+}
+
 /**
  * Reads a learner's entry ("330 ns", "0.33 µs", "2.2*270 ohm*600 pF") as a quantity of the same
  * kind as `unit` and returns its value in SI. `unit` is a mathjs unit ("ns", "ohm", "pF/m"), or ""
@@ -81,7 +93,7 @@ export function parseQuantity(entry: string, unit: string): ParsedQuantity {
   const sameKind = typeof expected === "number" ? describeQuantity(value) === "a plain number" : typeof value !== "number" && value.equalBase(expected);
   if (!sameKind) {
     const askFor = unit === "" ? "a plain number, without a unit" : expectedKind;
-    return fail("wrong-dimension", `${quoted(entry)} is ${describeQuantity(value)}; this asks for ${askFor}.`);
+    return fail("wrong-dimension", `${quoted(entry)} is ${describeQuantity(value)}; this asks for ${askFor}.${bracketAdvice(entry, value, expected)}`);
   }
 
   const si = numericValue(value);

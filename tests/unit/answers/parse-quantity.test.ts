@@ -53,6 +53,15 @@ describe("parseQuantity says clearly what is wrong with an entry", () => {
     expect(parseQuantity("3 V*s", "ns").ok).toBe(false);
   });
 
+  it("explains that a unit after a division belongs to the number before it", () => {
+    expect(parseQuantity("1/1.25 us", "kHz")).toMatchObject({
+      problem: "wrong-dimension",
+      message: "'1/1.25 us' is a time; this asks for a frequency. To divide by a quantity, put it in brackets with its unit, e.g. 1/(2 ms).",
+    });
+    expect(parseQuantity("1/(1.25 us)", "kHz")).toMatchObject({ ok: true, value: expect.closeTo(800e3, 6) });
+    expect(parseQuantity("2 ns/m", "ns")).toMatchObject({ message: "'2 ns/m' is a delay per metre; this asks for a time." });
+  });
+
   it("refuses a bare number when a unit is expected, and suggests the entry with its unit", () => {
     expect(parseQuantity("330", "ns")).toEqual({
       ok: false,
