@@ -8,6 +8,7 @@ import type { Role } from "./permissions";
 export const protectedRoutes = {
   "/learn": ["learner"],
   "/lessons/[lessonSlug]": ["learner"],
+  "/labs/[labSlug]": ["learner"],
   "/cohorts": ["instructor"],
   "/cohorts/[cohortId]": ["instructor"],
   "/admin": ["admin"],

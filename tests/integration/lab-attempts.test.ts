@@ -8,8 +8,9 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { GET as getAttempt } from "@/app/api/labs/[labSlug]/attempts/[attemptId]/route";
 import { GET as listAttempts, POST as submitAttempt } from "@/app/api/labs/[labSlug]/attempts/route";
 import { db } from "@/db/client";
+import { markLessonsCompleted } from "@/db/queries/progress";
 import { cohortMemberships, labAttempts } from "@/db/schema";
-import { getLab, judgeRun, labVariant } from "@/lessons";
+import { getCourse, getLab, getLessonOfLab, judgeRun, labVariant } from "@/lessons";
 import { createSession } from "@/lib/auth/session-store";
 import { gradeAttempt, type AttemptView, type VerdictLine } from "@/lib/grading";
 import { simulateRun, type SimInput } from "@/lib/sim";
@@ -23,9 +24,17 @@ const failing = { main: { seriesResistance: 33 } };
 
 type Person = { id: string; cookie: string };
 
-async function signedIn(role: "learner" | "instructor", cohortId?: string): Promise<Person> {
+/** A learner who has finished the lessons before the lab's own, so its workbench is open. */
+async function readyForLab(userId: string, labSlug = LAB) {
+  const number = getLessonOfLab(labSlug)!.number;
+  const earlier = getCourse().lessons.filter((lesson) => lesson.number < number);
+  await markLessonsCompleted({ userId, completions: earlier.map((lesson) => ({ lessonSlug: lesson.slug, completedAt: new Date() })) });
+}
+
+async function signedIn(role: "learner" | "instructor", cohortId?: string, options: { ready?: boolean } = {}): Promise<Person> {
   const person = await createPerson({ role, password: "bench and scope" });
   if (cohortId) await db.insert(cohortMemberships).values({ cohortId, userId: person.id, role });
+  if (role === "learner" && options.ready !== false) await readyForLab(person.id);
   const cookie = await createSession(person.id);
   return { id: person.id, cookie: `${cookie.name}=${cookie.value}` };
 }
@@ -75,6 +84,14 @@ describe("POST /api/labs/[labSlug]/attempts", () => {
     expect(status).toBe(403);
     expect(json.error.code).toBe("forbidden");
     expect(await db.select().from(labAttempts).where(eq(labAttempts.userId, instructor.id))).toHaveLength(0);
+  });
+
+  it("answers 403 for a lab whose lesson is still locked, naming the lesson to finish", async () => {
+    const newcomer = await signedIn("learner", cohortId, { ready: false });
+    const { status, json } = await submit(newcomer, { choices: passing, idempotencyKey: randomUUID() });
+    expect(status).toBe(403);
+    expect(json.error.message).toMatch(/opens when lesson 5, .+, is done/);
+    expect(await rowsOf(newcomer.id)).toHaveLength(0);
   });
 
   it("answers 404 for a lab that does not exist", async () => {

@@ -2,8 +2,9 @@ import "server-only";
 import type { NextResponse } from "next/server";
 import { decideRoleAccess } from "@/lib/auth/access";
 import { sessionCookieName, validateSessionToken, type SessionCookie, type SessionUser } from "@/lib/auth/session-store";
-import { getLab, type Lab } from "@/lessons";
+import { getLab, getLessonOfLab, type Lab } from "@/lessons";
 import { AppError } from "@/lib/http/errors";
+import { findLessonProgressView } from "@/lib/progress";
 
 // Route handlers answer in JSON: no redirect to sign-in and no 403 page, but 401 and 403 bodies.
 // The session is read from the request itself, so the handlers run the same under a test.
@@ -32,6 +33,15 @@ export function findLab(labSlug: string): Lab {
   const lab = getLab(labSlug);
   if (!lab) throw new AppError("not-found", "There is no lab with that name.");
   return lab;
+}
+
+/** Labs open in lesson order, as their lessons do: grading a locked one is refused, not only hidden. */
+export async function requireOpenLab(user: SessionUser, lab: Lab): Promise<void> {
+  const lesson = getLessonOfLab(lab.slug);
+  const view = lesson ? await findLessonProgressView({ userId: user.id, lessonSlug: lesson.slug }) : undefined;
+  if (view?.state === "locked" && view.waitsFor) {
+    throw new AppError("forbidden", `This lab opens when lesson ${view.waitsFor.number}, ${view.waitsFor.title}, is done.`);
+  }
 }
 
 /** Carries a session extension back to the browser, as pages cannot. */

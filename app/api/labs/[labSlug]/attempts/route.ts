@@ -6,7 +6,7 @@ import { gradeWork, outcomeOf, scoreWork, toAttemptView, variantSeedFor, verdict
 import { invalidInput, issuesOf } from "@/lib/grading/input-error";
 import { AppError } from "@/lib/http/errors";
 import { errorResponse } from "@/lib/http/respond";
-import { findLab, requireLearner, withSession } from "../../learner-request";
+import { findLab, requireLearner, requireOpenLab, withSession } from "../../learner-request";
 
 export const dynamic = "force-dynamic";
 
@@ -35,6 +35,7 @@ export async function POST(request: Request, context: Context): Promise<NextResp
   try {
     const learner = await requireLearner(request);
     const lab = findLab((await context.params).labSlug);
+    await requireOpenLab(learner.user, lab);
     const body = submissionSchema.safeParse(await readJson(request));
     if (!body.success) throw invalidInput(issuesOf(body.error));
     const { user } = learner;

@@ -1,0 +1,2 @@
+export { ScopeView } from "./scope-view";
+export { formatMilliamps, formatOptionalTime, formatTime, formatVolts } from "./format";

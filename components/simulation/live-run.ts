@@ -1,0 +1,20 @@
+import type { RunMetrics, SimBit, SimLine, SimInput, Verdict } from "@/lib/sim";
+
+/** A simulated run as the browser draws it: fine-grained traces as typed arrays, plus what decoding found. */
+export type LiveRun = {
+  /** Uniform samples (s, V); fine enough to show a 3 ns edge when zoomed. */
+  trace: { time: Float64Array; nearEnd: Float64Array; farEnd: Float64Array };
+  decoded: string;
+  bits: SimBit[];
+  metrics: RunMetrics;
+  verdict: Verdict;
+  line: SimLine;
+  receiver: { supplyVoltage: number; highThreshold: number; lowThreshold: number };
+  timing: { bitPeriod: number; zeroHigh: number; oneHigh: number; leadIn: number };
+  /** Time the worker spent simulating (ms). */
+  computeMs: number;
+};
+
+export type SimulationRequest = { id: number; input: SimInput };
+
+export type SimulationReply = { id: number; ok: true; run: LiveRun } | { id: number; ok: false; error: string };

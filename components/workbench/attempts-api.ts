@@ -1,0 +1,54 @@
+import type { LabChoices } from "@/lessons";
+import type { AttemptView, VerdictLine } from "@/lib/grading";
+import type { SimInput } from "@/lib/sim";
+
+// The workbench's calls to the attempt routes. Errors carry the server's sentence and, for a 422,
+// the messages per field, so the form can show them where they belong.
+
+export type Submission = { choices: LabChoices; answers?: Record<string, string>; idempotencyKey: string };
+export type SubmitReply = { attempt: AttemptView; score: number; passed: boolean; reasons: VerdictLine[]; replayed: boolean };
+export type StoredRun = { runId: string; label: string; input: SimInput };
+
+export class AttemptRequestError extends Error {
+  override name = "AttemptRequestError";
+  constructor(
+    message: string,
+    readonly status: number,
+    readonly fieldErrors: Record<string, string[]> = {},
+  ) {
+    super(message);
+  }
+
+  /** The request never got an answer: the same submission may be sent again with the same key. */
+  get retryable(): boolean {
+    return this.status === 0 || this.status >= 500;
+  }
+}
+
+async function call<T>(url: string, init?: RequestInit): Promise<T> {
+  let response: Response;
+  try {
+    response = await fetch(url, { ...init, headers: { accept: "application/json", ...init?.headers }, cache: "no-store" });
+  } catch {
+    throw new AttemptRequestError("The workbench could not reach the server. Check the connection and try again.", 0);
+  }
+  const body = (await response.json().catch(() => null)) as (T & { error?: { message: string; fieldErrors?: Record<string, string[]> } }) | null;
+  if (!response.ok || body === null) {
+    throw new AttemptRequestError(body?.error?.message ?? `The server answered ${response.status}.`, response.status, body?.error?.fieldErrors);
+  }
+  return body;
+}
+
+const attemptsUrl = (labSlug: string) => `/api/labs/${encodeURIComponent(labSlug)}/attempts`;
+
+export function submitAttempt(labSlug: string, submission: Submission): Promise<SubmitReply> {
+  return call(attemptsUrl(labSlug), { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(submission) });
+}
+
+export async function listAttempts(labSlug: string): Promise<AttemptView[]> {
+  return (await call<{ attempts: AttemptView[] }>(attemptsUrl(labSlug))).attempts;
+}
+
+export function fetchAttempt(labSlug: string, attemptId: string): Promise<{ attempt: AttemptView; runs: StoredRun[] }> {
+  return call(`${attemptsUrl(labSlug)}/${encodeURIComponent(attemptId)}`);
+}

@@ -1,0 +1,72 @@
+"use client";
+
+import { useLiveSimulation } from "@/components/simulation";
+import { ScopeView } from "@/components/scope-view";
+import type { PassRule } from "@/lessons/schema";
+import type { SimInput } from "@/lib/sim";
+import { previewJudgement } from "./rule-preview";
+
+function SimulationBadge({ pending, roundTripMs, computeMs }: { pending: boolean; roundTripMs: number | null; computeMs: number | null }) {
+  const text = pending ? "simulating…" : roundTripMs === null ? "" : `${Math.round(roundTripMs)} ms`;
+  return (
+    <span
+      className="rounded-full border border-line bg-sunken px-2.5 py-0.5 text-xs tabular-nums text-ink-soft"
+      title={computeMs === null || roundTripMs === null ? undefined : `Simulated in ${computeMs.toFixed(1)} ms in the worker; ${roundTripMs.toFixed(1)} ms from handing it the input to having the result back`}
+      data-testid="resimulation-time"
+      data-pending={pending}
+    >
+      <span className="sr-only">Re-simulation time: </span>
+      {text}
+    </span>
+  );
+}
+
+/**
+ * "Try on the bench": the run re-simulated in the browser's worker as the controls move, drawn on
+ * the scope view, with the lab's pass rule applied to it as a preview. Grading happens only on submit.
+ */
+export function BenchPreview({ input, rule, caption, note }: { input: SimInput; rule: PassRule; caption: string; note?: React.ReactNode }) {
+  const live = useLiveSimulation(input);
+  const run = live.result;
+  const judgement = run ? previewJudgement(rule, run) : null;
+
+  return (
+    <div data-testid="bench-preview" data-pending={live.pending}>
+      {live.error ? (
+        <p role="alert" className="mb-3 rounded-lg border border-danger/30 bg-danger-soft px-3 py-2 text-sm text-danger">
+          The simulator could not run this: {live.error}
+        </p>
+      ) : null}
+      {run ? (
+        <>
+          {note}
+          <ScopeView run={run} stale={live.pending} caption={caption}>
+            <SimulationBadge pending={live.pending} roundTripMs={live.roundTripMs} computeMs={run.computeMs} />
+          </ScopeView>
+          {judgement ? (
+            <div
+              className={`mt-4 rounded-lg border p-4 text-sm ${judgement.pass ? "border-ok/30 bg-ok-soft" : "border-copper/30 bg-copper-soft"}`}
+              data-testid="rule-preview"
+            >
+              <p className="font-semibold">
+                {judgement.pass ? "✓ On the bench this run meets the lab's rule." : "✗ On the bench this run does not yet meet the lab's rule:"}{" "}
+                <span className="font-normal text-ink-soft">(a preview; only a submitted attempt is graded)</span>
+              </p>
+              {judgement.failures.length > 0 ? (
+                <ul className="mt-2 list-disc space-y-1 pl-5">
+                  {judgement.failures.map((failure) => (
+                    <li key={failure.code}>{failure.message}</li>
+                  ))}
+                </ul>
+              ) : null}
+            </div>
+          ) : null}
+        </>
+      ) : (
+        <div className="flex h-72 items-center justify-center rounded-lg border border-dashed border-line-strong bg-sunken text-sm text-ink-soft" aria-live="polite">
+          {live.error ? "No waveform to show." : "Starting the simulator…"}
+        </div>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,199 @@
+"use client";
+
+import { QueryClient, QueryClientProvider, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useRef, useState } from "react";
+import type { LabChoices } from "@/lessons";
+import { buildSimInput } from "@/lessons/build-run";
+import type { RunChoices } from "@/lessons/schema";
+import type { AttemptView } from "@/lib/grading";
+import type { SimInput } from "@/lib/sim";
+import { AttemptHistory } from "./attempt-history";
+import { AttemptRequestError, fetchAttempt, listAttempts, submitAttempt, type Submission, type SubmitReply } from "./attempts-api";
+import type { BenchSetup } from "./bench-types";
+import { BenchPreview } from "./bench-preview";
+import { ChoiceControls } from "./choice-controls";
+import { RunDrawing } from "./run-drawing";
+import { describeChoices, runFacts } from "./run-facts";
+import { RunTabs } from "./run-tabs";
+import { ScenarioWords } from "./scenario-words";
+import { SourceReadout } from "./source-readout";
+import { SubmitPanel, type QuestionText } from "./submit-panel";
+
+type Props = { setup: BenchSetup; questionTexts: Record<string, QuestionText> };
+
+type Replay = { attempt: AttemptView; inputs: Record<string, SimInput> };
+
+/** The key of one submission: kept while the same submission is retried after a lost answer, new for anything else. */
+type PendingKey = { payload: string; key: string };
+
+export function Workbench(props: Props) {
+  const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { retry: 1, refetchOnWindowFocus: false } } }));
+  return (
+    <QueryClientProvider client={client}>
+      <WorkbenchBench {...props} />
+    </QueryClientProvider>
+  );
+}
+
+const cardClass = "rounded-card border border-line bg-surface p-4 sm:p-6";
+
+function WorkbenchBench({ setup, questionTexts }: Props) {
+  const { runs, labSlug } = setup;
+  const queryClient = useQueryClient();
+  const historyKey = ["lab-attempts", labSlug] as const;
+
+  const [choices, setChoices] = useState<LabChoices>(() => Object.fromEntries(runs.map((run) => [run.id, run.start])));
+  const [activeRunId, setActiveRunId] = useState(runs[0].id);
+  const [answers, setAnswers] = useState<Record<string, string>>({});
+  const [replay, setReplay] = useState<Replay | null>(null);
+  const [reply, setReply] = useState<SubmitReply | null>(null);
+  const pendingKey = useRef<PendingKey | null>(null);
+
+  const history = useQuery({ queryKey: historyKey, queryFn: () => listAttempts(labSlug) });
+
+  const submit = useMutation({
+    mutationFn: (submission: Submission) => submitAttempt(labSlug, submission),
+    onSuccess: (result) => {
+      pendingKey.current = null;
+      setReply(result);
+      void queryClient.invalidateQueries({ queryKey: historyKey });
+    },
+    onError: (error) => {
+      if (!(error instanceof AttemptRequestError && error.retryable)) pendingKey.current = null;
+    },
+  });
+
+  const reopen = useMutation({
+    mutationFn: (attempt: AttemptView) => fetchAttempt(labSlug, attempt.id),
+    onSuccess: ({ attempt, runs: stored }) => {
+      setReplay({ attempt, inputs: Object.fromEntries(stored.map((run) => [run.runId, run.input])) });
+    },
+  });
+
+  const activeRun = runs.find((run) => run.id === activeRunId) ?? runs[0];
+  const activeChoices = choices[activeRun.id];
+  const facts = runFacts(activeRun, activeChoices);
+  const replayInput = replay?.inputs[activeRun.id];
+  const previewInput = replayInput ?? buildSimInput(activeRun.scenario, activeChoices);
+
+  const changeChoices = (runId: string, next: RunChoices) => {
+    setReplay(null);
+    setChoices((current) => ({ ...current, [runId]: next }));
+  };
+
+  const sendSubmission = () => {
+    const submission = { choices, ...(setup.questions.length > 0 && { answers }) };
+    const payload = JSON.stringify(submission);
+    if (pendingKey.current?.payload !== payload) pendingKey.current = { payload, key: crypto.randomUUID() };
+    submit.mutate({ ...submission, idempotencyKey: pendingKey.current.key });
+  };
+
+  const submitError =
+    submit.error instanceof AttemptRequestError
+      ? { message: submit.error.message, fieldErrors: submit.error.fieldErrors }
+      : submit.error
+        ? { message: submit.error.message, fieldErrors: {} }
+        : null;
+  const nextAttempt = (history.data?.[0]?.attemptNumber ?? 0) + 1;
+
+  return (
+    <div className="space-y-6">
+      {runs.length > 1 ? <RunTabs runs={runs} activeRunId={activeRun.id} onSelect={setActiveRunId} /> : null}
+      <div role={runs.length > 1 ? "tabpanel" : undefined} id={`run-panel-${activeRun.id}`} aria-labelledby={runs.length > 1 ? `run-tab-${activeRun.id}` : undefined} className="space-y-6">
+        <section className={cardClass} aria-labelledby="run-heading">
+          <h2 id="run-heading" className="text-lg font-semibold">
+            {activeRun.label}
+          </h2>
+          <div className="mt-3">
+            <RunDrawing facts={facts} title={activeRun.label} />
+          </div>
+          <div className="mt-3">
+            <ScenarioWords run={activeRun} facts={facts} />
+          </div>
+        </section>
+
+        <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,20rem)_minmax(0,1fr)]">
+          <section className={cardClass} aria-labelledby="controls-heading">
+            <h2 id="controls-heading" className="mb-4 text-lg font-semibold">
+              Your choices
+            </h2>
+            <ChoiceControls run={activeRun} choices={activeChoices} onChange={(next) => changeChoices(activeRun.id, next)} />
+            <SourceReadout facts={facts} />
+          </section>
+          <section className={cardClass} aria-labelledby="scope-heading">
+            <h2 id="scope-heading" className="mb-3 text-lg font-semibold">
+              {replay ? `Attempt ${replay.attempt.attemptNumber} on the scope` : "Try it on the bench"}
+            </h2>
+            <BenchPreview
+              input={previewInput}
+              rule={setup.passRule}
+              caption={`Scope view of ${activeRun.label}`}
+              note={
+                replay ? (
+                  <div className="mb-4 flex flex-wrap items-center gap-3 rounded-lg border border-accent/30 bg-accent-soft px-3 py-2 text-sm" role="status">
+                    <span>
+                      Redrawn from attempt {replay.attempt.attemptNumber} as it was graded ({describeChoices(activeRun, replay.attempt.choices[activeRun.id])};{" "}
+                      {replay.attempt.score} / 100).
+                    </span>
+                    <button type="button" className="font-semibold text-accent underline underline-offset-2" onClick={() => setReplay(null)}>
+                      Back to my bench
+                    </button>
+                    <button
+                      type="button"
+                      className="font-semibold text-accent underline underline-offset-2"
+                      onClick={() => {
+                        setChoices((current) => ({ ...current, ...replay.attempt.choices }));
+                        setReplay(null);
+                      }}
+                    >
+                      Put these choices on the bench
+                    </button>
+                  </div>
+                ) : null
+              }
+            />
+          </section>
+        </div>
+      </div>
+
+      <section className={cardClass} aria-labelledby="submit-heading">
+        <h2 id="submit-heading" className="mb-4 text-lg font-semibold">
+          Grading
+        </h2>
+        <SubmitPanel
+          runs={runs}
+          questions={setup.questions}
+          questionTexts={questionTexts}
+          answers={answers}
+          onAnswer={(id, entry) => setAnswers((current) => ({ ...current, [id]: entry }))}
+          onSubmit={sendSubmission}
+          pending={submit.isPending}
+          error={submitError}
+          reply={reply}
+          nextAttempt={nextAttempt}
+          attempts={setup.attempts}
+        />
+      </section>
+
+      <section className={cardClass} aria-labelledby="history-heading">
+        <h2 id="history-heading" className="mb-2 text-lg font-semibold">
+          Your attempts
+        </h2>
+        {reopen.error ? (
+          <p role="alert" className="mb-2 text-sm text-danger">
+            {reopen.error.message}
+          </p>
+        ) : null}
+        <AttemptHistory
+          runs={runs}
+          attempts={history.data}
+          loading={history.isPending}
+          error={history.error ? history.error.message : null}
+          shownAttemptId={replay?.attempt.id ?? null}
+          openingAttemptId={reopen.isPending ? (reopen.variables?.id ?? null) : null}
+          onOpen={(attempt) => reopen.mutate(attempt)}
+        />
+      </section>
+    </div>
+  );
+}
