@@ -9,12 +9,13 @@ export type Permission =
   | "cohorts:manage"
   | "learners:manage"
   | "bench:submit"
-  | "bench:review";
+  | "bench:review"
+  | "certificates:revoke";
 
 export const rolePermissions: Record<Role, readonly Permission[]> = {
   learner: ["bench:submit"],
   instructor: ["bench:review"],
-  admin: ["invitations:create", "cohorts:manage", "learners:manage"],
+  admin: ["invitations:create", "cohorts:manage", "learners:manage", "certificates:revoke"],
 };
 
 export function hasPermission(role: Role, permission: Permission): boolean {
