@@ -9,9 +9,11 @@ export const protectedRoutes = {
   "/learn": ["learner"],
   "/lessons/[lessonSlug]": ["learner"],
   "/labs/[labSlug]": ["learner"],
+  "/certificate": ["learner"],
   "/cohorts": ["instructor"],
   "/cohorts/[cohortId]": ["instructor"],
   "/admin": ["admin"],
+  "/certificates": ["admin"],
   "/dev/mail": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
 

@@ -1,0 +1,7 @@
+"use client";
+
+import { ErrorScreen } from "@/components/ui/error-screen";
+
+export default function CertificateCheckError({ error, retry }: { error: unknown; retry: () => void }) {
+  return <ErrorScreen error={error} retry={retry} what="the certificate check" />;
+}
