@@ -14,16 +14,19 @@ export function FigureFrame({
   label: string;
   caption: string;
   controls?: ReactNode;
-  readout: ReactNode;
+  /** Omitted when the drawing carries its own summary in words (the scope view does). */
+  readout?: ReactNode;
   children: ReactNode;
 }) {
   return (
     <figure aria-label={label} className="my-10 rounded-card border border-line bg-surface">
       <div className="px-3 pt-4 sm:px-5">{children}</div>
       {controls ? <div className="space-y-4 border-t border-line px-4 py-4 sm:px-5">{controls}</div> : null}
-      <div className="border-t border-line bg-sunken/60 px-4 py-3 text-sm text-ink sm:px-5" aria-live="polite">
-        {readout}
-      </div>
+      {readout ? (
+        <div className="border-t border-line bg-sunken/60 px-4 py-3 text-sm text-ink sm:px-5" aria-live="polite">
+          {readout}
+        </div>
+      ) : null}
       <figcaption className="border-t border-line px-4 py-3 text-sm leading-6 text-ink-soft sm:px-5">{caption}</figcaption>
     </figure>
   );
