@@ -16,7 +16,7 @@ export type DeclaredFile = { name: string; size: number; type: string };
 
 export function formatFileSize(bytes: number): string {
   if (bytes < 1024 * 1024) return `${Math.max(1, Math.round(bytes / 1024))} KB`;
-  return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+  return `${Number((bytes / (1024 * 1024)).toFixed(1))} MB`;
 }
 
 /** Why these files cannot join a submission that already holds `stored` photos, or null when they can. */
@@ -33,7 +33,7 @@ export function refuseDeclaredPhotos(files: readonly DeclaredFile[], stored: num
       return `“${file.name}” is not a PNG, JPEG or WebP image. Photograph the scope screen and upload the photo itself.`;
     }
     if (file.size > benchPhotoLimits.maxBytes) {
-      return `“${file.name}” is ${formatFileSize(file.size)}; each photo may be at most ${formatFileSize(benchPhotoLimits.maxBytes)}. Export it smaller and try again.`;
+      return `“${file.name}” is larger than ${formatFileSize(benchPhotoLimits.maxBytes)}, the most a photo may be. Save it smaller and try again.`;
     }
     if (file.size === 0) return `“${file.name}” is empty.`;
   }

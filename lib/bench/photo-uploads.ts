@@ -3,7 +3,7 @@ import { countBenchPhotos, editableBenchStatuses, findBenchSubmissionOfLearner, 
 import type { SessionUser } from "@/lib/auth/session-store";
 import { readImageContent } from "@/lib/uploads/image-content";
 import { deleteStoredFiles, fetchStoredFile } from "@/lib/uploads/stored-files";
-import { benchPhotoLimits, refuseDeclaredPhotos, type DeclaredFile } from "./photo-limits";
+import { benchPhotoLimits, formatFileSize, refuseDeclaredPhotos, type DeclaredFile } from "./photo-limits";
 
 // The two halves of a bench photo upload. Before anything is sent, the upload route asks whether
 // this learner may add these files to this submission. Once the service holds the bytes, they are
@@ -61,7 +61,7 @@ export async function acceptUploadedBenchPhoto(params: {
   try {
     const bytes = await readStoredBytes(file.key);
     if (!bytes) return await reject(`“${file.name}” could not be read back from storage. Try again.`);
-    if (bytes.length > benchPhotoLimits.maxBytes) return await reject(`“${file.name}” is larger than 8 MB, so it was not kept.`);
+    if (bytes.length > benchPhotoLimits.maxBytes) return await reject(`“${file.name}” is larger than ${formatFileSize(benchPhotoLimits.maxBytes)}, so it was not kept.`);
     const image = readImageContent(bytes);
     if (!image) {
       return await reject(`“${file.name}” is not a PNG, JPEG or WebP image, whatever its name says, so it was not kept.`);

@@ -22,8 +22,10 @@ export type BenchPrediction =
     }
   | { ok: false; reason: string };
 
-const windowBefore = 60e-9;
-const windowAfter = 900e-9;
+// Long enough for a few round trips of the line, short enough that the edge itself stays readable.
+const windowBefore = 40e-9;
+const windowAfterRange = { min: 250e-9, max: 900e-9, roundTrips: 3 };
+const windowStep = 50e-9;
 const tracePoints = 500;
 
 /**
@@ -48,7 +50,8 @@ export function predictBenchRun(lesson: Lesson, stated: BenchStatedValues): Benc
     const { metrics, verdict, line, full } = result;
     const firstOne = result.bits.find((bit) => bit.sent === 1) ?? result.bits[0];
     const from = (firstOne?.start ?? 0) + line.delay - windowBefore;
-    const to = from + windowBefore + windowAfter;
+    const after = Math.min(windowAfterRange.max, Math.max(windowAfterRange.min, windowAfterRange.roundTrips * 2 * line.delay));
+    const to = from + Math.ceil((windowBefore + after) / windowStep) * windowStep;
     return {
       ok: true,
       riseTime: metrics.riseTime,

@@ -2,6 +2,7 @@ import { z } from "zod";
 import type { BenchStatedValues } from "@/db/queries/bench";
 import type { BenchExercise } from "@/lessons";
 import { formatInUnit, parseQuantity } from "@/lib/answers";
+import { displayUnit } from "@/lib/answers/quantity-kinds";
 import { CABLE_KINDS, cableCatalogue } from "@/lib/sim";
 
 // The bench form is drawn from the exercise's own asks, plus the driver's output level (the
@@ -12,7 +13,7 @@ type QuantityColumn = "lengthM" | "seriesResistanceOhm" | "driverVoltageV" | "ri
 
 export type BenchField =
   | { name: string; kind: "cable"; label: string; options: { value: string; label: string }[] }
-  | { name: string; kind: "quantity"; label: string; unit: string; column: QuantityColumn; hint: string }
+  | { name: string; kind: "quantity"; label: string; unit: string; unitLabel: string; column: QuantityColumn; hint: string }
   | { name: string; kind: "text"; label: string; long: boolean };
 
 /** Plausible ranges (SI) for what a learner states; wider than any bench run, narrow enough to catch a slipped unit. */
@@ -42,7 +43,7 @@ export function benchFormFields(exercise: BenchExercise): BenchField[] {
     if (ask.kind === "cable") return { name: ask.id, kind: "cable", label: ask.label, options: cableOptions };
     if (ask.kind === "text") return { name: ask.id, kind: "text", label: ask.label, long: true };
     const column = columnOfKind[ask.kind];
-    return { name: ask.id, kind: "quantity", label: ask.label, unit: ask.unit, column, hint: quantityRanges[column].hint };
+    return { name: ask.id, kind: "quantity", label: ask.label, unit: ask.unit, unitLabel: displayUnit(ask.unit), column, hint: quantityRanges[column].hint };
   });
   const afterCable = fields.findIndex((field) => field.kind === "cable") + 1;
   fields.splice(afterCable, 0, {
@@ -50,6 +51,7 @@ export function benchFormFields(exercise: BenchExercise): BenchField[] {
     kind: "quantity",
     label: driverVoltageField.label,
     unit: driverVoltageField.unit,
+    unitLabel: displayUnit(driverVoltageField.unit),
     column: "driverVoltageV",
     hint: quantityRanges.driverVoltageV.hint,
   });
@@ -147,4 +149,17 @@ export function entriesFromStored(exercise: BenchExercise, stored: BenchStatedVa
   }
   if (stored.note) entries[noteField.name] = stored.note;
   return entries;
+}
+
+/** The stated values as label and text, in the form's units, for reading back. */
+export function describeStatedValues(exercise: BenchExercise, stored: BenchStatedValues): { label: string; value: string }[] {
+  return benchFormFields(exercise).map((field) => {
+    if (field.kind === "cable") {
+      const kind = CABLE_KINDS.find((k) => k === stored.cableKind);
+      return { label: field.label, value: kind ? cableCatalogue[kind].label : "—" };
+    }
+    if (field.kind === "text") return { label: field.label, value: stored.textAnswers[field.name] ?? "—" };
+    const value = stored[field.column];
+    return { label: field.label, value: value === null ? "—" : formatInUnit(value, field.unit) };
+  });
 }

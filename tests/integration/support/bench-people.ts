@@ -1,8 +1,9 @@
 import { randomUUID } from "node:crypto";
 import { db } from "@/db/client";
-import { cohortMemberships, cohorts, type Role } from "@/db/schema";
+import { cohortMemberships, cohorts, users, type Role } from "@/db/schema";
+import { hashPassword } from "@/lib/auth/password";
 import { createSession, validateSessionToken, type SessionUser } from "@/lib/auth/session-store";
-import { createPerson, findDemoSchoolId } from "./people";
+import { createPerson, findDemoSchoolId, uniqueEmail } from "./people";
 
 // Two fresh cohorts of the course, each with its instructor and learners, so bench tests never
 // depend on what the seed or another test left behind.
@@ -46,4 +47,20 @@ export async function createBenchCohorts() {
     otherLearner: await createMember(home, "learner", "bench-other-learner"),
     admin: await createMember(null, "admin", "bench-admin"),
   };
+}
+
+/** A learner with a name no other test uses, in the given cohort, who signs in with `password`. */
+export async function createNamedLearner(params: { cohortId: string; name: string; password: string }) {
+  const [user] = await db
+    .insert(users)
+    .values({
+      schoolId: await findDemoSchoolId(),
+      email: uniqueEmail("bench-learner"),
+      name: params.name,
+      role: "learner",
+      passwordHash: await hashPassword(params.password),
+    })
+    .returning();
+  await db.insert(cohortMemberships).values({ cohortId: params.cohortId, userId: user!.id, role: "learner" });
+  return user!;
 }

@@ -1,0 +1,114 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useId, useState } from "react";
+import { buttonClass } from "@/components/ui/button-class";
+import { benchPhotoLimits, formatFileSize, refuseDeclaredPhotos } from "@/lib/bench/photo-limits";
+import { useUploadThing } from "@/lib/uploads/client-helpers";
+import { startBenchDraft } from "./actions";
+
+type Notice = { tone: "error" | "success"; text: string };
+
+/**
+ * Picks or takes photos and sends them through the upload route. Files are checked here first for
+ * an instant answer; the server checks them again, and checks what arrived by its content.
+ */
+export function PhotoUploader({ exerciseSlug, storedCount }: { exerciseSlug: string; storedCount: number }) {
+  const router = useRouter();
+  const inputId = useId();
+  const [notices, setNotices] = useState<Notice[]>([]);
+  const [progress, setProgress] = useState<number | null>(null);
+  const [dragging, setDragging] = useState(false);
+  const { startUpload, isUploading } = useUploadThing("benchPhoto", {
+    onUploadProgress: setProgress,
+    onUploadError: (error) => setNotices([{ tone: "error", text: error.message }]),
+  });
+  const room = benchPhotoLimits.maxPhotos - storedCount;
+  const busy = isUploading || progress !== null;
+
+  async function upload(files: File[]) {
+    setNotices([]);
+    const refusal = refuseDeclaredPhotos(files, storedCount);
+    if (refusal) return setNotices([{ tone: "error", text: refusal }]);
+    setProgress(0);
+    try {
+      const draft = await startBenchDraft(exerciseSlug);
+      if (!draft.ok) return setNotices([{ tone: "error", text: draft.message }]);
+      const results = await startUpload(files, { submissionId: draft.submissionId });
+      if (!results) return;
+      setNotices(
+        results.map((result) =>
+          "rejected" in result.serverData
+            ? { tone: "error", text: result.serverData.rejected }
+            : { tone: "success", text: `“${result.name}” added.` },
+        ),
+      );
+      router.refresh();
+    } finally {
+      setProgress(null);
+    }
+  }
+
+  function chosen(list: FileList | null) {
+    const files = [...(list ?? [])];
+    if (files.length > 0) void upload(files);
+  }
+
+  return (
+    <div className="space-y-3">
+      <div
+        onDragOver={(event) => {
+          event.preventDefault();
+          setDragging(true);
+        }}
+        onDragLeave={() => setDragging(false)}
+        onDrop={(event) => {
+          event.preventDefault();
+          setDragging(false);
+          if (!busy) chosen(event.dataTransfer.files);
+        }}
+        className={`flex flex-col items-center gap-3 rounded-lg border-2 border-dashed px-4 py-6 text-center transition-colors ${
+          dragging ? "border-accent bg-accent-soft" : "border-line-strong bg-sunken/60"
+        }`}
+      >
+        <p className="text-sm text-ink-soft">
+          {room > 0 ? "Drop photos of the scope screen and your set-up here, or" : "This submission holds the most photos it can."}
+        </p>
+        {room > 0 ? (
+          <label htmlFor={inputId} className={buttonClass("secondary", `cursor-pointer focus-within:ring-2 focus-within:ring-accent/40 ${busy ? "pointer-events-none opacity-60" : ""}`)}>
+            {busy ? `Uploading… ${progress ?? 0} %` : "Choose photos"}
+            <input
+              id={inputId}
+              type="file"
+              name="photos"
+              accept={benchPhotoLimits.contentTypes.join(",")}
+              multiple
+              disabled={busy}
+              className="sr-only"
+              onChange={(event) => {
+                chosen(event.currentTarget.files);
+                event.currentTarget.value = "";
+              }}
+            />
+          </label>
+        ) : null}
+        <p className="text-xs text-ink-faint">
+          PNG, JPEG or WebP · up to {formatFileSize(benchPhotoLimits.maxBytes)} each · {Math.max(room, 0)} of {benchPhotoLimits.maxPhotos}{" "}
+          places left
+        </p>
+      </div>
+      <div aria-live="polite" role="status" className="space-y-2">
+        {notices.map((notice, index) => (
+          <p
+            key={index}
+            className={`rounded-lg border px-3 py-2 text-sm font-medium ${
+              notice.tone === "error" ? "border-danger/30 bg-danger-soft text-danger" : "border-ok/30 bg-ok-soft text-ok"
+            }`}
+          >
+            {notice.text}
+          </p>
+        ))}
+      </div>
+    </div>
+  );
+}
