@@ -71,8 +71,8 @@ export function CableCompareFigure({ params, caption, cables }: { params: Params
         </>
       }
       readout={
-        <div className="overflow-x-auto">
-          <table className="w-full text-left text-sm tabular-nums">
+        <div className="overflow-x-auto" role="region" aria-label="Cables compared" tabIndex={0}>
+          <table className="w-full text-left text-sm whitespace-nowrap tabular-nums">
             <caption className="sr-only">Catalogue values and simulated far end per cable</caption>
             <thead>
               <tr className="text-ink">

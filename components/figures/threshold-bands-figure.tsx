@@ -28,13 +28,16 @@ export function ThresholdBandsFigure({ params, caption }: { params: Params; capt
 
   const top = Math.max(p.supplyVoltage, p.driverHighVoltage, params.slider?.max ?? 0) * 1.08;
   const sy = linearScale([0, top], [height - margin.bottom, margin.top]);
-  const bandsRight = Math.round((width - margin.left) * 0.58) + margin.left;
-  const driverX = bandsRight + Math.round((width - bandsRight) * 0.45);
+  // On a phone the bands narrow and their labels shorten, so the driver's labels keep room on the right.
+  const narrow = width < 480;
+  const bandsRight = margin.left + Math.round((width - margin.left) * (narrow ? 0.42 : 0.58));
+  const driverX = narrow ? width - 122 : bandsRight + Math.round((width - bandsRight) * 0.45);
   const regions = [
-    { from: high, to: p.supplyVoltage, label: `reads as 1 (above ${formatVolts(high)})`, fill: tone.high },
-    { from: low, to: high, label: "undefined: could read either way", fill: tone.warn },
-    { from: 0, to: low, label: `reads as 0 (below ${formatVolts(low)})`, fill: tone.low },
+    { from: high, to: p.supplyVoltage, label: narrow ? `reads 1 (≥ ${formatVolts(high)})` : `reads as 1 (above ${formatVolts(high)})`, fill: tone.high },
+    { from: low, to: high, label: narrow ? "undefined" : "undefined: could read either way", fill: tone.warn },
+    { from: 0, to: low, label: narrow ? `reads 0 (≤ ${formatVolts(low)})` : `reads as 0 (below ${formatVolts(low)})`, fill: tone.low },
   ];
+  const labelSize = narrow ? 11 : 12;
 
   return (
     <FigureFrame
@@ -78,7 +81,7 @@ export function ThresholdBandsFigure({ params, caption }: { params: Params; capt
           {regions.map((region) => (
             <g key={region.label}>
               <rect x={margin.left} width={bandsRight - margin.left} y={sy(region.to)} height={sy(region.from) - sy(region.to)} fill={region.fill} opacity={0.14} />
-              <text x={margin.left + 8} y={sy(region.to) + 16} fontSize={12} fill="var(--color-ink)">
+              <text x={margin.left + 6} y={sy(region.to) + 16} fontSize={labelSize} fill="var(--color-ink)">
                 {region.label}
               </text>
             </g>
@@ -92,7 +95,7 @@ export function ThresholdBandsFigure({ params, caption }: { params: Params; capt
             ½ VDD
           </text>
           <line x1={driverX} x2={driverX} y1={sy(0)} y2={sy(p.driverHighVoltage)} stroke={tone.signal} strokeWidth={10} strokeLinecap="butt" opacity={0.9} />
-          <text x={driverX + 10} y={sy(p.driverHighVoltage) + 4} fontSize={12} fontWeight={600} fill={tone.signal}>
+          <text x={driverX + 10} y={sy(p.driverHighVoltage) + 4} fontSize={labelSize} fontWeight={600} fill={tone.signal}>
             driver high {formatVolts(p.driverHighVoltage)}
           </text>
           <line x1={driverX - 16} x2={driverX + 16} y1={sy(high)} y2={sy(high)} stroke={tone.high} strokeWidth={2} />

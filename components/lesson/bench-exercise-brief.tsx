@@ -1,12 +1,14 @@
+import Link from "next/link";
+import { buttonClass } from "@/components/ui/button-class";
 import type { BenchExercise } from "@/lessons";
 import { displayUnit } from "@/lib/answers/quantity-kinds";
 import { LessonMarkdown } from "./lesson-markdown";
 
 /**
  * The bench exercise of lessons 7 and 8: what to build and measure, what the photo must show and
- * how it is marked. The upload form for the photo and readings belongs at the end of this section.
+ * how it is marked; the work itself is handed in on the exercise's bench page.
  */
-export function BenchExerciseBrief({ exercise, children }: { exercise: BenchExercise; children?: React.ReactNode }) {
+export function BenchExerciseBrief({ exercise }: { exercise: BenchExercise }) {
   const points = exercise.rubric.reduce((sum, item) => sum + item.points, 0);
   return (
     <section id="bench" aria-labelledby="bench-title" className="mt-10 scroll-mt-24 rounded-card border border-line bg-surface p-5 sm:p-6">
@@ -47,12 +49,15 @@ export function BenchExerciseBrief({ exercise, children }: { exercise: BenchExer
           ))}
         </ul>
       </div>
-      {children ?? (
-        <p className="mt-6 rounded-lg bg-sunken px-4 py-3 text-sm text-ink">
-          Have the photo and these readings ready: you hand them in here, in this section, and your instructor reviews them
-          against the marking above.
+      <div className="mt-6 rounded-lg bg-sunken px-4 py-3">
+        <p className="text-sm text-ink">
+          Have the photo and these readings ready, then hand them in on the bench page; your instructor reviews them against the
+          marking above.
         </p>
-      )}
+        <Link href={`/bench/${exercise.slug}`} className={buttonClass("secondary", "mt-3")}>
+          Hand in your bench work <span aria-hidden="true">→</span>
+        </Link>
+      </div>
     </section>
   );
 }
