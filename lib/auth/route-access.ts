@@ -16,6 +16,10 @@ export const protectedRoutes = {
   "/reviews": ["instructor"],
   "/reviews/[submissionId]": ["instructor"],
   "/admin": ["admin"],
+  "/admin/cohorts/new": ["admin"],
+  "/admin/cohorts/[cohortId]": ["admin"],
+  "/admin/cohorts/[cohortId]/edit": ["admin"],
+  "/admin/cohorts/[cohortId]/import": ["admin"],
   "/certificates": ["admin"],
   "/dev/mail": ["admin"],
 } as const satisfies Record<string, readonly Role[]>;

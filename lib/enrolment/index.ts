@@ -9,4 +9,4 @@ export { importRoster, previewRoster, type ImportResult, type PreviewResult, typ
 export { resendInvitation, resendWaitingInvitations, revokeInvitationLink } from "./manage-invitations";
 export { deactivateLearner, reactivateLearner } from "./learner-access";
 export { buildRoster, countRosterStates, filterRoster, rosterStateLabels, type RosterLine, type RosterState } from "./roster-status";
-export { describeUnsent, sendInvitationLetters, type LetterOutcome } from "./send-invitations";
+export { describeUnsent, isMailDeliveryError, sendInvitationLetters, type LetterOutcome } from "./send-invitations";

@@ -15,6 +15,14 @@ const parallelLetters = 16;
 // usable right now, and trying thousands more would only repeat the wait.
 const perMessageErrorCodes = new Set(["EENVELOPE", "EMESSAGE"]);
 
+const smtpErrorCodes = new Set(["ECONNECTION", "ETIMEDOUT", "ESOCKET", "EDNS", "EAUTH", "ETLS", "EPROTOCOL", "EENVELOPE", "EMESSAGE", "ESTREAMING"]);
+
+/** An error raised by the SMTP client (it names the SMTP step), as opposed to one from the database. */
+export function isMailDeliveryError(error: unknown): boolean {
+  const { code, command } = (error ?? {}) as { code?: unknown; command?: unknown };
+  return typeof code === "string" && smtpErrorCodes.has(code) && typeof command === "string";
+}
+
 function isPerMessageFailure(error: unknown): boolean {
   const code = (error as { code?: unknown } | null)?.code;
   return typeof code === "string" && perMessageErrorCodes.has(code);

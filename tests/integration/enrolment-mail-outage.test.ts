@@ -4,8 +4,8 @@ import { eq, inArray } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { invitations, users } from "@/db/schema";
-import { acceptInvitation } from "@/lib/auth/invitations";
-import { describeUnsent, enrolLearner, importRoster, resendWaitingInvitations } from "@/lib/enrolment";
+import { acceptInvitation, issueInvitation } from "@/lib/auth/invitations";
+import { describeUnsent, enrolLearner, importRoster, isMailDeliveryError, resendWaitingInvitations } from "@/lib/enrolment";
 import { findLinks } from "@/lib/mail/sink";
 import { createTestSchool, csvFile, rosterCsv, type TestSchool } from "./enrolment-fixtures";
 
@@ -66,6 +66,17 @@ describe("enrolling while the mail server is down", () => {
     expect(await db.select().from(invitations).where(eq(invitations.email, `dina@${school.domain}`))).toHaveLength(1);
   });
 
+  it("tells a failed send of the school-wide invite form apart from other failures, with the row kept", async () => {
+    const email = `eli@${school.domain}`;
+    const failure = await issueInvitation({ schoolId: school.schoolId, email, role: "instructor", cohortId: null, inviter: null }).then(
+      () => null,
+      (error: unknown) => error,
+    );
+    expect(isMailDeliveryError(failure)).toBe(true);
+    expect(isMailDeliveryError(Object.assign(new Error("database"), { code: "ECONNREFUSED" }))).toBe(false);
+    expect(await db.select().from(invitations).where(eq(invitations.email, email))).toHaveLength(1);
+  });
+
   it("commits an import and reports every letter as not sent", async () => {
     const result = await importRoster({ actor: school.admin, cohortId: school.cohortId, file: csvFile(rosterCsv(roster())), expectedValid: 3 });
     if (!result.ok) throw new Error(result.problem);
@@ -86,6 +97,7 @@ describe("enrolling while the mail server is down", () => {
     await waitForPort(smtpPort);
 
     const resent = await resendWaitingInvitations({ actor: school.admin, cohortId: school.cohortId });
+    // The school-wide instructor invitation has no cohort, so it is not among the cohort's waiting.
     expect(resent).toEqual({ ok: true, reissued: 4, letters: { sent: 4, unsent: 0 } });
 
     const response = await fetch(`http://127.0.0.1:${apiPort}/messages?to=${encodeURIComponent(school.domain)}`);

@@ -5,6 +5,7 @@ import { z } from "zod";
 import { requirePermission } from "@/lib/auth/current-user";
 import { emailSchema } from "@/lib/auth/fields";
 import { issueInvitation } from "@/lib/auth/invitations";
+import { isMailDeliveryError } from "@/lib/enrolment";
 import {
   failedFormState,
   invalidFormState,
@@ -14,7 +15,7 @@ import {
 } from "@/lib/http/form-state";
 
 export type InviteField = "email" | "role" | "cohortId";
-export type InviteState = FormState<InviteField>;
+export type InviteState = FormState<InviteField> | { status: "warning"; message: string };
 
 const inviteSchema = z.object({
   email: emailSchema,
@@ -43,6 +44,15 @@ export async function invitePerson(_previous: InviteState, formData: FormData): 
     }
     if (!result.ok) return failedFormState("That cohort is not part of your school.", values, { cohortId: "Choose a cohort from the list." });
   } catch (error) {
+    // Sending is the last step of issuing, so the invitation is already saved.
+    if (isMailDeliveryError(error)) {
+      console.error(error);
+      revalidatePath("/admin");
+      return {
+        status: "warning",
+        message: `The invitation for ${parsed.data.email} is saved, but the e-mail was not sent because the mail server did not answer. Use “Resend” in the list once mail works again.`,
+      };
+    }
     return unexpectedFormState(error, values);
   }
   revalidatePath("/admin");

@@ -1,12 +1,12 @@
 "use client";
 
 import { useActionState } from "react";
-import { FormAlert } from "@/components/forms/form-alert";
 import { SelectField } from "@/components/forms/select-field";
 import { SubmitButton } from "@/components/forms/submit-button";
 import { TextField } from "@/components/forms/text-field";
 import { idleFormState } from "@/lib/http/form-state";
 import { invitePerson, type InviteState } from "./actions";
+import { StatusNotice } from "./status-notice";
 
 const roleOptions = [
   { value: "learner", label: "Learner" },
@@ -20,10 +20,7 @@ export function InviteForm({ cohorts }: { cohorts: { id: string; name: string }[
   const cohortOptions = [{ value: "", label: "No cohort yet" }, ...cohorts.map((c) => ({ value: c.id, label: c.name }))];
   return (
     <form action={formAction} noValidate className="space-y-4">
-      <FormAlert
-        tone={state.status === "success" ? "success" : "error"}
-        message={state.status === "idle" ? null : state.message}
-      />
+      <StatusNotice tone={state.status === "idle" ? "success" : state.status} message={state.status === "idle" ? null : state.message} />
       <TextField label="E-mail address" name="email" type="email" required defaultValue={values.email} error={errors.email} />
       <div className="grid gap-4 sm:grid-cols-2">
         <SelectField label="Role" name="role" options={roleOptions} defaultValue={values.role ?? "learner"} error={errors.role} />
