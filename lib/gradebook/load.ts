@@ -20,6 +20,10 @@ import { gradebookItems, itemKey, type GradebookItem } from "./items";
 
 export type CohortGradebook = { cohort: Cohort; gradebook: Gradebook };
 
+// Names in the order people expect (accents beside their letters, case ignored), which the
+// database's byte-order collation does not give.
+const byName = new Intl.Collator("en", { sensitivity: "base", numeric: true });
+
 /**
  * The progress grid's data: the access check and the two aggregate queries go out together (each
  * query checks access itself, so nothing leaks if the check loses the race), then the grid is
@@ -39,7 +43,7 @@ export async function loadCohortGradebook(params: {
   if (!cohort) return null;
   const gradebook = assembleGradebook({
     items: gradebookItems(params.course ?? getCourse()),
-    learners,
+    learners: learners.sort((a, b) => byName.compare(a.name, b.name) || a.learnerId.localeCompare(b.learnerId)),
     cells,
     cohortStartsOn: cohort.startsOn,
     now: params.now ?? new Date(),

@@ -18,7 +18,7 @@ export default async function InstructorHomePage() {
       <PageHeading
         eyebrow="Teaching"
         title="My cohorts"
-        lead="Open a cohort to see its learners. Progress, attempts and bench photos to review will appear here as the course runs."
+        lead="Open a cohort for its progress grid: who is stuck where, every attempt on the scope, and the grade book to download."
       />
       {cohorts.length === 0 ? (
         <Card>
