@@ -13,17 +13,16 @@ export type ReviewDoneMail = {
 
 export function composeReviewDoneMail(params: ReviewDoneMail): ComposedMail {
   const accepted = params.decision === "accept";
-  const outcome = accepted
-    ? `accepted your bench work, with ${params.total} of ${params.maxTotal} points`
-    : `returned your bench work for another look (${params.total} of ${params.maxTotal} points so far)`;
+  const points = `${params.total} of ${params.maxTotal} points`;
+  const outcome = accepted ? `accepted it with ${points}` : `returned it for another look (${points} so far)`;
   const next = accepted
     ? "The exercise page shows the points for each part of the rubric and the written feedback."
-    : "The exercise page shows what to change. Fix it, then submit it again for review.";
+    : "The exercise page shows what to change. Fix it, then hand it in again for review.";
   const firstName = params.learnerName.split(/\s+/)[0] ?? params.learnerName;
   const text = [
     `Hello ${firstName},`,
     "",
-    `${params.reviewerName} has ${outcome} on "${params.exerciseTitle}".`,
+    `${params.reviewerName} has reviewed your bench work on "${params.exerciseTitle}" and ${outcome}.`,
     next,
     "",
     "Open the exercise:",
@@ -35,7 +34,7 @@ export function composeReviewDoneMail(params: ReviewDoneMail): ComposedMail {
 <div style="max-width:560px;margin:0 auto;background:#ffffff;border:1px solid #d9d4c7;border-radius:8px;padding:28px">
 <p style="margin:0 0 20px;font-weight:700;color:#1d5c63;letter-spacing:0.02em">Edgewise</p>
 <p style="margin:0 0 16px">Hello ${escapeHtml(firstName)},</p>
-<p style="margin:0 0 16px">${escapeHtml(params.reviewerName)} has ${escapeHtml(outcome)} on <strong>${escapeHtml(params.exerciseTitle)}</strong>.</p>
+<p style="margin:0 0 16px">${escapeHtml(params.reviewerName)} has reviewed your bench work on <strong>${escapeHtml(params.exerciseTitle)}</strong> and ${escapeHtml(outcome)}.</p>
 <p style="margin:0 0 16px">${escapeHtml(next)}</p>
 <p style="margin:24px 0"><a href="${escapeHtml(params.exerciseUrl)}" style="display:inline-block;background:#1d5c63;color:#ffffff;text-decoration:none;padding:10px 18px;border-radius:6px;font-weight:600">Open the exercise</a></p>
 <p style="margin:0;font-size:14px;color:#56606a">If the button does not work, copy this address into your browser:<br>${escapeHtml(params.exerciseUrl)}</p>

@@ -151,8 +151,9 @@ describe("reviewing bench work", () => {
 
     const message = await waitForMessage({ to: learner.user.email, subject: /accepted/ });
     expect(message.subject).toBe("Bench work accepted: Build and measure a run of your design");
-    expect(message.text).toContain("9 of 10 points");
+    expect(message.text).toContain("and accepted it with 9 of 10 points.");
     expect(findLinks(message.text)).toEqual([`${process.env.APP_URL}/bench/build-a-run`]);
+    expect(message.html).toContain(`href="${process.env.APP_URL}/bench/build-a-run"`);
 
     expect(await reviewBenchWork({ reviewer: people.homeInstructor.user, submissionId, input: fullMarks })).toEqual({ status: "not-waiting" });
     expect(await listBenchReviews({ submissionId })).toHaveLength(1);
