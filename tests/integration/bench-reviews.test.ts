@@ -12,12 +12,12 @@ import { handInBenchWork, openBenchDraft } from "@/lib/bench/submissions";
 import { reviewBenchWork, type ReviewInput } from "@/lib/bench/reviews";
 import { findLinks } from "@/lib/mail/sink";
 import { noisyPhoto } from "../support/uploads/noisy-photo";
-import { createBenchCohorts, createMember, type SignedIn } from "./support/bench-people";
+import { createBenchSchool, type BenchSchool, type SignedIn } from "./support/bench-people";
 import { startBenchUploadService, type BenchUploadService } from "./support/bench-upload-service";
 import { countMessagesTo, waitForMessage } from "./support/mail-sink";
 
 let service: BenchUploadService;
-let people: Awaited<ReturnType<typeof createBenchCohorts>>;
+let people: BenchSchool;
 
 const statedRun = {
   cable: "beside-ground",
@@ -38,7 +38,7 @@ function formOf(values: Record<string, string>): FormData {
 
 /** A learner of the home cohort whose work on "build-a-run" waits for review, with one photo. */
 async function workWaitingForReview(): Promise<{ learner: SignedIn; submissionId: string; photoId: string }> {
-  const learner = await createMember(people.homeCohortId, "learner", "bench-reviewed");
+  const learner = await people.createMember(people.homeCohortId, "learner", "bench-reviewed");
   const draft = await openBenchDraft({ learner: learner.user, exerciseSlug: "build-a-run" });
   if (draft.status !== "ready") throw new Error(`no draft: ${draft.status}`);
   const file = new File([new Uint8Array(noisyPhoto(64, 48))], "edge.png", { type: "image/png" });
@@ -64,7 +64,7 @@ const photoStatus = async (photoId: string, viewer?: SignedIn) =>
 
 beforeAll(async () => {
   service = await startBenchUploadService();
-  people = await createBenchCohorts();
+  people = await createBenchSchool();
 });
 
 afterAll(async () => {
@@ -180,7 +180,7 @@ describe("reviewing bench work", () => {
 
 describe("handing in bench work", () => {
   it("refuses values it cannot read, naming the field and keeping what was typed", async () => {
-    const learner = await createMember(people.homeCohortId, "learner", "bench-typo");
+    const learner = await people.createMember(people.homeCohortId, "learner", "bench-typo");
     const outcome = await handInBenchWork({
       learner: learner.user,
       exerciseSlug: "build-a-run",
@@ -198,7 +198,7 @@ describe("handing in bench work", () => {
   });
 
   it("needs at least one photo", async () => {
-    const learner = await createMember(people.homeCohortId, "learner", "bench-no-photo");
+    const learner = await people.createMember(people.homeCohortId, "learner", "bench-no-photo");
     expect(await handInBenchWork({ learner: learner.user, exerciseSlug: "build-a-run", formData: formOf(statedRun) })).toMatchObject({
       status: "photo-count",
       photos: 0,
@@ -206,7 +206,7 @@ describe("handing in bench work", () => {
   });
 
   it("is refused to a learner outside any cohort of the course and to other roles", async () => {
-    const loner = await createMember(null, "learner", "bench-loner");
+    const loner = await people.createMember(null, "learner", "bench-loner");
     expect(await openBenchDraft({ learner: loner.user, exerciseSlug: "build-a-run" })).toEqual({ status: "no-cohort" });
     expect(await openBenchDraft({ learner: people.homeInstructor.user, exerciseSlug: "build-a-run" })).toEqual({ status: "forbidden" });
     expect(await openBenchDraft({ learner: people.otherLearner.user, exerciseSlug: "no-such-bench" })).toEqual({ status: "not-found" });

@@ -11,17 +11,17 @@ import { db } from "@/db/client";
 import { benchPhotos, benchSubmissions } from "@/db/schema";
 import { openBenchDraft } from "@/lib/bench/submissions";
 import { noisyPhoto } from "../support/uploads/noisy-photo";
-import { createBenchCohorts, createMember, type SignedIn } from "./support/bench-people";
+import { createBenchSchool, type BenchSchool, type SignedIn } from "./support/bench-people";
 import { startBenchUploadService, type BenchUploadService } from "./support/bench-upload-service";
 
 let service: BenchUploadService;
-let people: Awaited<ReturnType<typeof createBenchCohorts>>;
+let people: BenchSchool;
 
 const photo = noisyPhoto(320, 240);
 const pngFile = (name = "scope-edge.png", bytes: Uint8Array = photo) => new File([new Uint8Array(bytes)], name, { type: "image/png" });
 
 async function learnerWithDraft(): Promise<{ learner: SignedIn; submissionId: string }> {
-  const learner = await createMember(people.homeCohortId, "learner", "bench-uploader");
+  const learner = await people.createMember(people.homeCohortId, "learner", "bench-uploader");
   const draft = await openBenchDraft({ learner: learner.user, exerciseSlug: "build-a-run" });
   if (draft.status !== "ready") throw new Error(`no draft: ${draft.status}`);
   return { learner, submissionId: draft.submissionId };
@@ -36,7 +36,7 @@ const photoRequest = (photoId: string, cookie?: string) =>
 
 beforeAll(async () => {
   service = await startBenchUploadService();
-  people = await createBenchCohorts();
+  people = await createBenchSchool();
 });
 
 afterAll(async () => {

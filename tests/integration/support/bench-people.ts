@@ -1,14 +1,17 @@
 import { randomUUID } from "node:crypto";
 import { db } from "@/db/client";
-import { cohortMemberships, cohorts, users, type Role } from "@/db/schema";
+import { cohortMemberships, cohorts, schools, users, type Role } from "@/db/schema";
 import { hashPassword } from "@/lib/auth/password";
 import { createSession, validateSessionToken, type SessionUser } from "@/lib/auth/session-store";
-import { createPerson, findDemoSchoolId, uniqueEmail } from "./people";
+import { findDemoSchoolId, uniqueEmail } from "./people";
 
-// Two fresh cohorts of the course, each with its instructor and learners, so bench tests never
-// depend on what the seed or another test left behind.
+// Bench tests work in a school of their own, with two cohorts of the course, an instructor each,
+// learners and an admin, so they never depend on or change what the demo school shows.
 
 export type SignedIn = { user: SessionUser; cookie: string };
+
+const password = "bench test password";
+let passwordHash: Promise<string> | undefined;
 
 export async function signIn(userId: string): Promise<SignedIn> {
   const cookie = await createSession(userId);
@@ -17,39 +20,49 @@ export async function signIn(userId: string): Promise<SignedIn> {
   return { user, cookie: `${cookie.name}=${cookie.value}` };
 }
 
-async function createCohort(label: string): Promise<string> {
-  const [cohort] = await db
-    .insert(cohorts)
-    .values({
-      schoolId: await findDemoSchoolId(),
-      name: `Bench ${label} ${randomUUID().slice(0, 8)}`,
-      courseSlug: "data-runs",
-      startsOn: "2026-01-05",
-      endsOn: "2026-06-26",
-    })
-    .returning({ id: cohorts.id });
-  return cohort!.id;
+async function insertUser(schoolId: string, role: Role, label: string, name: string) {
+  const [user] = await db
+    .insert(users)
+    .values({ schoolId, email: uniqueEmail(label), name, role, passwordHash: await (passwordHash ??= hashPassword(password)) })
+    .returning();
+  return user!;
 }
 
-export async function createMember(cohortId: string | null, role: Role, label: string): Promise<SignedIn> {
-  const person = await createPerson({ role, password: "bench test password", label });
-  if (cohortId && role !== "admin") await db.insert(cohortMemberships).values({ cohortId, userId: person.id, role });
-  return signIn(person.id);
-}
+export type BenchSchool = Awaited<ReturnType<typeof createBenchSchool>>;
 
-export async function createBenchCohorts() {
-  const [home, other] = [await createCohort("home"), await createCohort("other")];
+export async function createBenchSchool() {
+  const suffix = randomUUID().slice(0, 8);
+  const [school] = await db.insert(schools).values({ slug: `bench-${suffix}`, name: `Bench test school ${suffix}` }).returning();
+  const schoolId = school!.id;
+  const createCohort = async (label: string) => {
+    const [cohort] = await db
+      .insert(cohorts)
+      .values({ schoolId, name: `Bench ${label}`, courseSlug: "data-runs", startsOn: "2026-01-05", endsOn: "2026-06-26" })
+      .returning({ id: cohorts.id });
+    return cohort!.id;
+  };
+  const homeCohortId = await createCohort("home");
+  const otherCohortId = await createCohort("other");
+
+  /** A signed-in member of the school; in `cohortId` when given. */
+  const createMember = async (cohortId: string | null, role: Role, label: string): Promise<SignedIn> => {
+    const user = await insertUser(schoolId, role, label, `Test ${role}`);
+    if (cohortId && role !== "admin") await db.insert(cohortMemberships).values({ cohortId, userId: user.id, role });
+    return signIn(user.id);
+  };
+
   return {
-    homeCohortId: home,
-    otherCohortId: other,
-    homeInstructor: await createMember(home, "instructor", "bench-instructor"),
-    otherInstructor: await createMember(other, "instructor", "bench-other-instructor"),
-    otherLearner: await createMember(home, "learner", "bench-other-learner"),
+    homeCohortId,
+    otherCohortId,
+    createMember,
+    homeInstructor: await createMember(homeCohortId, "instructor", "bench-instructor"),
+    otherInstructor: await createMember(otherCohortId, "instructor", "bench-other-instructor"),
+    otherLearner: await createMember(homeCohortId, "learner", "bench-other-learner"),
     admin: await createMember(null, "admin", "bench-admin"),
   };
 }
 
-/** A learner with a name no other test uses, in the given cohort, who signs in with `password`. */
+/** A learner of the demo school with a name no other test uses, who signs in with `password`. */
 export async function createNamedLearner(params: { cohortId: string; name: string; password: string }) {
   const [user] = await db
     .insert(users)
