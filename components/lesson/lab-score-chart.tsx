@@ -4,6 +4,16 @@ import { Bar, BarChart, CartesianGrid, Cell, LabelList, ResponsiveContainer, XAx
 
 export type LabScore = { lesson: number; title: string; bestScore: number | null; passed: boolean };
 
+// Drawn as plain text above the bar: the library's own label wraps to the bar's width.
+function BarLabel(props: { x?: number | string; y?: number | string; width?: number | string; value?: unknown }) {
+  const x = Number(props.x ?? 0) + Number(props.width ?? 0) / 2;
+  return (
+    <text x={x} y={Number(props.y ?? 0) - 6} textAnchor="middle" fontSize={11} fontWeight={600} fill="var(--color-ink)">
+      {String(props.value ?? "")}
+    </text>
+  );
+}
+
 /**
  * Best score per lab as bars, 0–100. Each bar carries its number and a ✓ when passed, so the
  * passed/not-passed difference never rests on the bar's colour alone.
@@ -21,7 +31,7 @@ export function LabScoreChart({ scores }: { scores: LabScore[] }) {
             {data.map((entry) => (
               <Cell key={entry.name} fill={entry.passed ? "var(--color-accent)" : "var(--color-copper)"} fillOpacity={entry.passed ? 1 : 0.55} />
             ))}
-            <LabelList dataKey="label" position="top" style={{ fontSize: 11, fontWeight: 600, fill: "var(--color-ink)" }} />
+            <LabelList dataKey="label" content={BarLabel} />
           </Bar>
         </BarChart>
       </ResponsiveContainer>
