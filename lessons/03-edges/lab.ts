@@ -39,7 +39,7 @@ Too little resistance and the edge overshoots the pixel's supply, driving curren
     penalty: 5,
   },
   reference: {
-    solution: { main: { seriesResistance: 100 } },
+    solution: { main: { seriesResistance: 220 } },
     mistakes: [
       {
         choices: { main: { seriesResistance: 10 } },

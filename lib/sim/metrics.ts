@@ -1,5 +1,5 @@
 import type { DecodedBit } from "./decoder";
-import { extremes, firstReach, indexAt, maxOver, valueAt, type Waveform } from "./waveform";
+import { extremes, firstReach, indexAt, maxOver, minOver, valueAt, type Waveform } from "./waveform";
 
 /**
  * Measurements of the far-end waveform. Windows are placed by the driver's timing shifted by
@@ -10,9 +10,19 @@ export type BitLevels = {
   /** Highest far-end voltage while the bit is driven high (V). */
   highPeak: number;
   highPeakTime: number;
-  /** Highest voltage the far end rings back to after falling, or where it still is at the next bit (V). */
-  lowPeak: number;
-  lowPeakTime: number;
+  /** Lowest far-end voltage while the bit is driven low (V). */
+  lowTrough: number;
+  lowTroughTime: number;
+  /** Against the guaranteed thresholds: the deepest dip once the pulse has risen through the high threshold and turned down; null without one. */
+  highDip: Extreme | null;
+  /** Against the guaranteed thresholds: the highest ring-back once the far end has fallen through the low threshold and turned up; null without one. */
+  ringBack: Extreme | null;
+  /** The same two, with the periods starting at the mid-supply crossing. */
+  midHighDip: Extreme | null;
+  midRingBack: Extreme | null;
+  /** This bit's margins against the guaranteed thresholds and against a single threshold at VDD/2 (V). */
+  voltageMargin: number;
+  midSupplyVoltageMargin: number;
 };
 
 export type RunMetrics = {
@@ -31,37 +41,97 @@ export type RunMetrics = {
   /** Narrowest pulse of a 1 bit at the thresholds (s). */
   oneHighTime: number | null;
   timingMargin: number | null;
+  /** Worst bit's margin against the guaranteed thresholds (V); see BitLevels. */
   voltageMargin: number;
+  /** Worst bit's margin against a single threshold at VDD/2 (V). */
   midSupplyVoltageMargin: number;
   bitErrors: number;
   clampCurrentPeak: number;
   delay: number;
 };
 
-/** A rise of more than this above the running minimum marks the start of ringing in a low period. */
-const RING_START = 1e-3;
+export type Extreme = { value: number; time: number };
+
+export type Thresholds = { high: number; low: number; mid: number; supply: number };
+
+/**
+ * An edge has ended, and ringing begun, once the far end turns back by more than this share of
+ * the supply. The bumps a capacitive pin puts on each step of a staircase (tens of millivolts)
+ * stay below it; ringing that matters to a threshold is far above it. A turn smaller than this
+ * can overstate a margin by less than this much.
+ */
+const TURN_SHARE = 0.02;
 const SETTLING_BAND = 0.05;
 
-export function measureBitLevels(wave: Waveform, bit: DecodedBit, fall: number, delay: number): BitLevels {
-  const high = maxOver(wave, bit.slotStart, fall + delay);
-  const lowFrom = fall + delay;
-  const lowTo = bit.slotEnd;
-  let runningMin = valueAt(wave, lowFrom);
-  let ringing = false;
-  let lowPeak = valueAt(wave, lowTo);
-  let lowPeakTime = lowTo;
-  for (let i = indexAt(wave, lowFrom) + 1; i < wave.count && wave.time[i] < lowTo; i += 1) {
-    const v = wave.value[i];
-    if (!ringing) {
-      if (v < runningMin) runningMin = v;
-      else if (v > runningMin + RING_START) ringing = true;
+/**
+ * The extreme of the ringing after an edge in [from, to]: once the far end has crossed `level`
+ * (rising: upward, and the lowest value after it turns down; falling: downward, and the highest
+ * value after it turns up). Null when the edge never crosses or never turns back.
+ */
+function ringingAfterEdge(wave: Waveform, from: number, to: number, level: number, rising: boolean, turn: number): Extreme | null {
+  const entered = firstReach(wave, level, rising, from, to);
+  if (entered === null) return null;
+  const sign = rising ? 1 : -1;
+  let front = sign * level;
+  let turned = false;
+  let worst = Infinity;
+  let worstTime = entered;
+  const visit = (t: number, v: number) => {
+    const x = sign * v;
+    if (!turned) {
+      if (x > front) front = x;
+      else if (x < front - turn) turned = true;
     }
-    if (ringing && v > lowPeak) {
-      lowPeak = v;
-      lowPeakTime = wave.time[i];
+    if (turned && x < worst) {
+      worst = x;
+      worstTime = t;
     }
+  };
+  for (let i = indexAt(wave, entered) + 1; i < wave.count && wave.time[i] < to; i += 1) {
+    if (wave.time[i] > entered) visit(wave.time[i], wave.value[i]);
   }
-  return { highPeak: high.value, highPeakTime: high.time, lowPeak, lowPeakTime };
+  visit(to, valueAt(wave, to));
+  return turned ? { value: sign * worst, time: worstTime } : null;
+}
+
+/**
+ * The far end's levels over one bit, and its voltage margins: how far the wave clears each
+ * threshold it must cross, and how close the ringing after each edge comes to undoing it
+ * (see lib/sim/README.md, "Voltage margins").
+ */
+export function measureBitLevels(wave: Waveform, bit: DecodedBit, fall: number, delay: number, thresholds: Thresholds): BitLevels {
+  const { high, low, mid, supply } = thresholds;
+  const fallArrives = fall + delay;
+  const turn = TURN_SHARE * supply;
+  const peak = maxOver(wave, bit.slotStart, fallArrives);
+  const trough = minOver(wave, fallArrives, bit.slotEnd);
+  const highDip = ringingAfterEdge(wave, bit.slotStart, fallArrives, high, true, turn);
+  const ringBack = ringingAfterEdge(wave, fallArrives, bit.slotEnd, low, false, turn);
+  const midHighDip = ringingAfterEdge(wave, bit.slotStart, fallArrives, mid, true, turn);
+  const midRingBack = ringingAfterEdge(wave, fallArrives, bit.slotEnd, mid, false, turn);
+  // Under hysteresis a dip ends the pulse only below the low threshold; the ring-back is held to the guaranteed low level (docs/simulator.md).
+  const voltageMargin = Math.min(
+    peak.value - high,
+    highDip === null ? Infinity : highDip.value - low,
+    low - (ringBack?.value ?? trough.value),
+  );
+  const midSupplyVoltageMargin = Math.min(
+    peak.value - mid,
+    midHighDip === null ? Infinity : midHighDip.value - mid,
+    mid - (midRingBack?.value ?? trough.value),
+  );
+  return {
+    highPeak: peak.value,
+    highPeakTime: peak.time,
+    lowTrough: trough.value,
+    lowTroughTime: trough.time,
+    highDip,
+    ringBack,
+    midHighDip,
+    midRingBack,
+    voltageMargin,
+    midSupplyVoltageMargin,
+  };
 }
 
 type MeasureContext = {
@@ -71,9 +141,6 @@ type MeasureContext = {
   levels: BitLevels[];
   delay: number;
   settledHigh: number;
-  supply: number;
-  highLevel: number;
-  lowLevel: number;
   clampCurrentPeak: number;
 };
 
@@ -133,9 +200,8 @@ const minOrNull = (values: (number | null)[]) => (present(values).length > 0 ? s
 const maxOrNull = (values: (number | null)[]) => (present(values).length > 0 ? largest(present(values)) : null);
 
 export function measureRun(context: MeasureContext): RunMetrics {
-  const { wave, bits, levels, settledHigh, supply, highLevel, lowLevel } = context;
+  const { wave, bits, levels, settledHigh } = context;
   const { min, max } = extremes(wave);
-  const mid = supply / 2;
   const widthsOf = (sent: 0 | 1) => bits.filter((bit) => bit.sent === sent && bit.received !== "x").map((bit) => bit.width);
   return {
     ...edgeTimes(context),
@@ -144,8 +210,8 @@ export function measureRun(context: MeasureContext): RunMetrics {
     zeroHighTime: maxOrNull(widthsOf(0)),
     oneHighTime: minOrNull(widthsOf(1)),
     timingMargin: minOrNull(bits.map((bit) => bit.timingMargin)),
-    voltageMargin: smallest(levels.map((level) => Math.min(level.highPeak - highLevel, lowLevel - level.lowPeak))),
-    midSupplyVoltageMargin: smallest(levels.map((level) => Math.min(level.highPeak - mid, mid - level.lowPeak))),
+    voltageMargin: smallest(levels.map((level) => level.voltageMargin)),
+    midSupplyVoltageMargin: smallest(levels.map((level) => level.midSupplyVoltageMargin)),
     bitErrors: bits.filter((bit) => bit.received !== String(bit.sent)).length,
     clampCurrentPeak: context.clampCurrentPeak,
     delay: context.delay,

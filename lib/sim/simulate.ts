@@ -20,7 +20,7 @@ export type SimBit = {
   timingMargin: number | null;
   /** The driver's rising edge of this bit (s). */
   start: number;
-  /** Worst of: peak above the high threshold while high, low threshold minus the ring-back while low (V). */
+  /** Against the guaranteed thresholds, worst of: peak above the high threshold, deepest dip inside the pulse above the low threshold, low threshold minus the ring-back (V); see lib/sim/README.md. */
   voltageMargin: number;
 };
 
@@ -125,7 +125,8 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
     decisionTime: receiver.decisionTime,
   });
   const falls = slots.map((slot) => slot.fall);
-  const levels = decoding.bits.map((bit, i) => measureBitLevels(far, bit, falls[i], totals.delay));
+  const thresholds = { high: highLevel, low: lowLevel, mid: receiver.supplyVoltage / 2, supply: receiver.supplyVoltage };
+  const levels = decoding.bits.map((bit, i) => measureBitLevels(far, bit, falls[i], totals.delay, thresholds));
   const settledHigh = pinEquilibrium(
     driver.highVoltage,
     1 / Math.max(resistanceHigh + totals.resistance, 1e-3),
@@ -139,9 +140,6 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
     levels,
     delay: totals.delay,
     settledHigh,
-    supply: receiver.supplyVoltage,
-    highLevel,
-    lowLevel,
     clampCurrentPeak: solved.clampCurrentPeak,
   });
   const verdict = judgeVerdict(decoding, levels, metrics, {
@@ -182,7 +180,7 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
       width: bit.width,
       timingMargin: bit.timingMargin,
       start: bit.start,
-      voltageMargin: Math.min(levels[i].highPeak - highLevel, lowLevel - levels[i].lowPeak),
+      voltageMargin: levels[i].voltageMargin,
     })),
     metrics,
     verdict,

@@ -180,6 +180,11 @@ function failReasons(decoding: Decoding, levels: BitLevels[], facts: CircuitFact
   return reasons;
 }
 
+/** Index of the bit where `badness` is largest (the first of equals). */
+function worstBit(levels: BitLevels[], badness: (level: BitLevels) => number): number {
+  return levels.reduce((worst, level, i) => (badness(level) > badness(levels[worst]) ? i : worst), 0);
+}
+
 function bitAt(bits: DecodedBit[], time: number): number {
   const index = bits.findIndex((bit) => time < bit.slotEnd);
   return index === -1 ? bits.length - 1 : index;
@@ -211,25 +216,36 @@ function warningReasons(decoding: Decoding, levels: BitLevels[], metrics: RunMet
       at: { time: facts.clampCurrentPeakTime, bit: bitAt(bits, facts.clampCurrentPeakTime) },
     });
   }
-  const ringBack = levels.reduce((worst, level, i) => (level.lowPeak > levels[worst].lowPeak ? i : worst), 0);
-  if (!failing && levels[ringBack].lowPeak > facts.lowLevel) {
+  const ringBack = worstBit(levels, (level) => level.ringBack?.value ?? -Infinity);
+  const ringBackPeak = levels[ringBack].ringBack;
+  if (!failing && ringBackPeak !== null && ringBackPeak.value > facts.lowLevel) {
     const mid = facts.supply / 2;
-    const peak = levels[ringBack].lowPeak;
+    const peak = ringBackPeak.value;
     const consequence =
       peak >= facts.highLevel
-        ? `above the high threshold before the far end has fallen below the low threshold (${volts(facts.lowLevel)}), so the pulse ends late; it still decodes, but with little to spare`
+        ? `above the high threshold (${volts(facts.highLevel)}); only the deglitch filter keeps it from starting an extra pulse`
         : `above the guaranteed low level (${volts(facts.lowLevel)}); it stays below the high threshold so the pulse count is right, but ${peak > mid ? `a pixel switching near mid-supply (${volts(mid)}) would read it as a high` : "the noise margin is gone"}`;
     reasons.push({
       code: "ringing-undefined-zone",
       severity: "warning",
       message: `ringing after the falling edge swings back up to ${volts(peak)}, ${consequence}: ${ringingCause(facts, facts.sourceResistanceLow, "up")}.`,
-      at: { time: levels[ringBack].lowPeakTime, bit: ringBack },
+      at: { time: ringBackPeak.time, bit: ringBack },
     });
-  } else if (!failing && metrics.voltageMargin < THIN_VOLTAGE_SHARE * facts.supply) {
+  } else if (!failing && metrics.voltageMargin >= 0 && metrics.voltageMargin < THIN_VOLTAGE_SHARE * facts.supply) {
     reasons.push({
       code: "thin-voltage-margin",
       severity: "warning",
       message: `the far end clears the pixel's thresholds by only ${volts(metrics.voltageMargin)}: a little more cable or a weaker driver and bits will be lost.`,
+    });
+  }
+  const midDip = worstBit(levels, (level) => -(level.midHighDip?.value ?? Infinity));
+  const midDipLevel = levels[midDip].midHighDip;
+  if (!failing && midDipLevel !== null && midDipLevel.value < facts.supply / 2) {
+    reasons.push({
+      code: "mid-supply-dip",
+      severity: "warning",
+      message: `ringing after the rising edge dips to ${volts(midDipLevel.value)} inside the pulse, below mid-supply (${volts(facts.supply / 2)}): a pixel whose input switches near mid-supply, as real inputs usually do, would see the pulse break and misread the bit: ${ringingCause(facts, facts.sourceResistanceHigh, "down")}.`,
+      at: { time: midDipLevel.time, bit: midDip },
     });
   }
   if (!failing && metrics.timingMargin !== null && metrics.timingMargin < THIN_TIMING_MARGIN) {
