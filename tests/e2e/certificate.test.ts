@@ -36,6 +36,29 @@ afterAll(async () => {
 });
 
 describe("a certificate from download to check", () => {
+  it("a learner who has not finished sees what is left, and no certificate", async () => {
+    const cohort = await createCertificateCohort();
+    const instructor = await createAccount({ role: "instructor", name: "Orla Fenwick", cohortId: cohort.id });
+    const unfinished = await createAccount({ role: "learner", name: "Tobias Arkwright", cohortId: cohort.id, password });
+    const results = passingResults();
+    const [lastBench] = [...results.benchDecisions.keys()].slice(-1);
+    results.benchDecisions.set(lastBench!, "return");
+    await recordResults({ learnerId: unfinished.id, cohortId: cohort.id, reviewerId: instructor.id, results });
+    const { context, page } = await openPage(browser, "wide");
+    try {
+      await signInThroughForm(page, { email: unfinished.email, password });
+      await page.goto("/certificate");
+      await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Not earned yet");
+      const total = results.labScores.size + results.benchDecisions.size;
+      expect(await page.getByText(`${total - 1} of ${total} requirements met`).isVisible()).toBe(true);
+      expect(await page.getByText("Not accepted yet").count()).toBe(1);
+      expect(await page.getByRole("link", { name: "Download the certificate (PDF)" }).count()).toBe(0);
+      await saveScreenshot(page, "certificate-learner-not-yet");
+    } finally {
+      await context.close();
+    }
+  });
+
   it("the graduate's page issues the certificate, e-mails them, and the PDF downloads with their name, code and QR code", async () => {
     const { context, page } = await openPage(browser, "wide");
     try {
