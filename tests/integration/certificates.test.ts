@@ -8,6 +8,7 @@ import { randomBytes } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { GET as getCertificatePdf } from "@/app/api/certificates/[certificateId]/pdf/route";
+import { GET as getVerification } from "@/app/api/certificates/verify/[code]/route";
 import { db } from "@/db/client";
 import { certificates, verificationBuckets } from "@/db/schema";
 import { getCourse } from "@/lessons";
@@ -205,6 +206,35 @@ describe("the public check", () => {
       .where(eq(verificationBuckets.clientAddress, address));
     expect((await verifyCertificate({ code: certificate.code, clientAddress: address })).status).toBe("valid");
     expect((await verifyCertificate({ code: certificate.code, clientAddress: address })).status).toBe("rate-limited");
+  });
+});
+
+describe("the public check for programs", () => {
+  const ask = (code: string, address: string) =>
+    getVerification(new Request(`http://app.test/api/certificates/verify/${code}`, { headers: { "x-forwarded-for": `${address}, 10.0.0.1` } }), {
+      params: Promise.resolve({ code }),
+    });
+
+  it("answers 200 with the certificate's words, 404 for unknown and malformed codes, 429 past the limit", async () => {
+    const { certificate } = await graduate("Dara Millhouse");
+    const address = uniqueAddress();
+    const valid = await ask(formatCertificateCode(certificate.code), address);
+    expect(valid.status).toBe(200);
+    expect(await valid.json()).toEqual({
+      status: "valid",
+      code: formatCertificateCode(certificate.code),
+      learnerName: "Dara Millhouse",
+      courseTitle: course.title,
+      schoolName: "Fernhallow Trades College",
+      issuedAt: certificate.issuedAt.toISOString(),
+    });
+    expect((await ask(encodeCertificateCode(randomBytes(10)), address)).status).toBe(404);
+    expect((await ask("not-a-code", address)).status).toBe(404);
+    for (let i = 2; i < verificationLimits.burst; i++) await ask(certificate.code, address);
+    const limited = await ask(certificate.code, address);
+    expect(limited.status).toBe(429);
+    expect(limited.headers.get("retry-after")).toBe("60");
+    expect((await ask(certificate.code, uniqueAddress())).status).toBe(200);
   });
 });
 
