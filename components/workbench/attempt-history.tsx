@@ -35,7 +35,7 @@ export function AttemptHistory({ runs, attempts, loading, error, shownAttemptId,
               </span>
               <span className="block text-xs text-ink-faint">{formatMoment(new Date(attempt.createdAt))}</span>
             </span>
-            <span className="w-16 text-right font-semibold tabular-nums">{attempt.score} / 100</span>
+            <span className="w-20 text-right font-semibold whitespace-nowrap tabular-nums">{attempt.score} / 100</span>
             <span
               className={`w-24 rounded-full px-2 py-0.5 text-center text-xs font-semibold ${attempt.passed ? "bg-ok-soft text-ok" : "bg-danger-soft text-danger"}`}
             >

@@ -20,7 +20,7 @@ export function ScenarioWords({ run, facts }: { run: BenchRun; facts: RunFacts }
     ["Series resistor", formatOhms(seriesResistance)],
     [
       "Cable",
-      `${formatMetres(length)} of ${cable.label}: Z0 ${Math.round(cable.z0)} Ω, ${formatPicofaradsPerMetre(cable.capacitancePerMetre)}, ${formatDelayPerMetre(cable.delayPerMetre)}`,
+      `${cable.label}, ${formatMetres(length)}: Z0 ${Math.round(cable.z0)} Ω, ${formatPicofaradsPerMetre(cable.capacitancePerMetre)}, ${formatDelayPerMetre(cable.delayPerMetre)}`,
     ],
     ["First pixel", `${supplyVoltage} V supply; guaranteed to read high above ${high.toFixed(2)} V and low below ${low.toFixed(2)} V`],
     [

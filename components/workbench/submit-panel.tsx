@@ -71,6 +71,7 @@ function AttemptResult({ reply, runs }: { reply: SubmitReply; runs: BenchRun[] }
 /** The lab's questions (numbers with units), the submit button, and the graded result, announced as it arrives. */
 export function SubmitPanel({ runs, questions, questionTexts, answers, onAnswer, onSubmit, pending, error, reply, nextAttempt, attempts }: Props) {
   const general = error ? Object.entries(error.fieldErrors).filter(([field]) => !field.startsWith("answers.")) : [];
+  const onlyAnswers = error !== null && general.length === 0 && Object.keys(error.fieldErrors).length > 0;
   const penaltyNote =
     nextAttempt > attempts.free
       ? `This will be attempt ${nextAttempt}: attempts after the first ${attempts.free} lose ${attempts.penalty} points each.`
@@ -133,7 +134,9 @@ export function SubmitPanel({ runs, questions, questionTexts, answers, onAnswer,
       <div aria-live="polite" role="status" className="space-y-3" data-testid="grading-result">
         {error ? (
           <div className="rounded-lg border border-danger/30 bg-danger-soft px-3 py-2.5 text-sm text-danger">
-            <p className="font-medium">{error.message}</p>
+            <p className="font-medium">
+              {onlyAnswers ? "Some answers could not be read, so nothing was graded yet. The messages under them say why." : error.message}
+            </p>
             {general.length > 0 ? (
               <ul className="mt-1 list-disc pl-5">
                 {general.map(([field, messages]) => (

@@ -72,7 +72,8 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
 
   const activeRun = runs.find((run) => run.id === activeRunId) ?? runs[0];
   const activeChoices = choices[activeRun.id];
-  const facts = runFacts(activeRun, activeChoices);
+  // While an attempt is redrawn, the drawing and the words describe that attempt, as the scope does.
+  const facts = runFacts(activeRun, (replay && replay.attempt.choices[activeRun.id]) ?? activeChoices);
   const replayInput = replay?.inputs[activeRun.id];
   const previewInput = replayInput ?? buildSimInput(activeRun.scenario, activeChoices);
 
@@ -118,7 +119,13 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
               Your choices
             </h2>
             <ChoiceControls run={activeRun} choices={activeChoices} onChange={(next) => changeChoices(activeRun.id, next)} />
-            <SourceReadout facts={facts} />
+            {replay ? (
+              <p className="mt-4 text-sm text-ink-soft">
+                These are your bench settings. The drawing and the scope show attempt {replay.attempt.attemptNumber}; moving a control brings your bench back.
+              </p>
+            ) : (
+              <SourceReadout facts={facts} />
+            )}
           </section>
           <section className={cardClass} aria-labelledby="scope-heading">
             <h2 id="scope-heading" className="mb-3 text-lg font-semibold">

@@ -36,7 +36,13 @@ export default async function LabPage({ params }: Props) {
 
   const setup = benchSetup(lab, labVariant(lab, variantSeedFor(user.id, lab.slug)));
   const questionTexts = Object.fromEntries(
-    lab.questions.map((q) => [q.id, { prompt: <LessonMarkdown markdown={q.prompt} className="[&_p]:my-0 text-ink" />, hint: `Hint: ${q.hint}` }]),
+    lab.questions.map((q) => [
+      q.id,
+      {
+        prompt: <LessonMarkdown markdown={q.prompt} className="text-ink [&_p]:my-0" />,
+        hint: <LessonMarkdown markdown={`Hint: ${q.hint}`} className="text-xs text-ink-faint [&_p]:my-0 [&_p]:leading-5" />,
+      },
+    ]),
   );
 
   return (
