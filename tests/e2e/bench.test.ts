@@ -12,6 +12,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { findDemoCohortId } from "../integration/support/people";
 import { createNamedLearner } from "../integration/support/bench-people";
 import { waitForMessage } from "../integration/support/mail-sink";
+import { findBenchExercise } from "@/lib/bench/exercises";
 import { findLinks } from "@/lib/mail/sink";
 import {
   baseUrl,
@@ -57,7 +58,8 @@ function scopeScreenPhoto(width = 1600, height = 1000): Buffer {
 
 /** Screenshots only once every photo on the page has been fetched through the app. */
 async function saveLoadedScreenshot(page: Page, name: string): Promise<void> {
-  await page.waitForFunction(() => [...document.images].every((image) => image.complete && image.naturalWidth > 0), undefined, { timeout: 30_000 });
+  const allLoaded = () => [...document.images].every((image) => image.complete && image.naturalWidth > 0);
+  await page.waitForFunction(allLoaded, undefined, { timeout: 30_000 });
   await saveScreenshot(page, name);
 }
 
@@ -158,9 +160,9 @@ describe("a bench exercise from upload to feedback", () => {
       await page.keyboard.press("Escape");
       await dialog.waitFor({ state: "hidden" });
 
-      const rubric = { "The written design follows the seven steps and its window contains the resistor fitted": 4, "The probe is at the first pixel with a short ground, and the reported values match the photo": 3, "The learner compares the measurement with the prediction and explains any difference": 2 };
-      for (const [criterion, points] of Object.entries(rubric)) {
-        await page.getByRole("radio", { name: `${criterion}: ${points}` }).check({ force: true });
+      const given: Record<string, number> = { design: 4, measurement: 3, comparison: 2 };
+      for (const { id, criterion } of findBenchExercise("build-a-run")!.exercise.rubric) {
+        await page.getByRole("radio", { name: `${criterion}: ${given[id]}` }).check({ force: true });
       }
       expect(await page.getByText("Total: 9 of 10 points").isVisible()).toBe(true);
       await page.getByLabel("Feedback for the learner").fill("Clean measurement. Explain why your rise time beats the prediction.");
