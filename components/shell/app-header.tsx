@@ -8,10 +8,15 @@ import { NavLink } from "./nav-link";
 
 const roleLabels: Record<Role, string> = { learner: "Learner", instructor: "Instructor", admin: "School admin" };
 
-function navItems(user: SessionUser): { href: string; label: string }[] {
-  const items = {
-    learner: [{ href: "/learn", label: "Course" }],
-    instructor: [{ href: "/cohorts", label: "My cohorts" }],
+type NavItem = { href: string; label: string; sections?: string[] };
+
+function navItems(user: SessionUser): NavItem[] {
+  const items: NavItem[] = {
+    learner: [{ href: "/learn", label: "Course", sections: ["/lessons", "/labs", "/bench", "/certificate"] }],
+    instructor: [
+      { href: "/cohorts", label: "My cohorts" },
+      { href: "/reviews", label: "Bench reviews" },
+    ],
     admin: [{ href: "/admin", label: "School" }],
   }[user.role];
   if (isMailSinkEnabled() && (protectedRoutes["/dev/mail"] as readonly Role[]).includes(user.role)) {
@@ -27,7 +32,7 @@ export function AppHeader({ user }: { user: SessionUser }) {
         <BrandMark href={homePathFor(user.role)} />
         <nav aria-label="Main" className="order-3 flex w-full gap-1 sm:order-none sm:w-auto">
           {navItems(user).map((item) => (
-            <NavLink key={item.href} href={item.href}>
+            <NavLink key={item.href} href={item.href} sections={item.sections}>
               {item.label}
             </NavLink>
           ))}

@@ -3,9 +3,10 @@
 import Link from "next/link";
 import { usePathname } from "next/navigation";
 
-export function NavLink({ href, children }: { href: string; children: React.ReactNode }) {
+/** `sections` are further path prefixes that belong to this item, e.g. a lesson under "Course". */
+export function NavLink({ href, sections = [], children }: { href: string; sections?: string[]; children: React.ReactNode }) {
   const pathname = usePathname();
-  const current = pathname === href || pathname.startsWith(`${href}/`);
+  const current = [href, ...sections].some((prefix) => pathname === prefix || pathname.startsWith(`${prefix}/`));
   return (
     <Link
       href={href}

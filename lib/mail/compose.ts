@@ -12,7 +12,7 @@ export function escapeHtml(value: string): string {
     .replaceAll("'", "&#39;");
 }
 
-function layoutHtml(paragraphs: string[], link: { href: string; label: string }, footer: string): string {
+export function layoutHtml(paragraphs: string[], link: { href: string; label: string }, footer: string): string {
   const body = paragraphs.map((p) => `<p style="margin:0 0 16px">${p}</p>`).join("\n");
   return `<!doctype html>
 <html lang="en">
