@@ -7,7 +7,6 @@ import type { Verification } from "@/lib/certificates/verification";
 const tones = {
   valid: "border-ok/40 bg-ok-soft text-ok",
   revoked: "border-danger/40 bg-danger-soft text-danger",
-  "not-found": "border-line-strong bg-sunken text-ink-soft",
   "rate-limited": "border-copper/40 bg-copper-soft text-copper",
 } as const;
 
@@ -21,7 +20,7 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
 }
 
 /** The public answer for one code: what the certificate says when valid, only its state otherwise. */
-export function VerificationResult({ result }: { result: Verification }) {
+export function VerificationResult({ result }: { result: Exclude<Verification, { status: "not-found" }> }) {
   const checkAnother = (
     <Link href="/verify" className={buttonClass("secondary")}>
       Check another code
@@ -65,7 +64,7 @@ export function VerificationResult({ result }: { result: Verification }) {
           </dl>
           <p className="mt-4 text-sm text-ink-soft">For the reason, ask the school that issued it.</p>
         </>
-      ) : result.status === "rate-limited" ? (
+      ) : (
         <>
           <p className="mt-1 font-mono text-sm font-semibold text-copper">429</p>
           <h1 id="verification-title" className="mt-1 text-3xl font-semibold tracking-tight sm:text-4xl">
@@ -76,18 +75,29 @@ export function VerificationResult({ result }: { result: Verification }) {
             fair for everyone.
           </p>
         </>
-      ) : (
-        <>
-          <h1 id="verification-title" className="mt-1 text-3xl font-semibold tracking-tight sm:text-4xl">
-            No certificate has this code
-          </h1>
-          <p className={`mt-5 rounded-lg border px-4 py-3 font-medium ${tones["not-found"]}`}>
-            Check the code against the certificate: it has sixteen letters and digits in four groups, such as
-            7K2M-QX9P-4TDW-8HBN.
-          </p>
-        </>
       )}
       <div className="mt-8 flex flex-wrap gap-3">{checkAnother}</div>
+    </section>
+  );
+}
+
+/** The answer for a code no certificate has, malformed or unknown alike: served with a 404. */
+export function UnknownCertificateCode() {
+  return (
+    <section className="mx-auto max-w-2xl" aria-labelledby="verification-title">
+      <p className="text-sm font-semibold uppercase tracking-wide text-copper">Certificate check</p>
+      <h1 id="verification-title" className="mt-1 text-3xl font-semibold tracking-tight sm:text-4xl">
+        No certificate has this code
+      </h1>
+      <p className="mt-5 rounded-lg border border-line-strong bg-sunken px-4 py-3 font-medium text-ink-soft">
+        Check the code against the certificate: it has sixteen letters and digits in four groups, such as
+        7K2M-QX9P-4TDW-8HBN.
+      </p>
+      <div className="mt-8 flex flex-wrap gap-3">
+        <Link href="/verify" className={buttonClass("secondary")}>
+          Check another code
+        </Link>
+      </div>
     </section>
   );
 }

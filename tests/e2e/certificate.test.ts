@@ -126,9 +126,11 @@ describe("a certificate from download to check", () => {
       await saveScreenshot(page, "certificate-check-valid");
 
       const unknown = `${code.slice(0, -1)}${code.endsWith("0") ? "1" : "0"}`;
-      await page.goto(`/c/${unknown}`);
+      expect((await page.goto(`/c/${unknown}`))!.status()).toBe(404);
       await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("No certificate has this code");
       await saveScreenshot(page, "certificate-check-unknown");
+      expect((await page.goto("/c/not-a-code"))!.status()).toBe(404);
+      await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("No certificate has this code");
     } finally {
       await context.close();
     }

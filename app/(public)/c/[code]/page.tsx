@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { notFound } from "next/navigation";
 import { VerificationResult } from "@/components/certificate/verification-result";
 import { AppFrame } from "@/components/shell/app-frame";
 import { readClientAddress } from "@/lib/auth/client-address";
@@ -9,12 +10,11 @@ export const metadata: Metadata = { title: "Certificate check", robots: { index:
 
 export default async function CertificateCheckPage({ params }: { params: Promise<{ code: string }> }) {
   const { code } = await params;
-  const [user, result] = await Promise.all([
-    getCurrentUser(),
-    readClientAddress().then((clientAddress) => verifyCertificate({ code, clientAddress })),
-  ]);
+  const result = await verifyCertificate({ code, clientAddress: await readClientAddress() });
+  // Unknown and malformed codes get a real 404; the page for it is not-found.tsx beside this one.
+  if (result.status === "not-found") notFound();
   return (
-    <AppFrame user={user}>
+    <AppFrame user={await getCurrentUser()}>
       <VerificationResult result={result} />
     </AppFrame>
   );
