@@ -39,6 +39,18 @@ async function call<T>(url: string, init?: RequestInit): Promise<T> {
   return body;
 }
 
+/**
+ * A fresh version-4 UUID for one submission. Built from getRandomValues because randomUUID is
+ * missing on pages served over plain http from a school's own network address.
+ */
+export function newSubmissionKey(): string {
+  const bytes = crypto.getRandomValues(new Uint8Array(16));
+  bytes[6] = (bytes[6] & 0x0f) | 0x40;
+  bytes[8] = (bytes[8] & 0x3f) | 0x80;
+  const hex = Array.from(bytes, (b) => b.toString(16).padStart(2, "0")).join("");
+  return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`;
+}
+
 const attemptsUrl = (labSlug: string) => `/api/labs/${encodeURIComponent(labSlug)}/attempts`;
 
 export function submitAttempt(labSlug: string, submission: Submission): Promise<SubmitReply> {

@@ -8,7 +8,7 @@ import type { RunChoices } from "@/lessons/schema";
 import type { AttemptView } from "@/lib/grading";
 import type { SimInput } from "@/lib/sim";
 import { AttemptHistory } from "./attempt-history";
-import { AttemptRequestError, fetchAttempt, listAttempts, submitAttempt, type Submission, type SubmitReply } from "./attempts-api";
+import { AttemptRequestError, fetchAttempt, listAttempts, newSubmissionKey, submitAttempt, type Submission, type SubmitReply } from "./attempts-api";
 import type { BenchSetup } from "./bench-types";
 import { BenchPreview } from "./bench-preview";
 import { ChoiceControls } from "./choice-controls";
@@ -85,7 +85,7 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
   const sendSubmission = () => {
     const submission = { choices, ...(setup.questions.length > 0 && { answers }) };
     const payload = JSON.stringify(submission);
-    if (pendingKey.current?.payload !== payload) pendingKey.current = { payload, key: crypto.randomUUID() };
+    if (pendingKey.current?.payload !== payload) pendingKey.current = { payload, key: newSubmissionKey() };
     submit.mutate({ ...submission, idempotencyKey: pendingKey.current.key });
   };
 
@@ -113,8 +113,8 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
           </div>
         </section>
 
-        <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,20rem)_minmax(0,1fr)]">
-          <section className={cardClass} aria-labelledby="controls-heading">
+        <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-6 lg:grid-cols-[minmax(0,20rem)_minmax(0,1fr)]">
+          <section className={`${cardClass} lg:sticky lg:top-6`} aria-labelledby="controls-heading">
             <h2 id="controls-heading" className="mb-4 text-lg font-semibold">
               Your choices
             </h2>
@@ -123,9 +123,9 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
               <p className="mt-4 text-sm text-ink-soft">
                 These are your bench settings. The drawing and the scope show attempt {replay.attempt.attemptNumber}; moving a control brings your bench back.
               </p>
-            ) : (
+            ) : activeRun.controls.seriesResistance || activeRun.controls.cable || activeRun.controls.driver ? (
               <SourceReadout facts={facts} />
-            )}
+            ) : null}
           </section>
           <section className={cardClass} aria-labelledby="scope-heading">
             <h2 id="scope-heading" className="mb-3 text-lg font-semibold">

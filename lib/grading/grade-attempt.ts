@@ -1,6 +1,7 @@
 import { labVariant, scoreAttempt, type Lab, type LabChoices } from "@/lessons";
 import { gradeQuestions, type GradedQuestion } from "./grade-questions";
 import { gradeRuns, type GradedRun } from "./grade-runs";
+import { invalidInput } from "./input-error";
 import { parseLabChoices } from "./parse-choices";
 
 export type GradingRequest = {
@@ -28,11 +29,15 @@ export type AttemptGrade = GradedWork & {
   passed: boolean;
 };
 
-/** Validates and simulates on the server; the heavy half, run before the attempt is numbered. */
+/**
+ * Validates and simulates on the server; the heavy half, run before the attempt is numbered.
+ * Throws one 422 naming every bad choice and unreadable answer together.
+ */
 export function gradeWork(request: GradingRequest): GradedWork {
   const variant = labVariant(request.lab, request.seed);
-  const choices = parseLabChoices(request.lab, variant, request.choices);
-  const questions = gradeQuestions(request.lab, request.answers ?? {});
+  const { choices, issues: choiceIssues } = parseLabChoices(request.lab, variant, request.choices);
+  const { questions, issues: answerIssues } = gradeQuestions(request.lab, request.answers ?? {});
+  if (choiceIssues.length + answerIssues.length > 0) throw invalidInput([...choiceIssues, ...answerIssues]);
   return { seed: request.seed, choices, runs: gradeRuns(request.lab, variant, choices), questions };
 }
 

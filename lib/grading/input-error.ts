@@ -1,8 +1,10 @@
 import type { z } from "zod";
 import { AppError } from "@/lib/http/errors";
 
+export type InputIssue = { path: string; message: string };
+
 /** A 422 whose field errors are keyed by the full dotted path of each bad value ("choices.main.seriesResistance"). */
-export function invalidInput(issues: { path: string; message: string }[]): AppError {
+export function invalidInput(issues: InputIssue[]): AppError {
   const fieldErrors: Record<string, string[]> = {};
   for (const issue of issues) (fieldErrors[issue.path] ??= []).push(issue.message);
   const first = issues[0];
@@ -11,7 +13,7 @@ export function invalidInput(issues: { path: string; message: string }[]): AppEr
 }
 
 /** Each issue at its dotted path; a key that is not allowed is reported at its own path. */
-export function issuesOf(error: z.ZodError, prefix: readonly PropertyKey[] = []): { path: string; message: string }[] {
+export function issuesOf(error: z.ZodError, prefix: readonly PropertyKey[] = []): InputIssue[] {
   const at = (path: readonly PropertyKey[]) => [...prefix, ...path].map(String).join(".");
   return error.issues.flatMap((issue) =>
     issue.code === "unrecognized_keys"

@@ -189,6 +189,14 @@ describe("lab questions", () => {
     expect(errors["answers.frame-time"][0]).toMatch(/Could not read/);
   });
 
+  it("names a bad choice and an unreadable answer in the same refusal", () => {
+    const errors = fieldErrorsOf(() =>
+      gradeAttempt({ lab: timing, seed, choices: { main: { zeroHigh: 0.42e-6, oneHigh: 0.8e-6 } }, answers: { ...right, "refresh-rate": "90" }, attemptNumber: 1 }),
+    );
+    expect(Object.keys(errors).sort()).toEqual(["answers.refresh-rate", "choices.main.zeroHigh"]);
+    expect(errors["answers.refresh-rate"][0]).toMatch(/has no unit/);
+  });
+
   it("refuses a quantity of the wrong kind", () => {
     const errors = fieldErrorsOf(() =>
       gradeAttempt({ lab: timing, seed, choices, answers: { ...right, "frame-time": "11.1 V" }, attemptNumber: 1 }),
