@@ -1,4 +1,6 @@
+import { spawn, type ChildProcess } from "node:child_process";
 import { randomUUID } from "node:crypto";
+import net from "node:net";
 import { eq, inArray } from "drizzle-orm";
 import { db } from "@/db/client";
 import { cohortMemberships, cohorts, invitations, schools, users, type Role } from "@/db/schema";
@@ -51,4 +53,45 @@ export async function countSchoolRows(params: { schoolId: string; cohortId: stri
   const memberships = await db.select({ userId: cohortMemberships.userId }).from(cohortMemberships).where(eq(cohortMemberships.cohortId, params.cohortId));
   const issued = await db.select({ id: invitations.id }).from(invitations).where(eq(invitations.schoolId, params.schoolId));
   return { users: found.length, memberships: memberships.length, invitations: issued.length };
+}
+
+export async function freePort(): Promise<number> {
+  const server = net.createServer();
+  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+  const { port } = server.address() as net.AddressInfo;
+  await new Promise((resolve) => server.close(resolve));
+  return port;
+}
+
+async function waitForPort(port: number): Promise<void> {
+  const deadline = Date.now() + 15_000;
+  while (Date.now() < deadline) {
+    const open = await new Promise<boolean>((resolve) => {
+      const socket = net.connect(port, "127.0.0.1", () => {
+        socket.end();
+        resolve(true);
+      });
+      socket.on("error", () => resolve(false));
+    });
+    if (open) return;
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  }
+  throw new Error(`Nothing listened on 127.0.0.1:${port} in time.`);
+}
+
+export type PrivateMailSink = { process: ChildProcess; listUrl: string };
+
+/**
+ * The project's real sink script on ports of this file's own, for tests that must stop mail or
+ * send thousands of letters without filling the shared sink other tests and pages read.
+ */
+export async function startPrivateMailSink(smtpPort: number): Promise<PrivateMailSink> {
+  const apiPort = await freePort();
+  const child = spawn(process.execPath, ["scripts/mail-sink.mjs"], {
+    env: { ...process.env, SMTP_PORT: String(smtpPort), MAIL_SINK_API_PORT: String(apiPort) },
+    stdio: "ignore",
+  });
+  await waitForPort(smtpPort);
+  await waitForPort(apiPort);
+  return { process: child, listUrl: `http://127.0.0.1:${apiPort}/messages` };
 }

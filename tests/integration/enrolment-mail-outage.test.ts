@@ -1,5 +1,3 @@
-import { spawn, type ChildProcess } from "node:child_process";
-import net from "node:net";
 import { eq, inArray } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
@@ -7,37 +5,16 @@ import { invitations, users } from "@/db/schema";
 import { acceptInvitation, issueInvitation } from "@/lib/auth/invitations";
 import { describeUnsent, enrolLearner, importRoster, isMailDeliveryError, resendWaitingInvitations } from "@/lib/enrolment";
 import { findLinks } from "@/lib/mail/sink";
-import { createTestSchool, csvFile, rosterCsv, type TestSchool } from "./enrolment-fixtures";
+import { createTestSchool, csvFile, freePort, rosterCsv, startPrivateMailSink, type PrivateMailSink, type TestSchool } from "./enrolment-fixtures";
 
 // The mail server is down while learners are enrolled: the invitations must be kept and reported
 // as not sent, and once a mail server answers on that port, "resend all waiting" delivers them.
 // This file points the app's SMTP settings at a port nothing listens on, then starts the real
 // sink script there.
 
-async function freePort(): Promise<number> {
-  const server = net.createServer();
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  const { port } = server.address() as net.AddressInfo;
-  await new Promise((resolve) => server.close(resolve));
-  return port;
-}
-
-async function waitForPort(port: number): Promise<void> {
-  const deadline = Date.now() + 15_000;
-  while (Date.now() < deadline) {
-    const open = await new Promise<boolean>((resolve) => {
-      const socket = net.connect(port, "127.0.0.1", () => resolve(socket.end() && true));
-      socket.on("error", () => resolve(false));
-    });
-    if (open) return;
-    await new Promise((resolve) => setTimeout(resolve, 100));
-  }
-  throw new Error(`Nothing listened on ${port} in time.`);
-}
-
 let school: TestSchool;
 let smtpPort: number;
-let sink: ChildProcess | undefined;
+let sink: PrivateMailSink | undefined;
 const savedPort = process.env.SMTP_PORT;
 
 beforeAll(async () => {
@@ -48,7 +25,7 @@ beforeAll(async () => {
 });
 
 afterAll(() => {
-  sink?.kill();
+  sink?.process.kill();
   process.env.SMTP_PORT = savedPort;
 });
 
@@ -89,18 +66,13 @@ describe("enrolling while the mail server is down", () => {
   });
 
   it("delivers every waiting invitation once a mail server answers, with links that work", async () => {
-    const apiPort = await freePort();
-    sink = spawn(process.execPath, ["scripts/mail-sink.mjs"], {
-      env: { ...process.env, SMTP_PORT: String(smtpPort), MAIL_SINK_API_PORT: String(apiPort) },
-      stdio: "ignore",
-    });
-    await waitForPort(smtpPort);
+    sink = await startPrivateMailSink(smtpPort);
 
     const resent = await resendWaitingInvitations({ actor: school.admin, cohortId: school.cohortId });
     // The school-wide instructor invitation has no cohort, so it is not among the cohort's waiting.
     expect(resent).toEqual({ ok: true, reissued: 4, letters: { sent: 4, unsent: 0 } });
 
-    const response = await fetch(`http://127.0.0.1:${apiPort}/messages?to=${encodeURIComponent(school.domain)}`);
+    const response = await fetch(`${sink.listUrl}?to=${encodeURIComponent(school.domain)}`);
     const caught = (await response.json()) as { to: string; text: string }[];
     expect(caught.map((message) => message.to).sort()).toEqual([...roster().map((p) => p.email), `dina@${school.domain}`].sort());
 
