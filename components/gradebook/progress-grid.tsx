@@ -33,6 +33,7 @@ const helper = createColumnHelper<typeof features, GradebookRow>();
 const standingOrder: Standing[] = ["stuck", "not-started", "on-track", "complete", "switched-off"];
 
 const dayMs = 86_400_000;
+const shortDay = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", timeZone: "UTC" });
 
 function daysAgo(date: Date, now: Date): string {
   const days = Math.floor((now.getTime() - date.getTime()) / dayMs);
@@ -105,8 +106,8 @@ function buildColumns(items: GradebookItem[], cohortId: string, now: Date) {
       cell: ({ row }) => {
         const last = row.original.lastActivityAt;
         return last ? (
-          <div className="whitespace-nowrap text-sm">
-            <span className="block">{formatActivityDay(last)}</span>
+          <div className="whitespace-nowrap text-sm" title={formatActivityDay(last)}>
+            <span className="block">{shortDay.format(last)}</span>
             <span className="block text-xs text-ink-faint">{daysAgo(last, now)}</span>
           </div>
         ) : (
@@ -195,6 +196,7 @@ export function ProgressGrid({ items, rows, cohortId, now }: Props) {
         </p>
       </div>
 
+      <p className="mb-2 text-xs text-ink-soft sm:hidden">Swipe the grid sideways for each lab and bench exercise.</p>
       <div className="relative overflow-x-auto rounded-lg border border-line">
         <table className="w-full border-collapse text-sm">
           <caption className="sr-only">
@@ -212,18 +214,20 @@ export function ProgressGrid({ items, rows, cohortId, now }: Props) {
                       key={header.id}
                       scope="col"
                       aria-sort={sorted ? ariaSort[sorted] : "none"}
-                      className={`border-b border-line px-2 py-2 text-left align-bottom font-semibold ${sticky}`}
+                      className={`border-b border-line px-1 py-2 text-left align-bottom font-semibold ${sticky}`}
                     >
                       <button
                         type="button"
                         onClick={header.column.getToggleSortingHandler()}
                         title={item ? `${item.label}: ${item.title} — sort by best score` : `Sort by ${String(header.column.columnDef.header).toLowerCase()}`}
-                        className="inline-flex items-center gap-1 whitespace-nowrap rounded px-1 py-0.5 hover:bg-line/60"
+                        className="inline-flex items-center gap-0.5 whitespace-nowrap rounded px-1 py-0.5 underline decoration-line-strong decoration-dotted underline-offset-4 hover:bg-line/60"
                       >
                         <table.FlexRender header={header} />
-                        <span aria-hidden="true" className={`text-xs ${sorted ? "text-accent" : "text-ink-faint"}`}>
-                          {sorted ? sortMarks[sorted] : "↕"}
-                        </span>
+                        {sorted ? (
+                          <span aria-hidden="true" className="text-xs text-accent">
+                            {sortMarks[sorted]}
+                          </span>
+                        ) : null}
                       </button>
                     </th>
                   );
