@@ -13,7 +13,7 @@ function minuteStamp(date: Date | null): string {
   return date ? date.toISOString().slice(0, 16).replace("T", " ") : "";
 }
 
-export function gradebookCsvRows(gradebook: Gradebook): { fields: string[]; data: (string | number)[][] } {
+function gradebookCsvRows(gradebook: Gradebook): { fields: string[]; data: (string | number)[][] } {
   const fields = [
     "Learner",
     "E-mail",

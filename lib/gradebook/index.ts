@@ -12,6 +12,6 @@ export {
   type Standing,
 } from "./assemble";
 export { scoreDistributions, attemptsPerDay, type AttemptDay, type AttemptDayRow, type ScoreBin, type ScoreDistribution } from "./charts";
-export { gradebookCsv, gradebookCsvRows, gradebookFileName } from "./csv";
+export { gradebookCsv, gradebookFileName } from "./csv";
 export { attemptRecord, type AttemptRecord, type AttemptRunRecord } from "./attempt-record";
 export { cellStateLabels, describeAttention, describeCell, formatActivityDay, plural, standingLabels } from "./words";

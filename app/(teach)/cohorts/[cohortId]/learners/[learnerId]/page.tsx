@@ -8,6 +8,7 @@ import { Card } from "@/components/ui/card";
 import { formatMoment } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
 import { requireRouteAccess } from "@/lib/auth/current-user";
+import type { GradebookItem } from "@/lib/gradebook";
 import { loadLearnerRecord, type BenchRecord, type LabRecord } from "@/lib/gradebook/load";
 import { plural } from "@/lib/gradebook/words";
 
@@ -19,6 +20,11 @@ const benchStatusWords = {
   returned: "Returned for rework",
   accepted: "Accepted",
 } as const;
+
+/** The in-page anchor of an item's section ("lab-rc-window"). */
+function anchorOf(item: GradebookItem): string {
+  return item.key.replace(":", "-");
+}
 
 function labSummary(record: LabRecord): string {
   const { attempts } = record;
@@ -94,7 +100,7 @@ export default async function LearnerRecordPage({ params }: { params: Promise<{ 
 
       <nav aria-label="Labs" className="mb-6 flex flex-wrap gap-2 text-sm">
         {[...labs, ...bench].map(({ item }) => (
-          <a key={item.key} href={`#${item.key.replace(":", "-")}`} className="rounded-full border border-line-strong bg-surface px-3 py-1 hover:border-accent">
+          <a key={item.key} href={`#${anchorOf(item)}`} className="rounded-full border border-line-strong bg-surface px-3 py-1 hover:border-accent">
             {item.label}
           </a>
         ))}
@@ -103,8 +109,8 @@ export default async function LearnerRecordPage({ params }: { params: Promise<{ 
       <div className="space-y-6">
         {labs.map((lab) => (
           <Card key={lab.item.key}>
-            <section id={lab.item.key.replace(":", "-")} aria-labelledby={`${lab.item.key.replace(":", "-")}-heading`} className="scroll-mt-6">
-              <h2 id={`${lab.item.key.replace(":", "-")}-heading`} className="text-lg font-semibold">
+            <section id={anchorOf(lab.item)} aria-labelledby={`${anchorOf(lab.item)}-heading`} className="scroll-mt-6">
+              <h2 id={`${anchorOf(lab.item)}-heading`} className="text-lg font-semibold">
                 {lab.item.label} · {lab.item.title}
               </h2>
               <p className="mt-1 text-sm text-ink-soft">{labSummary(lab)}</p>
@@ -118,8 +124,8 @@ export default async function LearnerRecordPage({ params }: { params: Promise<{ 
         ))}
         {bench.map((record) => (
           <Card key={record.item.key}>
-            <section id={record.item.key.replace(":", "-")} aria-labelledby={`${record.item.key.replace(":", "-")}-heading`} className="scroll-mt-6">
-              <h2 id={`${record.item.key.replace(":", "-")}-heading`} className="mb-2 text-lg font-semibold">
+            <section id={anchorOf(record.item)} aria-labelledby={`${anchorOf(record.item)}-heading`} className="scroll-mt-6">
+              <h2 id={`${anchorOf(record.item)}-heading`} className="mb-2 text-lg font-semibold">
                 {record.item.label} · {record.item.title}
               </h2>
               <BenchWork record={record} canReview={user.role === "instructor"} />
