@@ -21,7 +21,8 @@ const certificate: CertificateDocument = {
 };
 const url = "https://edgewise.example.test/c/7K2M-QX9P-4TDW-8HBN";
 
-describe("the certificate PDF", () => {
+// The first render decodes the typeface files, which takes seconds on a busy machine.
+describe("the certificate PDF", { timeout: 60_000 }, () => {
   it("is one landscape A4 page whose real text names the learner, course, school, date, results and code", async () => {
     const read = await readCertificatePdf(await renderCertificatePdf(certificate, url));
     expect(read.pageCount).toBe(1);

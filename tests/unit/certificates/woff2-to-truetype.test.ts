@@ -17,7 +17,7 @@ function sum32(buffer: Buffer): number {
   return sum;
 }
 
-describe("WOFF2 to TrueType", () => {
+describe("WOFF2 to TrueType", { timeout: 60_000 }, () => {
   for (const subset of ["latin", "latin-ext", "cyrillic"]) {
     it(`keeps every glyph's outline and advance (${subset})`, () => {
       const woff2 = fontFile(subset);
