@@ -17,7 +17,10 @@ function navItems(user: SessionUser): NavItem[] {
       { href: "/cohorts", label: "My cohorts" },
       { href: "/reviews", label: "Bench reviews" },
     ],
-    admin: [{ href: "/admin", label: "School" }],
+    admin: [
+      { href: "/admin", label: "School" },
+      { href: "/certificates", label: "Certificates" },
+    ],
   }[user.role];
   if (isMailSinkEnabled() && (protectedRoutes["/dev/mail"] as readonly Role[]).includes(user.role)) {
     return [...items, { href: "/dev/mail", label: "Caught mail" }];

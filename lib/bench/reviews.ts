@@ -5,6 +5,7 @@ import type { BenchExercise } from "@/lessons";
 import { hasPermission } from "@/lib/auth/permissions";
 import type { SessionUser } from "@/lib/auth/session-store";
 import { readAppEnv } from "@/lib/env";
+import { checkCertificateAfterCourseWork } from "@/lib/certificates";
 import { sendReviewDoneEmail } from "@/lib/mail/review-done";
 import { benchExercisePath, findBenchExercise, rubricMaximum } from "./exercises";
 
@@ -81,6 +82,7 @@ export async function reviewBenchWork(params: {
     now: params.now ?? new Date(),
   });
   if (recorded.status !== "recorded") return { status: recorded.status === "missing" ? "not-found" : "not-waiting" };
+  if (decision === "accept") await checkCertificateAfterCourseWork({ userId: recorded.submission.learnerId });
 
   const emailed = await sendReviewDoneEmail({
     to: recorded.submission.learnerEmail,

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { CertificateCard } from "@/components/certificate/certificate-card";
 import { CourseMap } from "@/components/lesson/course-map";
 import { LabScoreChart } from "@/components/lesson/lab-score-chart";
 import { AppFrame } from "@/components/shell/app-frame";
@@ -76,6 +77,7 @@ export default async function LearnerHomePage() {
           </Card>
         </div>
         <div className="space-y-6">
+          <CertificateCard userId={user.id} />
           <Card>
             <h2 className="text-lg font-semibold">Best lab scores</h2>
             <p className="mt-1 text-sm text-ink-soft">Out of 100, one bar per lesson&apos;s lab; ✓ marks a pass.</p>
