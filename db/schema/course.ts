@@ -77,6 +77,8 @@ export const labAttempts = pgTable(
     unique("lab_attempts_user_idempotency_unique").on(table.userId, table.idempotencyKey),
     unique("lab_attempts_user_lab_number_unique").on(table.userId, table.labSlug, table.attemptNumber),
     index("lab_attempts_lab_created_idx").on(table.labSlug, table.createdAt),
+    // Covers the cohort grade book's per-learner summary, so it reads an index, not the table's history.
+    index("lab_attempts_user_lab_summary_idx").on(table.userId, table.labSlug, table.passed, table.score, table.createdAt),
   ],
 );
 

@@ -1,0 +1,1 @@
+CREATE INDEX "lab_attempts_user_lab_summary_idx" ON "lab_attempts" USING btree ("user_id","lab_slug","passed","score","created_at");
