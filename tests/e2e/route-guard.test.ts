@@ -1,14 +1,20 @@
 import type { APIRequestContext, Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { eq } from "drizzle-orm";
 import type { Role } from "@/db/schema";
+import { benchSubmissions, users } from "@/db/schema";
+import { db } from "@/db/client";
+import { getCourse } from "@/lessons";
 import { fillRoute, protectedRoutes, type ProtectedRoute } from "@/lib/auth/route-access";
-import { baseUrl, launchBrowser, openPage, saveScreenshot, signInAs } from "./support/browser";
+import { baseUrl, demoAccounts, launchBrowser, openPage, saveScreenshot, signInAs } from "./support/browser";
 
 // Walks every protected route over HTTP as each role and as an anonymous visitor.
 
 const roles: Role[] = ["admin", "instructor", "learner"];
 let browser: Browser;
 let cohortId: string;
+// Real values for every route parameter, so each allowed page answers 200 rather than 404.
+let routeParams: Record<string, string>;
 
 async function requestAs(role: Role): Promise<{ request: APIRequestContext; close: () => Promise<void> }> {
   const { context, page } = await openPage(browser, "wide");
@@ -17,7 +23,18 @@ async function requestAs(role: Role): Promise<{ request: APIRequestContext; clos
 }
 
 function concretePath(route: ProtectedRoute): string {
-  return fillRoute(route, { cohortId });
+  return fillRoute(route, routeParams);
+}
+
+/** The demo learner's hand-in waiting in the demo instructor's queue, created once per run. */
+async function ensureWaitingSubmission(learnerId: string, exerciseSlug: string): Promise<string> {
+  const [existing] = await db.select({ id: benchSubmissions.id }).from(benchSubmissions).where(eq(benchSubmissions.learnerId, learnerId));
+  if (existing) return existing.id;
+  const [created] = await db
+    .insert(benchSubmissions)
+    .values({ learnerId, cohortId, exerciseSlug, status: "submitted", submittedAt: new Date(), note: "Route walk fixture." })
+    .returning({ id: benchSubmissions.id });
+  return created!.id;
 }
 
 beforeAll(async () => {
@@ -27,6 +44,19 @@ beforeAll(async () => {
   const href = await page.locator('a[href^="/cohorts/"]').first().getAttribute("href");
   cohortId = href!.split("/").pop()!;
   await context.close();
+
+  const [learner] = await db.select({ id: users.id }).from(users).where(eq(users.email, demoAccounts.learner.email));
+  const course = getCourse();
+  const firstLesson = course.lessons[0]!;
+  const exerciseSlug = course.completion.benchExercises[0]!;
+  routeParams = {
+    cohortId,
+    learnerId: learner!.id,
+    lessonSlug: firstLesson.slug,
+    labSlug: firstLesson.lab!.slug,
+    exerciseSlug,
+    submissionId: await ensureWaitingSubmission(learner!.id, exerciseSlug),
+  };
 });
 afterAll(async () => {
   await browser?.close();
