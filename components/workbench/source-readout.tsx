@@ -8,7 +8,7 @@ export function SourceReadout({ facts }: { facts: RunFacts }) {
   return (
     <dl className="mt-6 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 rounded-lg bg-sunken px-3 py-2.5 text-sm tabular-nums">
       <dt className="text-ink-soft">Source, R_src</dt>
-      <dd>
+      <dd className="whitespace-nowrap">
         {formatOhms(facts.driver.outputResistance)} + {formatOhms(facts.seriesResistance)} = <strong>{formatOhms(source)}</strong>
       </dd>
       <dt className="text-ink-soft">Line, Z0</dt>

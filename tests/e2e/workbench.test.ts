@@ -62,6 +62,8 @@ async function submitAndRead(page: Page, expectedAttempt: number): Promise<strin
 describe("the workbench", () => {
   it("previews live, grades a failing then a passing resistor, keeps both, and redraws a stored attempt", async () => {
     const { context, page } = await openPage(browser, "wide");
+    const pageErrors: string[] = [];
+    page.on("pageerror", (error) => pageErrors.push(error.message));
     try {
       await signInThroughForm(page, learner);
       await page.goto(`/labs/${LAB}`);
@@ -114,6 +116,7 @@ describe("the workbench", () => {
       expect(await page.locator(farEndTrace).first().getAttribute("d")).toBe(traceAt33);
       expect(await resistorShown(page)).toBe("150 Ω");
       await saveScreenshot(page, "workbench-wide-reopened");
+      expect(pageErrors).toEqual([]);
     } finally {
       await context.close();
     }
