@@ -21,8 +21,6 @@ export const cohortInputSchema = z
     message: "The last day cannot be before the first day.",
   });
 
-export type CohortInput = z.infer<typeof cohortInputSchema>;
-
 export function courseOptions(): { value: string; label: string }[] {
   const course = getCourse();
   return [{ value: course.slug, label: course.title }];

@@ -17,8 +17,6 @@ export type ImportResult =
   | { ok: true; imported: number; letters: LetterOutcome; timings: { writeMs: number; mailMs: number } }
   | { ok: false; problem: string; preview?: RosterPreview };
 
-type CohortRef = { id: string; name: string };
-
 async function classifyFile(params: { actor: Actor; cohortId: string; file: unknown; now: Date }) {
   const cohort = await findCohortInSchool({ cohortId: params.cohortId, schoolId: params.actor.schoolId });
   if (!cohort) return { ok: false as const, problem: "That cohort is not part of your school." };
@@ -39,7 +37,7 @@ async function classifyFile(params: { actor: Actor; cohortId: string; file: unkn
     invited: new Set(conflicts.invited),
   });
   const preview: RosterPreview = { fileName: read.fileName, rows, counts: countRoster(rows) };
-  return { ok: true as const, cohort: cohort as CohortRef, preview };
+  return { ok: true as const, cohort, preview };
 }
 
 /** What importing the file would do, row by row; nothing is written. */

@@ -28,7 +28,7 @@ function isPerMessageFailure(error: unknown): boolean {
   return typeof code === "string" && perMessageErrorCodes.has(code);
 }
 
-export function acceptUrlFor(token: string): string {
+function acceptUrlFor(token: string): string {
   return `${readAppEnv().APP_URL}/invitations/${token}`;
 }
 

@@ -5,7 +5,7 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { createCohort, updateCohort, type SaveCohortResult } from "@/db/queries/admin-cohorts";
 import { requirePermission } from "@/lib/auth/current-user";
-import { cohortInputSchema } from "@/lib/enrolment/cohort-input";
+import { cohortInputSchema } from "@/lib/enrolment";
 import { failedFormState, invalidFormState, readFormValues, unexpectedFormState, type FormState } from "@/lib/http/form-state";
 
 export type CohortField = "name" | "courseSlug" | "startsOn" | "endsOn" | "instructorIds";

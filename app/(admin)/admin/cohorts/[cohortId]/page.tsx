@@ -10,7 +10,7 @@ import { listInstructorsBySchool } from "@/db/queries/admin-cohorts";
 import { listCohortRoster } from "@/db/queries/enrolment";
 import { getCourse } from "@/lessons";
 import { requireRouteAccess } from "@/lib/auth/current-user";
-import { buildRoster, countRosterStates, filterRoster, type RosterState } from "@/lib/enrolment/roster-status";
+import { buildRoster, countRosterStates, filterRoster, type RosterState } from "@/lib/enrolment";
 import { StatusNotice } from "../../status-notice";
 import { EnrolForm } from "./enrol-form";
 import { loadAdminCohort } from "./load-cohort";

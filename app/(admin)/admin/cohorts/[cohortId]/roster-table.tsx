@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { formatMoment } from "@/components/ui/dates";
-import { rosterStateLabels, type RosterLine, type RosterState } from "@/lib/enrolment/roster-status";
+import { rosterStateLabels, type RosterLine, type RosterState } from "@/lib/enrolment";
 import { EntryButtons } from "../../entry-buttons";
 import { StateBadge } from "./state-badge";
 

@@ -1,4 +1,4 @@
-import { rosterStateLabels, type RosterState } from "@/lib/enrolment/roster-status";
+import { rosterStateLabels, type RosterState } from "@/lib/enrolment";
 
 const styles: Record<RosterState, string> = {
   accepted: "bg-ok-soft text-ok",

@@ -4,7 +4,7 @@ import { Card } from "@/components/ui/card";
 import { PageHeading } from "@/components/ui/page-heading";
 import { listInstructorsBySchool } from "@/db/queries/admin-cohorts";
 import { requireRouteAccess } from "@/lib/auth/current-user";
-import { courseOptions } from "@/lib/enrolment/cohort-input";
+import { courseOptions } from "@/lib/enrolment";
 import { CohortForm } from "../cohort-form";
 
 export const metadata: Metadata = { title: "New cohort" };

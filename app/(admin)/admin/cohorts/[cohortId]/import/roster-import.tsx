@@ -10,6 +10,8 @@ import { RosterPreviewTable } from "./roster-preview-table";
 
 type Intent = "preview" | "import";
 
+const count = (value: number) => value.toLocaleString("en-GB");
+
 /**
  * Choose a file → check it (the server classifies every row; nothing is written) → import the
  * valid rows. The chosen file is kept here so the import sends the same bytes that were checked.
@@ -103,21 +105,22 @@ function RosterImportRound({ cohortId, cohortName, onRestart }: { cohortId: stri
               Preview of {preview.fileName}
             </h2>
             <p className="mt-1 text-sm text-ink-soft">
-              {preview.counts.total} rows: {preview.counts.valid} valid, {preview.counts.duplicate} duplicate, {preview.counts.invalid} invalid.
+              {count(preview.counts.total)} rows: {count(preview.counts.valid)} valid, {count(preview.counts.duplicate)} duplicate,{" "}
+              {count(preview.counts.invalid)} invalid.
               Nothing has been written yet. Only valid rows are imported; fix the others in your file and import it again later.
             </p>
           </div>
-          <RosterPreviewTable key={`${preview.fileName}-${preview.counts.total}-${validCount}`} rows={preview.rows} counts={preview.counts} />
-          <div className="flex flex-wrap items-center gap-3 border-t border-line pt-4">
+          <div className="flex flex-wrap items-center gap-3 rounded-lg bg-sunken p-3">
             <button type="button" disabled={pending || validCount === 0} onClick={() => send("import", validCount)} className={buttonClass("primary")}>
               {pending && intent === "import"
-                ? `Importing and sending ${validCount.toLocaleString("en-GB")} invitations…`
-                : `Import ${validCount.toLocaleString("en-GB")} valid row${validCount === 1 ? "" : "s"}`}
+                ? `Importing and sending ${count(validCount)} invitations…`
+                : `Import ${count(validCount)} valid row${validCount === 1 ? "" : "s"}`}
             </button>
             <p className="text-sm text-ink-soft">
               All valid rows go in together or none does. Each new learner gets an invitation e-mail{validCount > 1000 ? "; a list this long takes a minute or so" : ""}.
             </p>
           </div>
+          <RosterPreviewTable key={`${preview.fileName}-${preview.counts.total}-${validCount}`} rows={preview.rows} counts={preview.counts} />
         </section>
       ) : null}
     </div>
