@@ -2,6 +2,7 @@ import { NextResponse } from "next/server";
 import { z } from "zod";
 import { findLearnerCohortId, listLabAttemptsByLearner, recordLabAttempt } from "@/db/queries/attempts";
 import { getCourse } from "@/lessons";
+import { checkCertificateAfterCourseWork } from "@/lib/certificates";
 import { gradeWork, outcomeOf, scoreWork, toAttemptView, variantSeedFor, verdictLines } from "@/lib/grading";
 import { invalidInput, issuesOf } from "@/lib/grading/input-error";
 import { AppError } from "@/lib/http/errors";
@@ -58,6 +59,7 @@ export async function POST(request: Request, context: Context): Promise<NextResp
       throw new AppError("conflict", "That submission key was already used for another lab. Submit again.");
     }
     const attempt = toAttemptView(recorded.attempt);
+    if (recorded.status === "created" && attempt.passed) await checkCertificateAfterCourseWork({ userId: user.id });
     return withSession(
       NextResponse.json(
         { attempt, score: attempt.score, passed: attempt.passed, reasons: verdictLines(attempt), replayed: recorded.status === "replayed" },
