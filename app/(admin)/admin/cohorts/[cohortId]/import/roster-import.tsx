@@ -52,35 +52,37 @@ function RosterImportRound({ cohortId, cohortName, onRestart }: { cohortId: stri
 
   return (
     <div className="space-y-5">
-      <form
-        noValidate
-        onSubmit={(event) => {
-          event.preventDefault();
-          send("preview");
-        }}
-        className="flex flex-wrap items-end gap-3"
-      >
-        <div className="w-full min-w-0 space-y-1.5 sm:w-auto sm:flex-1">
+      {imported ? null : (
+        <form
+          noValidate
+          onSubmit={(event) => {
+            event.preventDefault();
+            send("preview");
+          }}
+          className="space-y-1.5"
+        >
           <label htmlFor="roster-file" className="block text-sm font-medium text-ink">
             CSV file
           </label>
-          <input
-            id="roster-file"
-            name="file"
-            type="file"
-            accept=".csv,.txt,text/csv,text/plain"
-            aria-describedby="roster-file-hint"
-            onChange={(event) => setFile(event.target.files?.[0] ?? null)}
-            className="block w-full rounded-lg border border-line-strong bg-surface px-3 py-2 text-sm file:mr-3 file:rounded-md file:border-0 file:bg-accent-soft file:px-3 file:py-1.5 file:text-sm file:font-semibold file:text-accent-strong"
-          />
+          <div className="flex flex-wrap gap-3">
+            <input
+              id="roster-file"
+              name="file"
+              type="file"
+              accept=".csv,.txt,text/csv,text/plain"
+              aria-describedby="roster-file-hint"
+              onChange={(event) => setFile(event.target.files?.[0] ?? null)}
+              className="block w-full min-w-0 rounded-lg border border-line-strong bg-surface px-3 py-2 text-sm file:mr-3 file:rounded-md file:border-0 file:bg-accent-soft file:px-3 file:py-1.5 file:text-sm file:font-semibold file:text-accent-strong sm:w-auto sm:flex-1"
+            />
+            <button type="submit" disabled={pending || !file} className={buttonClass("secondary")}>
+              {pending && intent === "preview" ? "Checking…" : "Check the file"}
+            </button>
+          </div>
           <p id="roster-file-hint" className="text-sm text-ink-faint">
             Up to {rosterFileLimitLabel}; about 5,000 learners take 250 kB.
           </p>
-        </div>
-        <button type="submit" disabled={pending || !file} className={buttonClass("secondary")}>
-          {pending && intent === "preview" ? "Checking…" : "Check the file"}
-        </button>
-      </form>
+        </form>
+      )}
 
       <StatusNotice
         tone={imported ? "success" : "error"}
