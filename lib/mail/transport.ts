@@ -7,6 +7,8 @@ export function getTransport(): Transporter {
   if (transporter) return transporter;
   const env = readMailEnv();
   transporter = nodemailer.createTransport({
+    // A batch of invitations reuses a few connections instead of opening one per message.
+    pool: true,
     host: env.SMTP_HOST,
     port: env.SMTP_PORT,
     secure: env.SMTP_SECURE,
