@@ -86,6 +86,9 @@ export default async function AdminCohortPage({
         <Link href={`/admin/cohorts/${cohort.id}/edit`} className={buttonClass("secondary")}>
           Edit cohort
         </Link>
+        <Link href={`/cohorts/${cohort.id}`} className={buttonClass("secondary")}>
+          Progress and grade book
+        </Link>
         <ResendWaitingButton cohortId={cohort.id} waiting={counts.pending + counts.expired} />
       </div>
 
