@@ -3,6 +3,7 @@
 // only what is missing and never changes a password someone has since set.
 import { and, eq } from "drizzle-orm";
 import { createDatabase, createPool, type Database } from "../db/connection";
+import { seedDemoActivity } from "../db/demo-activity";
 import { demoAdmin, demoCohorts, demoLearnerEmail, demoPassword, demoSchool } from "../db/demo-data";
 import { cohortMemberships, cohorts, schools, users, type Role } from "../db/schema";
 import { hashPassword } from "../lib/auth/password";
@@ -78,8 +79,13 @@ function printAccounts(accounts: Account[], created: number): void {
 async function main(): Promise<void> {
   const pool = createPool(readDatabaseEnv().DATABASE_URL, 2);
   try {
-    const { accounts, created } = await seed(createDatabase(pool));
+    const db = createDatabase(pool);
+    const { accounts, created } = await seed(db);
     printAccounts(accounts, created);
+    const activity = await seedDemoActivity(db);
+    console.log(
+      `Demo activity: ${activity.learners} learner${activity.learners === 1 ? "" : "s"} given ${activity.attempts} lab attempts, ${activity.answers} quick-check answers and ${activity.benchHandIns} bench hand-ins.`,
+    );
   } finally {
     await pool.end();
   }
