@@ -1,0 +1,79 @@
+import { NextResponse, type NextRequest } from "next/server";
+
+// Sets the per-request Content-Security-Policy (and HSTS) on every page. The headers that never
+// change per request (referrer, nosniff, framing, permissions) are in next.config.ts so that static
+// files carry them too.
+
+const isProduction = process.env.NODE_ENV === "production";
+const servedOverHttps = process.env.APP_URL?.startsWith("https://") ?? false;
+const hostedIngestDomain = "ingest.uploadthing.com";
+
+/**
+ * Where the browser sends bench photos: the uploader PUTs straight to the upload service's ingest
+ * host, which is UPLOADTHING_INGEST_URL when set (the local fake) and otherwise
+ * https://<region>.<ingestHost> for the regions named in UPLOADTHING_TOKEN.
+ */
+function uploadIngestSources(): string[] {
+  const configured = process.env.UPLOADTHING_INGEST_URL;
+  if (configured && URL.canParse(configured)) return [new URL(configured).origin];
+  try {
+    const token = JSON.parse(atob(process.env.UPLOADTHING_TOKEN ?? "")) as { regions?: unknown; ingestHost?: unknown };
+    const host = typeof token.ingestHost === "string" ? token.ingestHost : hostedIngestDomain;
+    const regions = Array.isArray(token.regions) ? token.regions.filter((region) => /^[a-z0-9-]+$/i.test(String(region))) : [];
+    if (regions.length > 0) return regions.map((region) => `https://${region}.${host}`);
+  } catch {
+    // An unreadable token fails the upload route with its own message; the policy falls back below.
+  }
+  return [`https://*.${hostedIngestDomain}`];
+}
+
+const connectSources = ["'self'", ...uploadIngestSources()].join(" ");
+
+function contentSecurityPolicy(nonce: string): string {
+  return [
+    "default-src 'self'",
+    // React in development rebuilds server error stacks with eval; production needs no eval.
+    `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${isProduction ? "" : " 'unsafe-eval'"}`,
+    // The chart library and Tailwind's runtime values write style attributes.
+    "style-src 'self' 'unsafe-inline'",
+    "img-src 'self' data: blob:",
+    "font-src 'self'",
+    `connect-src ${connectSources}`,
+    "worker-src 'self' blob:",
+    "object-src 'none'",
+    "base-uri 'self'",
+    "form-action 'self'",
+    "frame-ancestors 'none'",
+  ].join("; ");
+}
+
+function createNonce(): string {
+  return btoa(String.fromCharCode(...crypto.getRandomValues(new Uint8Array(16))));
+}
+
+export function proxy(request: NextRequest) {
+  const policy = contentSecurityPolicy(createNonce());
+  // Next takes the nonce for its own inline scripts from the policy on the request.
+  const requestHeaders = new Headers(request.headers);
+  requestHeaders.set("content-security-policy", policy);
+
+  const response = NextResponse.next({ request: { headers: requestHeaders } });
+  response.headers.set("content-security-policy", policy);
+  if (isProduction && servedOverHttps) {
+    response.headers.set("strict-transport-security", "max-age=63072000; includeSubDomains");
+  }
+  return response;
+}
+
+export const config = {
+  matcher: [
+    {
+      // Pages only: route handlers answer JSON and files, and build assets never render scripts.
+      source: "/((?!api/|_next/static|_next/image|icon.svg|favicon.ico).*)",
+      missing: [
+        { type: "header", key: "next-router-prefetch" },
+        { type: "header", key: "purpose", value: "prefetch" },
+      ],
+    },
+  ],
+};
