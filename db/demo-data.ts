@@ -11,10 +11,10 @@ export const demoAdmin = { name: "Noor Whitcombe", email: `admin@${domain}` } as
 
 export const demoCohorts = [
   {
-    name: "Data lines — January evenings",
+    name: "Data lines — autumn evenings",
     courseSlug: "data-runs",
-    startsOn: "2026-01-12",
-    endsOn: "2026-04-03",
+    startsOn: "2026-10-05",
+    endsOn: "2027-01-22",
     instructor: { name: "Tomasz Brennholt", email: `tomasz.brennholt@${domain}` },
     learners: [
       "Priya Castellanos",
@@ -26,10 +26,10 @@ export const demoCohorts = [
     ],
   },
   {
-    name: "Data lines — February days",
+    name: "Data lines — winter days",
     courseSlug: "data-runs",
-    startsOn: "2026-02-02",
-    endsOn: "2026-05-22",
+    startsOn: "2026-11-09",
+    endsOn: "2027-02-26",
     instructor: { name: "Adaeze Lindqvist", email: `adaeze.lindqvist@${domain}` },
     learners: [
       "Lucía Penhallow",

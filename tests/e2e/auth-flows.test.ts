@@ -1,6 +1,7 @@
 import { randomUUID } from "node:crypto";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { demoCohorts, demoSchool } from "@/db/demo-data";
 import { waitForMessage } from "../integration/support/mail-sink";
 import { launchBrowser, openPage, saveScreenshot, signInAs, signInThroughForm } from "./support/browser";
 
@@ -39,7 +40,7 @@ describe("invitation", () => {
     try {
       await signInAs(admin.page, "admin");
       await admin.page.getByLabel("E-mail address").fill(email);
-      await admin.page.getByLabel("Cohort").selectOption({ label: "Data lines — February days" });
+      await admin.page.getByLabel("Cohort").selectOption({ label: demoCohorts[1].name });
       await admin.page.getByRole("button", { name: "Send invitation" }).click();
       await expectAlert(admin.page, `Invitation sent to ${email}.`);
       expect(await admin.page.getByText(email).count()).toBeGreaterThan(0);
@@ -56,7 +57,7 @@ describe("invitation", () => {
     const invitee = await openPage(browser, "narrow");
     try {
       await invitee.page.goto(acceptUrl);
-      expect(await invitee.page.getByText("Data lines — February days, Fernhallow Trades College").isVisible()).toBe(true);
+      expect(await invitee.page.getByText(`${demoCohorts[1].name}, ${demoSchool.name}`).isVisible()).toBe(true);
       await invitee.page.getByLabel("Your name").fill("Ines Varga-Holm");
       await invitee.page.getByLabel("Choose a password").fill("short");
       await invitee.page.getByLabel("Type the password again").fill("short");
@@ -70,7 +71,7 @@ describe("invitation", () => {
       await invitee.page.getByRole("button", { name: "Set up my account" }).click();
       await invitee.page.waitForURL("**/learn");
       expect(await invitee.page.getByRole("heading", { name: "Welcome, Ines" }).isVisible()).toBe(true);
-      expect(await invitee.page.getByText("Data lines — February days").isVisible()).toBe(true);
+      expect(await invitee.page.getByText(demoCohorts[1].name).isVisible()).toBe(true);
 
       await invitee.page.getByRole("button", { name: "Sign out" }).click();
       await invitee.page.waitForURL("**/sign-in?notice=signed-out");

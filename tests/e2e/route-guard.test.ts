@@ -1,6 +1,7 @@
 import type { APIRequestContext, Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
+import { demoCohorts } from "@/db/demo-data";
 import type { Role } from "@/db/schema";
 import { benchSubmissions, users } from "@/db/schema";
 import { db } from "@/db/client";
@@ -121,7 +122,7 @@ describe("in the browser", () => {
       await page.getByLabel("Password", { exact: true }).fill("edgewise-demo");
       await page.getByRole("button", { name: "Sign in" }).click();
       await page.waitForURL(`**/cohorts/${cohortId}`);
-      expect(await page.getByRole("heading", { name: "Data lines — January evenings" }).isVisible()).toBe(true);
+      expect(await page.getByRole("heading", { name: demoCohorts[0].name }).isVisible()).toBe(true);
       await saveScreenshot(page, "instructor-cohort-wide");
     } finally {
       await context.close();

@@ -1,5 +1,6 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { demoCohorts } from "@/db/demo-data";
 import type { Role } from "@/db/schema";
 import { demoAccounts, launchBrowser, openPage, saveScreenshot, signInAs, viewports } from "./support/browser";
 
@@ -8,8 +9,8 @@ import { demoAccounts, launchBrowser, openPage, saveScreenshot, signInAs, viewpo
 
 // Integration tests add learners and cohorts to the demo school before this runs, so counts are not fixed.
 const homes: Record<Role, { path: string; heading: RegExp; visible: (string | RegExp)[] }> = {
-  learner: { path: "/learn", heading: /^Welcome, Priya$/, visible: ["Course map", "Data lines — January evenings"] },
-  instructor: { path: "/cohorts", heading: /^My cohorts$/, visible: ["Data lines — January evenings", /^\d+ learners →$/] },
+  learner: { path: "/learn", heading: /^Welcome, Priya$/, visible: ["Course map", demoCohorts[0].name] },
+  instructor: { path: "/cohorts", heading: /^My cohorts$/, visible: [demoCohorts[0].name, /^\d+ learners →$/] },
   admin: {
     path: "/admin",
     heading: /^Fernhallow Trades College$/,

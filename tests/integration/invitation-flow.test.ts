@@ -1,7 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { demoAdmin } from "@/db/demo-data";
+import { demoAdmin, demoCohorts } from "@/db/demo-data";
 import { cohortMemberships, invitations, users } from "@/db/schema";
 import { acceptInvitation, issueInvitation, previewInvitation } from "@/lib/auth/invitations";
 import { invalidateSession, validateSessionToken } from "@/lib/auth/session-store";
@@ -30,7 +30,7 @@ describe("invitation → set password → sign in → sign out", () => {
 
     const message = await waitForMessage({ to: email, subject: /invitation/i });
     expect(message.subject).toBe("Your invitation to Fernhallow Trades College on Edgewise");
-    expect(message.text).toContain("Data lines — January evenings");
+    expect(message.text).toContain(demoCohorts[0].name);
     // The inviter's name is person-supplied text: it must arrive escaped in the HTML part.
     expect(message.html).toContain("Noor &lt;b&gt;Whitcombe&lt;/b&gt;");
     expect(message.html).not.toContain("<b>Whitcombe</b>");
