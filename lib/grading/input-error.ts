@@ -5,7 +5,8 @@ export type InputIssue = { path: string; message: string };
 
 /** A 422 whose field errors are keyed by the full dotted path of each bad value ("choices.main.seriesResistance"). */
 export function invalidInput(issues: InputIssue[]): AppError {
-  const fieldErrors: Record<string, string[]> = {};
+  // No prototype: a field named "__proto__" or "constructor" in hostile input must stay a plain key.
+  const fieldErrors: Record<string, string[]> = Object.create(null);
   for (const issue of issues) (fieldErrors[issue.path] ??= []).push(issue.message);
   const first = issues[0];
   const summary = first ? `${first.path || "the request"}: ${first.message}` : undefined;

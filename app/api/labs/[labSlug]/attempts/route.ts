@@ -20,6 +20,10 @@ const submissionSchema = z.strictObject({
 });
 
 async function readJson(request: Request): Promise<unknown> {
+  // Only JSON is read, so a cross-site form post (which cannot send application/json) is never graded.
+  if (!request.headers.get("content-type")?.toLowerCase().startsWith("application/json")) {
+    throw new AppError("bad-request", "Send the submission as application/json.");
+  }
   try {
     return await request.json();
   } catch {
