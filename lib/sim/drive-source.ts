@@ -1,7 +1,10 @@
 /**
  * The driver's ideal source sampled on the solver's step grid: linear ramps of `edgeTime`
- * (0–100 %) starting at each edge, flat in between. Steps are visited in increasing order, so
- * a cursor finds the current edge in constant time.
+ * (0–100 %), flat in between. Each ramp starts on the first step at or after its edge (so
+ * nothing moves before the edge) and has the same samples as every other ramp: an edge that
+ * repeats from the same state gives the same run of steps, which the solver can replay. The
+ * shift is under one step (0.1 ns). Steps are visited in increasing order, so a cursor finds
+ * the current edge in constant time.
  */
 export type DriveSchedule = {
   /** Start of each edge (s), ascending; edges never overlap. */
@@ -10,6 +13,24 @@ export type DriveSchedule = {
   edgeTime: number;
   highVoltage: number;
 };
+
+/** First step of each ramp and the first step after it. */
+export function rampSteps(schedule: DriveSchedule, dt: number): { start: Int32Array; end: Int32Array } {
+  const count = schedule.edgeStarts.length;
+  const start = new Int32Array(count);
+  const end = new Int32Array(count);
+  const length = Math.ceil(schedule.edgeTime / dt - 1e-9);
+  for (let k = 0; k < count; k += 1) {
+    start[k] = Math.ceil(schedule.edgeStarts[k] / dt - 1e-9);
+    end[k] = start[k] + length;
+  }
+  return { start, end };
+}
+
+/** Share of the swing a ramp covers `offset` steps after its first step. */
+export function rampProgress(offset: number, dt: number, edgeTime: number): number {
+  return Math.min(1, (offset * dt) / edgeTime);
+}
 
 export class DriveSource {
   private readonly startSteps: Int32Array;
@@ -20,18 +41,15 @@ export class DriveSource {
     private readonly schedule: DriveSchedule,
     private readonly dt: number,
   ) {
-    const count = schedule.edgeStarts.length;
-    this.startSteps = new Int32Array(count);
-    this.endSteps = new Int32Array(count);
-    for (let k = 0; k < count; k += 1) {
-      this.startSteps[k] = Math.ceil(schedule.edgeStarts[k] / dt - 1e-9);
-      this.endSteps[k] = Math.ceil((schedule.edgeStarts[k] + schedule.edgeTime) / dt - 1e-9);
-    }
+    const { start, end } = rampSteps(schedule, dt);
+    this.startSteps = start;
+    this.endSteps = end;
   }
 
-  /** Moves the cursor to the first edge not yet finished at step n. */
+  /** Moves the cursor to the first edge not yet finished at step n (back to the start if n lies before it). */
   seek(step: number): void {
     const count = this.endSteps.length;
+    if (this.cursor > 0 && this.endSteps[this.cursor - 1] > step) this.cursor = 0;
     while (this.cursor < count && this.endSteps[this.cursor] <= step) this.cursor += 1;
   }
 
@@ -44,9 +62,14 @@ export class DriveSource {
   }
 
   rampValue(step: number): number {
-    const { edgeStarts, edgeTime, highVoltage, rising } = this.schedule;
-    const progress = Math.min(1, Math.max(0, (step * this.dt - edgeStarts[this.cursor]) / edgeTime));
+    const { edgeTime, highVoltage, rising } = this.schedule;
+    const progress = rampProgress(step - this.startSteps[this.cursor], this.dt, edgeTime);
     return rising[this.cursor] ? highVoltage * progress : highVoltage * (1 - progress);
+  }
+
+  /** The source voltage at `step`, after `seek(step)`. */
+  valueAt(step: number): number {
+    return this.inRamp(step) ? this.rampValue(step) : this.level();
   }
 
   /** The flat level before the current edge. */

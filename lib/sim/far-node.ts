@@ -17,44 +17,57 @@ const IS = CLAMP_DIODE_MODEL.saturationCurrent;
 const VT = CLAMP_DIODE_MODEL.thermalVoltage * CLAMP_DIODE_MODEL.emissionCoefficient;
 /** Within this distance outside the rails a clamp carries under 0.1 µA (tens of µV across the line): treated as open. */
 export const NEGLIGIBLE_CONDUCTION = 0.4;
-const EXP_LIMIT = 40;
-const EXP_AT_LIMIT = Math.exp(EXP_LIMIT);
 
-/** Clamp current (A, positive into VDD) at the answer of the last solveClamped call. */
-export let lastClampCurrent = 0;
+/**
+ * Once the pin is this close to the DC value for a constant source it is held there, so the wave
+ * it sends back becomes exactly constant instead of creeping forever.
+ */
+export const SETTLED_TOLERANCE = 2e-4;
 
 /**
  * Solves G·v − J + I(v) = 0 when J/G lies beyond a rail, with I(v) the current out of the pin
- * through both clamps, Is·(e^((v−VDD)/Vt) − 1) − Is·(e^(−v/Vt) − 1); the exponential is continued
- * as a straight line beyond 40·Vt so that no step overflows. The left side is monotonic,
- * so the root lies between the rail and J/G; Newton's method starts from the previous step's
- * answer (usually a few millivolts away) and a shrinking bracket with bisection catches any
- * step that leaves it.
+ * through both clamps, Is·(e^((v−VDD)/Vt) − 1) − Is·(e^(−v/Vt) − 1). Only the clamp on the
+ * conducting side matters (the other carries at most Is). With x = the distance beyond that
+ * rail and D the current the source would push into it, the equation is
+ * f(x) = G·x − D + Is·(e^(x/Vt) − 1) = 0, x in [0, D/G], or in logarithmic form
+ * h(x) = x − Vt·ln(1 + (D − G·x)/Is) = 0. Both are increasing and convex, so a Newton step of
+ * either, taken from the right of the root, never passes it, and from the left always does.
+ * f's step is poor where the exponential dominates (at most Vt), h's where it is negligible
+ * (near D/G). Each iteration takes h's step, and where the diode carries less than Vt·G also
+ * f's, keeping the one that lands nearer the root: the longer from the right, the shorter from
+ * the left. A shrinking bracket with bisection catches anything else. `guess` is the caller's estimate (the last two
+ * steps extrapolated, usually within a millivolt); the clamp current is then J − G·v.
  */
 export function solveClamped(conductance: number, injected: number, supply: number, guess: number): number {
-  const open = injected / conductance;
-  const above = open > supply;
-  let low = above ? supply : open;
-  let high = above ? open : 0;
-  let v = guess > low && guess < high ? guess : open;
-  // Only the clamp on the conducting side matters: the other carries at most Is.
+  const above = injected > conductance * supply;
   const rail = above ? supply : 0;
   const sign = above ? 1 : -1;
-  for (let iteration = 0; iteration < 60; iteration += 1) {
-    const x = (sign * (v - rail)) / VT;
-    const exponential = x < EXP_LIMIT ? Math.exp(x) : EXP_AT_LIMIT * (1 + x - EXP_LIMIT);
-    const residual = conductance * v - injected + sign * IS * (exponential - 1);
-    if (residual > 0) high = v;
-    else low = v;
-    const slope = conductance + (IS / VT) * (x < EXP_LIMIT ? exponential : EXP_AT_LIMIT);
-    let next = v - residual / slope;
-    if (!(next >= low && next <= high)) next = 0.5 * (low + high);
-    lastClampCurrent = sign * IS * (exponential - 1);
-    // Newton converges quadratically: after a 10 µV correction the remaining error is far below 1 µV.
-    if (Math.abs(next - v) < 1e-5) return next;
-    v = next;
+  const available = sign * (injected - conductance * rail);
+  let low = 0;
+  let high = available / conductance;
+  const start = sign * (guess - rail);
+  // Without a usable guess: the root if G were 0, which lies right of the true one.
+  let x = start > low && start < high ? start : Math.min(VT * Math.log(1 + available / IS), high * (1 - 1e-12));
+  for (let iteration = 0; iteration < 80; iteration += 1) {
+    const ratio = 1 + (available - conductance * x) / IS;
+    const residual = x - VT * Math.log(ratio);
+    const slope = 1 + (VT * conductance) / (IS * ratio);
+    let step = residual / slope;
+    if (slope > 2) {
+      // The diode carries less than Vt·G: here f's step is the better one.
+      const exponential = Math.exp(x / VT);
+      const linearStep = (conductance * x - available + IS * (exponential - 1)) / (conductance + (IS / VT) * exponential);
+      // Right of the root both steps fall short: take the longer; left of it both overshoot: take the shorter.
+      step = Math.max(step, linearStep);
+    }
+    if (residual > 0) high = x;
+    else low = x;
+    let next = x - step;
+    if (!(next > low && next < high)) next = 0.5 * (low + high);
+    if (Math.abs(next - x) < 1e-5) return rail + sign * next;
+    x = next;
   }
-  return v;
+  return rail + sign * x;
 }
 
 /** DC voltage of the pin fed by `source` through `conductance`, with or without clamps. */
@@ -93,8 +106,8 @@ export class FarNode {
     const total = conductance + this.capacitiveConductance;
     let v = injected / total;
     if (v > this.safeHigh || v < this.safeLow) {
-      v = solveClamped(total, injected, this.supply, this.v1);
-      this.current = lastClampCurrent;
+      v = solveClamped(total, injected, this.supply, 2 * this.v1 - this.v2);
+      this.current = injected - total * v;
     } else {
       this.current = 0;
     }

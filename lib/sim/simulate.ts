@@ -8,8 +8,9 @@ import { measureBitLevels, measureRun, type RunMetrics } from "./metrics";
 import { parseSimInput, type ResolvedSimInput, type SimInput } from "./schema";
 import { bitSlots, colourBits } from "./signal";
 import { judgeVerdict, type Verdict } from "./verdict";
-import { RunHistory } from "./runs";
-import { expandRuns, sampleRuns, sampleUniform, waveformFromRuns, type Waveform } from "./waveform";
+import { RunRecord } from "./run-record";
+import { Trace } from "./trace";
+import { expandNearEnd, expandTrace, sampleNearEnd, sampleTrace, waveformFromTrace, type Waveform } from "./waveform";
 
 export type SimBit = {
   sent: 0 | 1;
@@ -46,7 +47,7 @@ const MAX_DRAWN_POINTS = 4000;
  * Memory reused from run to run (the workbench re-simulates on every drag). Nothing in a
  * returned SimResult points into it, and a run is synchronous, so sharing it is safe.
  */
-const scratch = { near: new RunHistory(1 << 16), far: new RunHistory(1 << 16) };
+const scratch = { arrivals: new RunRecord(1 << 16), near: new Trace(), far: new Trace(1 << 16) };
 let farScratch: Waveform | undefined;
 const MAX_SAMPLED_POINTS = 1_000_000;
 
@@ -112,7 +113,7 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
     { capacitance: receiver.inputCapacitance, supply: receiver.supplyVoltage, clamps: receiver.clampDiodes },
     scratch,
   );
-  const far = waveformFromRuns(solved.far, solved.dt, solved.stepCount, farScratch);
+  const far = waveformFromTrace(solved.far, solved.dt, farScratch);
   farScratch = far;
 
   const highLevel = receiver.highThreshold * receiver.supplyVoltage;
@@ -171,8 +172,8 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
   }
   const result: SimResult = {
     time: roundedArray(Float64Array.from({ length: points }, (_, i) => i * interval), 1e15),
-    nearEnd: roundedArray(sampleRuns(solved.near, solved.dt, solved.stepCount, interval, points), 1e6),
-    farEnd: roundedArray(sampleUniform(far, interval, points), 1e6),
+    nearEnd: roundedArray(sampleNearEnd(solved.near, solved.dt, solved.stepCount, interval, points), 1e6),
+    farEnd: roundedArray(sampleTrace(solved.far, solved.dt, interval, points), 1e6),
     decoded: decoding.bits.map((bit) => bit.received).join(""),
     bits: decoding.bits.map((bit, i) => ({
       sent: bit.sent,
@@ -196,8 +197,8 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
   if (options.keepFullResolution) {
     result.full = {
       time: Float64Array.from({ length: solved.stepCount }, (_, i) => i * solved.dt),
-      nearEnd: expandRuns(solved.near, solved.stepCount),
-      farEnd: expandRuns(solved.far, solved.stepCount),
+      nearEnd: expandNearEnd(solved.near, solved.stepCount),
+      farEnd: expandTrace(solved.far, solved.stepCount),
     };
   }
   return result;

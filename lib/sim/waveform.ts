@@ -1,65 +1,72 @@
-import type { RunHistory } from "./runs";
+import type { NearEnd } from "./near-end";
+import type { Trace } from "./trace";
 
-/**
- * A waveform as a piecewise-linear curve through its breakpoints. Built from the solver's runs
- * (a run's first and last step), it passes through every solver step to within the run
- * tolerance.
- */
+/** A waveform as a piecewise-linear curve through its breakpoints (a solver trace on the time axis). */
 export type Waveform = { time: Float64Array; value: Float64Array; count: number };
 
 /** `reuse` lends arrays to fill when they are large enough. */
-export function waveformFromRuns(history: RunHistory, dt: number, stepCount: number, reuse?: Waveform): Waveform {
-  const needed = history.count * 2;
-  const fits = reuse !== undefined && reuse.time.length >= needed;
-  const time = fits ? reuse.time : new Float64Array(needed);
-  const value = fits ? reuse.value : new Float64Array(needed);
-  const { steps, values } = history;
-  const runs = history.count;
-  let count = 0;
-  for (let k = 0; k < runs; k += 1) {
-    const first = steps[k];
-    if (first >= stepCount) break;
-    const last = Math.min(k + 1 < runs ? steps[k + 1] : stepCount, stepCount) - 1;
-    time[count] = first * dt;
-    value[count] = values[k];
-    count += 1;
-    if (last > first) {
-      time[count] = last * dt;
-      value[count] = values[k];
-      count += 1;
-    }
+export function waveformFromTrace(trace: Trace, dt: number, reuse?: Waveform): Waveform {
+  const count = trace.count;
+  const fits = reuse !== undefined && reuse.time.length >= count;
+  const time = fits ? reuse.time : new Float64Array(count);
+  const value = fits ? reuse.value : new Float64Array(count);
+  const { steps, values } = trace;
+  for (let k = 0; k < count; k += 1) {
+    time[k] = steps[k] * dt;
+    value[k] = values[k];
   }
   return { time, value, count };
 }
 
 /** Every solver step's value, for callers that asked for full resolution. */
-export function expandRuns(history: RunHistory, stepCount: number): Float64Array {
-  const values = new Float64Array(stepCount);
-  for (let k = 0; k < history.count; k += 1) {
-    const first = history.steps[k];
-    if (first >= stepCount) break;
-    const end = Math.min(k + 1 < history.count ? history.steps[k + 1] : stepCount, stepCount);
-    values.fill(history.values[k], first, end);
+export function expandTrace(trace: Trace, stepCount: number): Float64Array {
+  const out = new Float64Array(stepCount);
+  const { steps, values, count } = trace;
+  for (let k = 0; k + 1 < count; k += 1) {
+    const first = steps[k];
+    const last = Math.min(steps[k + 1], stepCount - 1);
+    const slope = (values[k + 1] - values[k]) / (steps[k + 1] - first);
+    for (let n = first; n <= last; n += 1) out[n] = values[k] + slope * (n - first);
   }
-  return values;
+  if (count === 1) out.fill(values[0]);
+  return out;
 }
 
-/** Samples runs directly onto a uniform grid (linear between solver steps), without building breakpoints. */
-export function sampleRuns(history: RunHistory, dt: number, stepCount: number, interval: number, points: number): Float64Array {
+/** Samples a trace onto the uniform grid t = p·interval, p < points (linear between breakpoints). */
+export function sampleTrace(trace: Trace, dt: number, interval: number, points: number): Float64Array {
   const out = new Float64Array(points);
-  const { steps, values, count } = history;
+  const { steps, values, count } = trace;
+  const lastStep = steps[count - 1];
   let k = 0;
+  for (let p = 0; p < points; p += 1) {
+    const position = Math.min((p * interval) / dt, lastStep);
+    while (k + 1 < count && steps[k + 1] <= position) k += 1;
+    if (k + 1 >= count) {
+      out[p] = values[k];
+    } else {
+      const fraction = (position - steps[k]) / (steps[k + 1] - steps[k]);
+      out[p] = values[k] + fraction * (values[k + 1] - values[k]);
+    }
+  }
+  return out;
+}
+
+/** Every solver step's near-end voltage. */
+export function expandNearEnd(near: NearEnd, stepCount: number): Float64Array {
+  const out = new Float64Array(stepCount);
+  for (let n = 0; n < stepCount; n += 1) out[n] = near.at(n);
+  return out;
+}
+
+/** Samples the near end onto the uniform grid t = p·interval, linear between solver steps. */
+export function sampleNearEnd(near: NearEnd, dt: number, stepCount: number, interval: number, points: number): Float64Array {
+  const out = new Float64Array(points);
   for (let p = 0; p < points; p += 1) {
     const position = Math.min((p * interval) / dt, stepCount - 1);
     const step = Math.floor(position);
-    while (k + 1 < count && steps[k + 1] <= step) k += 1;
-    const here = values[k];
     const fraction = position - step;
-    if (fraction > 0 && k + 1 < count && steps[k + 1] === step + 1) {
-      out[p] = here + fraction * (values[k + 1] - here);
-    } else {
-      out[p] = here;
-    }
+    const here = near.at(step);
+    out[p] = fraction > 0 ? here + fraction * (near.at(step + 1) - here) : here;
   }
   return out;
 }
@@ -82,23 +89,6 @@ export function valueAt(wave: Waveform, t: number): number {
   if (i + 1 >= wave.count || t <= wave.time[i]) return wave.value[i];
   const fraction = (t - wave.time[i]) / (wave.time[i + 1] - wave.time[i]);
   return wave.value[i] + fraction * (wave.value[i + 1] - wave.value[i]);
-}
-
-/** Linear interpolation onto a uniform grid t = i·interval, i < points. */
-export function sampleUniform(wave: Waveform, interval: number, points: number): Float64Array {
-  const out = new Float64Array(points);
-  let i = 0;
-  for (let p = 0; p < points; p += 1) {
-    const t = p * interval;
-    while (i + 1 < wave.count && wave.time[i + 1] <= t) i += 1;
-    if (i + 1 >= wave.count || t <= wave.time[i]) {
-      out[p] = wave.value[i];
-    } else {
-      const fraction = (t - wave.time[i]) / (wave.time[i + 1] - wave.time[i]);
-      out[p] = wave.value[i] + fraction * (wave.value[i + 1] - wave.value[i]);
-    }
-  }
-  return out;
 }
 
 /** Highest value on [from, to], endpoints interpolated. */

@@ -1,0 +1,527 @@
+import { rampProgress, rampSteps, type DriveSchedule } from "./drive-source";
+import { LineNearEnd, type EndCoefficients } from "./near-end";
+import type { RunRecord } from "./run-record";
+import { NEGLIGIBLE_CONDUCTION, pinEquilibrium, SETTLED_TOLERANCE, solveClamped } from "./far-node";
+import type { DriverResistances, LineTotals, ReceiverLoad, SolveOutput, SolverPlan, SolverScratch } from "./line-solver";
+import type { Trace } from "./trace";
+import { WaveChunk } from "./wave-chunk";
+
+/**
+ * The distributed line by the method of characteristics (Bergeron), see lib/sim/README.md. It is
+ * advanced one segment delay (a "chunk" of m steps) at a time: within a chunk every node reads
+ * only what the other nodes wrote in the previous chunk, so each node runs through its chunk
+ * alone. A node steps through busy stretches value by value and jumps over constant ones; the
+ * hot loops keep their state in locals and write the typed arrays directly.
+ */
+
+/**
+ * A settled pin ignores arriving changes smaller than this. Without it every small arrival
+ * would send back a train of still smaller ones, multiplying without end; with it the tail of
+ * the ringing stops once it is far below anything the decoder can see.
+ */
+const INPUT_DEADBAND = 5e-4;
+const JUNCTION_DEADBAND = 1e-4;
+/** The wave a moving pin sends back is passed on only when it has moved this much. */
+const OUTPUT_DEADBAND = 2e-4;
+/**
+ * When every wave on the line and the pin lie this close to the DC state of a flat drive, the
+ * state is set to that DC state and the solver jumps to the driver's next edge.
+ */
+const QUIET_BAND = 2e-3;
+
+type DcState = {
+  /** Stream values entering each segment from its left (forward) and right (backward) end. */
+  forward: Float64Array;
+  backward: Float64Array;
+  pin: number;
+};
+
+/** Coefficients of the driver end: source, its resistance and R/2N, G/2N, then the line. */
+function nearEndCoefficients(sourceResistance: number, endResistance: number, endConductance: number, z0: number): EndCoefficients {
+  const total = sourceResistance + endResistance;
+  const denominator = z0 + total + endConductance * total * z0;
+  return {
+    fromSource: z0 / denominator,
+    fromLine: total / denominator,
+    sourceShare: total > 0 ? endResistance / total : 1,
+  };
+}
+
+type Ladder = {
+  segments: number;
+  z0: number;
+  endResistance: number;
+  endConductance: number;
+  junctionResistance: number;
+  junctionConductance: number;
+};
+
+/**
+ * The DC state of the whole circuit for a flat drive level: the resistive ladder reduced to a
+ * Thevenin source at the pin, the pin solved with its clamps, then currents and voltages walked
+ * back to the driver. Stream values are v + Z0·i with i the current into the segment.
+ */
+function dcState(level: number, sourceResistance: number, ladder: Ladder, receiver: ReceiverLoad): DcState {
+  const { segments, z0, endResistance, endConductance, junctionResistance, junctionConductance } = ladder;
+  let theveninVoltage = level;
+  let theveninResistance = sourceResistance + endResistance;
+  const shunt = (g: number) => {
+    theveninVoltage /= 1 + g * theveninResistance;
+    theveninResistance /= 1 + g * theveninResistance;
+  };
+  shunt(endConductance);
+  for (let j = 1; j < segments; j += 1) {
+    theveninResistance += junctionResistance / 2;
+    shunt(junctionConductance);
+    theveninResistance += junctionResistance / 2;
+  }
+  shunt(endConductance);
+  theveninResistance = Math.max(theveninResistance + endResistance, 1e-3);
+  const pin = pinEquilibrium(theveninVoltage, 1 / theveninResistance, receiver.supply, receiver.clamps);
+
+  const forward = new Float64Array(segments);
+  const backward = new Float64Array(segments);
+  const pinCurrent = (theveninVoltage - pin) / theveninResistance;
+  let portVoltage = pin + endResistance * pinCurrent;
+  let current = pinCurrent + endConductance * portVoltage;
+  backward[segments - 1] = portVoltage - z0 * current;
+  for (let j = segments - 1; j >= 1; j -= 1) {
+    forward[j] = portVoltage + z0 * current;
+    const middle = portVoltage + (junctionResistance / 2) * current;
+    current += junctionConductance * middle;
+    portVoltage = middle + (junctionResistance / 2) * current;
+    backward[j - 1] = portVoltage - z0 * current;
+  }
+  forward[0] = portVoltage + z0 * current;
+  return { forward, backward, pin };
+}
+
+/** Two chunks per stream: the one being read (written last chunk) and the one being written. */
+type Stream = { read: WaveChunk; write: WaveChunk };
+
+function makeStream(length: number): Stream {
+  const read = new WaveChunk(length);
+  read.fillConstant(0);
+  return { read, write: new WaveChunk(length) };
+}
+
+class DistributedLine {
+  private readonly m: number;
+  private readonly segments: number;
+  private readonly dt: number;
+  private readonly stepCount: number;
+  private readonly z0: number;
+  private readonly endResistance: number;
+  private readonly theveninScale: number;
+  private readonly theveninConductance: number;
+  private readonly junctionArm: number;
+  private readonly junctionDivider: number;
+  private readonly forward: Stream[];
+  private readonly backward: Stream[];
+  /** Per inner junction: the two inputs it last answered and its two outputs. */
+  private readonly junctionState: Float64Array;
+  /** The pin's voltage at each step of the current chunk, handed to the trace in spans. */
+  private readonly pinValues: Float64Array;
+  /** The wave arriving back at the driver end, from which the near-end voltage follows. */
+  readonly arrivals: RunRecord;
+  readonly far: Trace;
+
+  private readonly drive: DriveSchedule;
+  private readonly edgeTime: number;
+  private readonly highVoltage: number;
+  private readonly rising: Uint8Array;
+  private readonly rampStart: Int32Array;
+  private readonly rampEnd: Int32Array;
+  /** The first edge not yet finished, as far as the near end has got. */
+  private cursor = 0;
+  private readonly high: EndCoefficients;
+  private readonly low: EndCoefficients;
+  private readonly dcHigh: DcState;
+  private readonly dcLow: DcState;
+
+  private readonly capacitiveConductance: number;
+  private readonly historyWeight1: number;
+  private readonly historyWeight2: number;
+  private readonly supply: number;
+  private readonly clamps: boolean;
+  private readonly safeLow: number;
+  private readonly safeHigh: number;
+  private v1 = 0;
+  private v2 = 0;
+  private held = false;
+  private heldInput = 0;
+  private heldOutput = 0;
+  private lastWave = 0;
+  clampCurrentPeak = 0;
+  clampCurrentPeakTime = 0;
+
+  constructor(plan: SolverPlan, line: LineTotals, drive: DriveSchedule, resistances: DriverResistances, receiver: ReceiverLoad, scratch: SolverScratch) {
+    const { segments, stepsPerSegment: m, dt } = plan;
+    this.m = m;
+    this.segments = segments;
+    this.dt = dt;
+    this.stepCount = plan.stepCount;
+    this.z0 = line.z0;
+    const ladder: Ladder = {
+      segments,
+      z0: line.z0,
+      endResistance: line.resistance / (2 * segments),
+      endConductance: line.conductance / (2 * segments),
+      junctionResistance: line.resistance / segments,
+      junctionConductance: line.conductance / segments,
+    };
+    this.endResistance = ladder.endResistance;
+    this.theveninScale = 1 / (1 + ladder.endConductance * this.z0);
+    this.theveninConductance = 1 / (this.endResistance + this.z0 * this.theveninScale);
+    this.junctionArm = this.z0 + ladder.junctionResistance / 2;
+    this.junctionDivider = 1 / (2 + ladder.junctionConductance * this.junctionArm);
+    this.forward = Array.from({ length: segments }, () => makeStream(m));
+    this.backward = Array.from({ length: segments }, () => makeStream(m));
+    this.junctionState = new Float64Array(4 * segments);
+    this.pinValues = new Float64Array(m);
+    this.arrivals = scratch.arrivals;
+    this.far = scratch.far;
+    this.arrivals.clear();
+    this.far.clear();
+
+    this.drive = drive;
+    this.edgeTime = drive.edgeTime;
+    this.highVoltage = drive.highVoltage;
+    this.rising = drive.rising;
+    const ramps = rampSteps(drive, dt);
+    this.rampStart = ramps.start;
+    this.rampEnd = ramps.end;
+    this.high = nearEndCoefficients(resistances.high, this.endResistance, ladder.endConductance, this.z0);
+    this.low = nearEndCoefficients(resistances.low, this.endResistance, ladder.endConductance, this.z0);
+    this.dcHigh = dcState(drive.highVoltage, resistances.high, ladder, receiver);
+    this.dcLow = dcState(0, resistances.low, ladder, receiver);
+
+    this.capacitiveConductance = (3 * receiver.capacitance) / (2 * dt);
+    this.historyWeight1 = (2 * receiver.capacitance) / dt;
+    this.historyWeight2 = receiver.capacitance / (2 * dt);
+    this.supply = receiver.supply;
+    this.clamps = receiver.clamps;
+    this.safeLow = receiver.clamps ? -NEGLIGIBLE_CONDUCTION : -Infinity;
+    this.safeHigh = receiver.clamps ? receiver.supply + NEGLIGIBLE_CONDUCTION : Infinity;
+  }
+
+  run(): void {
+    const { m, segments, forward, backward, stepCount } = this;
+    const streams = [...forward, ...backward];
+    let chunk = 0;
+    while (chunk * m < stepCount) {
+      const start = chunk * m;
+      const length = Math.min(m, stepCount - start);
+      this.nearEnd(start, length, backward[0].read, forward[0].write);
+      for (let j = 1; j < segments; j += 1) {
+        this.junction(j, length, forward[j - 1].read, backward[j].read, backward[j - 1].write, forward[j].write);
+      }
+      this.farEnd(start, length, forward[segments - 1].read, backward[segments - 1].write);
+      for (const stream of streams) {
+        const written = stream.write;
+        stream.write = stream.read;
+        stream.read = written;
+      }
+      chunk = this.skipWhileQuiet(chunk + 1);
+    }
+    this.far.finish(stepCount - 1);
+  }
+
+  nearEndVoltages(): LineNearEnd {
+    return new LineNearEnd(this.arrivals, this.drive, this.dt, this.high, this.low);
+  }
+
+  /** Index of the first edge not finished at `step`, from the cursor on. */
+  private edgeAt(step: number): number {
+    let k = this.cursor;
+    while (k < this.rampEnd.length && this.rampEnd[k] <= step) k += 1;
+    this.cursor = k;
+    return k;
+  }
+
+  /** When the whole line sits at the DC state of a flat drive, set it there and jump to the next edge. */
+  private skipWhileQuiet(chunk: number): number {
+    const next = chunk * this.m;
+    if (next >= this.stepCount) return chunk;
+    const k = this.edgeAt(next);
+    const edges = this.rampStart.length;
+    if (k < edges && this.rampStart[k] <= next) return chunk;
+    const nextEdge = k < edges ? this.rampStart[k] : Number.MAX_SAFE_INTEGER;
+    const resume = Math.floor(nextEdge / this.m);
+    if (resume <= chunk) return chunk;
+    const state = k > 0 && this.rising[k - 1] ? this.dcHigh : this.dcLow;
+    if (Math.abs(this.v1 - state.pin) > QUIET_BAND || Math.abs(this.v2 - state.pin) > QUIET_BAND) return chunk;
+    const { segments, forward, backward, junctionState } = this;
+    for (let j = 0; j < segments; j += 1) {
+      if (!forward[j].read.isNear(state.forward[j], QUIET_BAND)) return chunk;
+      if (!backward[j].read.isNear(state.backward[j], QUIET_BAND)) return chunk;
+    }
+    for (let j = 0; j < segments; j += 1) {
+      forward[j].read.fillConstant(state.forward[j]);
+      backward[j].read.fillConstant(state.backward[j]);
+    }
+    for (let j = 1; j < segments; j += 1) {
+      junctionState[4 * j] = state.forward[j - 1];
+      junctionState[4 * j + 1] = state.backward[j];
+      junctionState[4 * j + 2] = state.backward[j - 1];
+      junctionState[4 * j + 3] = state.forward[j];
+    }
+    // The DC state is exact: the pin holds it until something new arrives.
+    this.v1 = state.pin;
+    this.v2 = state.pin;
+    this.held = true;
+    this.heldInput = state.forward[segments - 1];
+    this.heldOutput = state.backward[segments - 1];
+    this.lastWave = this.heldOutput;
+    this.arrivals.push(next, state.backward[0]);
+    this.far.push(next, state.pin);
+    return resume;
+  }
+
+  private nearEnd(start: number, length: number, incoming: WaveChunk, out: WaveChunk): void {
+    const { rampStart, rampEnd, rising, high, low, dt, edgeTime, highVoltage } = this;
+    const progressOf = rampProgress;
+    const edges = rampStart.length;
+    const inOffsets = incoming.offsets;
+    const inValues = incoming.values;
+    const inCount = incoming.count;
+    const outOffsets = out.offsets;
+    const outValues = out.values;
+    for (let r = 0; r < inCount; r += 1) this.arrivals.push(start + inOffsets[r], inValues[r]);
+    let outCount = 0;
+    let lastOut = Number.NaN;
+    let k = this.cursor;
+    let run = 0;
+    let nextChange = inCount > 1 ? inOffsets[1] : length;
+    let arriving = inValues[0];
+    let i = 0;
+    while (i < length) {
+      const step = start + i;
+      while (k < edges && rampEnd[k] <= step) k += 1;
+      const ramping = k < edges && rampStart[k] <= step;
+      const up = ramping ? rising[k] === 1 : k > 0 && rising[k - 1] === 1;
+      const { fromSource, fromLine } = up ? high : low;
+      if (ramping) {
+        const stop = Math.min(rampEnd[k] - start, length);
+        const origin = rampStart[k];
+        for (; i < stop; i += 1) {
+          if (i >= nextChange) {
+            run += 1;
+            arriving = inValues[run];
+            nextChange = run + 1 < inCount ? inOffsets[run + 1] : length;
+          }
+          const progress = progressOf(start + i - origin, dt, edgeTime);
+          const drive = up ? highVoltage * progress : highVoltage * (1 - progress);
+          const port = fromSource * drive + fromLine * arriving;
+          const wave = 2 * port - arriving;
+          if (wave !== lastOut) {
+            outOffsets[outCount] = i;
+            outValues[outCount] = wave;
+            outCount += 1;
+            lastOut = wave;
+          }
+        }
+        continue;
+      }
+      // A flat drive and a constant arriving wave give one output for the whole stretch.
+      const drive = up ? highVoltage : 0;
+      const stop = k < edges ? Math.min(rampStart[k] - start, length) : length;
+      while (i < stop) {
+        if (i >= nextChange) {
+          run += 1;
+          arriving = inValues[run];
+          nextChange = run + 1 < inCount ? inOffsets[run + 1] : length;
+        }
+        const port = fromSource * drive + fromLine * arriving;
+        const wave = 2 * port - arriving;
+        if (wave !== lastOut) {
+          outOffsets[outCount] = i;
+          outValues[outCount] = wave;
+          outCount += 1;
+          lastOut = wave;
+        }
+        i = Math.min(nextChange, stop);
+      }
+    }
+    out.count = outCount;
+    this.cursor = k;
+  }
+
+  /**
+   * An inner junction (R/N in series, G/N to ground). It ignores input changes within
+   * JUNCTION_DEADBAND of the inputs it last answered: the small reflections of the lumped
+   * resistors would otherwise bounce between junctions without end.
+   */
+  private junction(j: number, length: number, fromLeft: WaveChunk, fromRight: WaveChunk, toLeft: WaveChunk, toRight: WaveChunk): void {
+    const { z0, junctionArm, junctionDivider, junctionState } = this;
+    const base = 4 * j;
+    let heldLeft = junctionState[base];
+    let heldRight = junctionState[base + 1];
+    let outLeft = junctionState[base + 2];
+    let outRight = junctionState[base + 3];
+    const leftOffsets = fromLeft.offsets;
+    const leftValues = fromLeft.values;
+    const leftCount = fromLeft.count;
+    const rightOffsets = fromRight.offsets;
+    const rightValues = fromRight.values;
+    const rightCount = fromRight.count;
+    toLeft.count = 0;
+    toRight.count = 0;
+    let left = 0;
+    let right = 0;
+    let offset = 0;
+    while (offset < length) {
+      const leftEnd = left + 1 < leftCount ? leftOffsets[left + 1] : length;
+      const rightEnd = right + 1 < rightCount ? rightOffsets[right + 1] : length;
+      const waveLeft = leftValues[left];
+      const waveRight = rightValues[right];
+      if (Math.abs(waveLeft - heldLeft) > JUNCTION_DEADBAND || Math.abs(waveRight - heldRight) > JUNCTION_DEADBAND) {
+        heldLeft = waveLeft;
+        heldRight = waveRight;
+        const middle = (waveLeft + waveRight) * junctionDivider;
+        outLeft = waveLeft - (2 * z0 * (waveLeft - middle)) / junctionArm;
+        outRight = waveRight - (2 * z0 * (waveRight - middle)) / junctionArm;
+      }
+      toLeft.push(offset, outLeft);
+      toRight.push(offset, outRight);
+      offset = Math.min(leftEnd, rightEnd);
+      if (offset >= leftEnd) left += 1;
+      if (offset >= rightEnd) right += 1;
+    }
+    junctionState[base] = heldLeft;
+    junctionState[base + 1] = heldRight;
+    junctionState[base + 2] = outLeft;
+    junctionState[base + 3] = outRight;
+  }
+
+  /**
+   * The pin: C by BDF2, the clamps by a bracketed Newton solve when the pin is beyond a rail.
+   * Once it sits within SETTLED_TOLERANCE of its DC value for the arriving wave it is held
+   * there, and ignores arriving changes under INPUT_DEADBAND.
+   */
+  private farEnd(start: number, length: number, incoming: WaveChunk, out: WaveChunk): void {
+    const { endResistance, theveninScale, theveninConductance, safeLow, safeHigh, supply, clamps, dt } = this;
+    // Imported bindings are property reads in bundled code: read them once, not every step.
+    const settled = SETTLED_TOLERANCE;
+    const clampedVoltage = solveClamped;
+    const equilibriumOf = pinEquilibrium;
+    const total = theveninConductance + this.capacitiveConductance;
+    const inverseTotal = 1 / total;
+    const weight1 = this.historyWeight1;
+    const weight2 = this.historyWeight2;
+    const inOffsets = incoming.offsets;
+    const inValues = incoming.values;
+    const inCount = incoming.count;
+    const outOffsets = out.offsets;
+    const outValues = out.values;
+    const trace = this.far;
+    let outCount = 0;
+    let lastOut = Number.NaN;
+    let v1 = this.v1;
+    let v2 = this.v2;
+    let held = this.held;
+    let heldInput = this.heldInput;
+    let heldOutput = this.heldOutput;
+    let lastWave = this.lastWave;
+    let clampPeak = this.clampCurrentPeak;
+    let clampPeakStep = -1;
+    const pin = this.pinValues;
+    let traced = 0;
+    let run = 0;
+    let nextChange = inCount > 1 ? inOffsets[1] : length;
+    let arriving = inValues[0];
+    let thevenin = arriving * theveninScale;
+    let driven = theveninConductance * thevenin;
+    let equilibrium = Number.NaN;
+    let i = 0;
+    while (i < length) {
+      if (i >= nextChange) {
+        run += 1;
+        arriving = inValues[run];
+        nextChange = run + 1 < inCount ? inOffsets[run + 1] : length;
+        thevenin = arriving * theveninScale;
+        driven = theveninConductance * thevenin;
+        equilibrium = Number.NaN;
+      }
+      if (held) {
+        if (Math.abs(arriving - heldInput) <= INPUT_DEADBAND) {
+          trace.pushSpan(start, pin, traced, i);
+          traced = nextChange;
+          if (heldOutput !== lastOut) {
+            outOffsets[outCount] = i;
+            outValues[outCount] = heldOutput;
+            outCount += 1;
+            lastOut = heldOutput;
+          }
+          i = nextChange;
+          continue;
+        }
+        held = false;
+      }
+      const injected = driven + weight1 * v1 - weight2 * v2;
+      let v = injected * inverseTotal;
+      if (v > safeHigh || v < safeLow) {
+        v = clampedVoltage(total, injected, supply, 2 * v1 - v2);
+        const current = Math.abs(injected - total * v);
+        if (current > clampPeak) {
+          clampPeak = current;
+          clampPeakStep = start + i;
+        }
+      }
+      v2 = v1;
+      v1 = v;
+      const wave = 2 * (v + endResistance * (thevenin - v) * theveninConductance) - arriving;
+      if (Math.abs(wave - lastWave) > OUTPUT_DEADBAND) lastWave = wave;
+      if (lastWave !== lastOut) {
+        outOffsets[outCount] = i;
+        outValues[outCount] = lastWave;
+        outCount += 1;
+        lastOut = lastWave;
+      }
+      pin[i] = v;
+      if (Math.abs(v1 - v2) <= settled) {
+        if (equilibrium !== equilibrium) equilibrium = equilibriumOf(thevenin, theveninConductance, supply, clamps);
+        if (Math.abs(v1 - equilibrium) <= settled && Math.abs(v2 - equilibrium) <= settled) {
+          v1 = equilibrium;
+          v2 = equilibrium;
+          held = true;
+          heldInput = arriving;
+          heldOutput = lastWave;
+        }
+      }
+      i += 1;
+    }
+    trace.pushSpan(start, pin, traced, length);
+    out.count = outCount;
+    this.v1 = v1;
+    this.v2 = v2;
+    this.held = held;
+    this.heldInput = heldInput;
+    this.heldOutput = heldOutput;
+    this.lastWave = lastWave;
+    if (clampPeakStep >= 0) {
+      this.clampCurrentPeak = clampPeak;
+      this.clampCurrentPeakTime = clampPeakStep * dt;
+    }
+  }
+}
+
+export function solveDistributed(
+  plan: SolverPlan,
+  line: LineTotals,
+  drive: DriveSchedule,
+  resistances: DriverResistances,
+  receiver: ReceiverLoad,
+  scratch: SolverScratch,
+): SolveOutput {
+  const solver = new DistributedLine(plan, line, drive, resistances, receiver, scratch);
+  solver.run();
+  return {
+    dt: plan.dt,
+    stepCount: plan.stepCount,
+    near: solver.nearEndVoltages(),
+    far: solver.far,
+    clampCurrentPeak: solver.clampCurrentPeak,
+    clampCurrentPeakTime: solver.clampCurrentPeakTime,
+  };
+}

@@ -1,0 +1,60 @@
+import { DriveSource, type DriveSchedule } from "./drive-source";
+import type { RunRecord } from "./run-record";
+import type { Trace } from "./trace";
+
+/**
+ * The cable's input (the near end), evaluated on demand at solver steps visited in increasing
+ * order. The solver records only what it must (the wave arriving back at the driver); the
+ * voltage follows from it and the drive wherever a caller asks, so a busy run does not pay for
+ * a near-end trace nobody samples at full resolution.
+ */
+export interface NearEnd {
+  at(step: number): number;
+}
+
+/** How the near-end port depends on the drive and the arriving wave, for one source resistance. */
+export type EndCoefficients = { fromSource: number; fromLine: number; sourceShare: number };
+
+/** The distributed line's driver end: source, resistance, R/2N and G/2N in front of the line. */
+export class LineNearEnd implements NearEnd {
+  private readonly source: DriveSource;
+  private run = 0;
+
+  constructor(
+    private readonly arrivals: RunRecord,
+    drive: DriveSchedule,
+    dt: number,
+    private readonly high: EndCoefficients,
+    private readonly low: EndCoefficients,
+  ) {
+    this.source = new DriveSource(drive, dt);
+  }
+
+  at(step: number): number {
+    const { steps, values, count } = this.arrivals;
+    if (this.run > 0 && steps[this.run] > step) this.run = 0;
+    while (this.run + 1 < count && steps[this.run + 1] <= step) this.run += 1;
+    const arriving = values[this.run];
+    this.source.seek(step);
+    const drive = this.source.valueAt(step);
+    const { fromSource, fromLine, sourceShare } = this.source.drivingHigh(step) ? this.high : this.low;
+    const port = fromSource * drive + fromLine * arriving;
+    return port + sourceShare * (drive - port);
+  }
+}
+
+/** A near end the solver traced step by step (the lumped line). */
+export class TracedNearEnd implements NearEnd {
+  private segment = 0;
+
+  constructor(private readonly trace: Trace) {}
+
+  at(step: number): number {
+    const { steps, values, count } = this.trace;
+    if (this.segment > 0 && steps[this.segment] > step) this.segment = 0;
+    while (this.segment + 1 < count && steps[this.segment + 1] <= step) this.segment += 1;
+    const k = this.segment;
+    if (k + 1 >= count) return values[k];
+    return values[k] + ((step - steps[k]) / (steps[k + 1] - steps[k])) * (values[k + 1] - values[k]);
+  }
+}
