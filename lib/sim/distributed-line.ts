@@ -1,6 +1,7 @@
 import { rampProgress, rampSteps, type DriveSchedule } from "./drive-source";
 import { LineNearEnd, type EndCoefficients } from "./near-end";
 import type { RunRecord } from "./run-record";
+import { SegmentLibrary } from "./segment-replays";
 import { NEGLIGIBLE_CONDUCTION, pinEquilibrium, SETTLED_TOLERANCE, solveClamped } from "./far-node";
 import type { DriverResistances, LineTotals, ReceiverLoad, SolveOutput, SolverPlan, SolverScratch } from "./line-solver";
 import type { Trace } from "./trace";
@@ -146,6 +147,11 @@ class DistributedLine {
   private readonly clamps: boolean;
   private readonly safeLow: number;
   private readonly safeHigh: number;
+  private readonly library = new SegmentLibrary();
+  /** The stretch being solved since the last rest, to be recorded when the next rest comes. */
+  private segment: { start: number; firstEdge: number; startsHigh: boolean; farFrom: number; arrivalsFrom: number } | null = null;
+  private segmentClampPeak = 0;
+  private segmentClampPeakStep = -1;
   private v1 = 0;
   private v2 = 0;
   private held = false;
@@ -208,9 +214,9 @@ class DistributedLine {
   run(): void {
     const { m, segments, forward, backward, stepCount } = this;
     const streams = [...forward, ...backward];
-    let chunk = 0;
-    while (chunk * m < stepCount) {
-      const start = chunk * m;
+    // Everything starts at 0 V: the DC state of the low drive.
+    let start = this.restAt(0, false, 0);
+    while (start < stepCount) {
       const length = Math.min(m, stepCount - start);
       this.nearEnd(start, length, backward[0].read, forward[0].write);
       for (let j = 1; j < segments; j += 1) {
@@ -222,7 +228,7 @@ class DistributedLine {
         stream.write = stream.read;
         stream.read = written;
       }
-      chunk = this.skipWhileQuiet(chunk + 1);
+      start = this.skipWhileQuiet(start + length);
     }
     this.far.finish(stepCount - 1);
   }
@@ -239,23 +245,88 @@ class DistributedLine {
     return k;
   }
 
-  /** When the whole line sits at the DC state of a flat drive, set it there and jump to the next edge. */
-  private skipWhileQuiet(chunk: number): number {
-    const next = chunk * this.m;
-    if (next >= this.stepCount) return chunk;
+  /** When the whole line sits within QUIET_BAND of the DC state of a flat drive, rests it there. Returns the step to go on from. */
+  private skipWhileQuiet(next: number): number {
+    if (next >= this.stepCount) return next;
     const k = this.edgeAt(next);
-    const edges = this.rampStart.length;
-    if (k < edges && this.rampStart[k] <= next) return chunk;
-    const nextEdge = k < edges ? this.rampStart[k] : Number.MAX_SAFE_INTEGER;
-    const resume = Math.floor(nextEdge / this.m);
-    if (resume <= chunk) return chunk;
-    const state = k > 0 && this.rising[k - 1] ? this.dcHigh : this.dcLow;
-    if (Math.abs(this.v1 - state.pin) > QUIET_BAND || Math.abs(this.v2 - state.pin) > QUIET_BAND) return chunk;
-    const { segments, forward, backward, junctionState } = this;
+    if (k < this.rampStart.length && this.rampStart[k] <= next) return next;
+    const high = k > 0 && this.rising[k - 1] === 1;
+    const state = high ? this.dcHigh : this.dcLow;
+    if (Math.abs(this.v1 - state.pin) > QUIET_BAND || Math.abs(this.v2 - state.pin) > QUIET_BAND) return next;
+    const { segments, forward, backward } = this;
     for (let j = 0; j < segments; j += 1) {
-      if (!forward[j].read.isNear(state.forward[j], QUIET_BAND)) return chunk;
-      if (!backward[j].read.isNear(state.backward[j], QUIET_BAND)) return chunk;
+      if (!forward[j].read.isNear(state.forward[j], QUIET_BAND)) return next;
+      if (!backward[j].read.isNear(state.backward[j], QUIET_BAND)) return next;
     }
+    return this.restAt(next, high, k);
+  }
+
+  /**
+   * Sets the line to the exact DC state at step `rest` and moves on to edge `edge`: while the
+   * edges ahead match a recorded segment, copies it (it ends at another rest); otherwise starts
+   * recording and returns the edge's first step, where solving resumes.
+   */
+  private restAt(rest: number, high: boolean, edge: number): number {
+    let state = high ? this.dcHigh : this.dcLow;
+    this.far.breakAt(rest, state.pin);
+    this.arrivals.push(rest, state.backward[0]);
+    this.closeSegment(rest, edge);
+    let startsHigh = high;
+    let k = edge;
+    while (k < this.rampStart.length) {
+      const edgeStep = this.rampStart[k];
+      this.far.breakAt(edgeStep, state.pin);
+      this.arrivals.push(edgeStep, state.backward[0]);
+      const recording = this.library.find(startsHigh, this.rampStart, this.rising, k, this.stepCount);
+      if (recording === null) {
+        this.setDc(state, k);
+        this.segment = { start: edgeStep, firstEdge: k, startsHigh, farFrom: this.far.count, arrivalsFrom: this.arrivals.count };
+        this.segmentClampPeak = 0;
+        this.segmentClampPeakStep = -1;
+        return edgeStep;
+      }
+      this.far.append(recording.farSteps, recording.farValues, edgeStep);
+      this.arrivals.append(recording.arrivalSteps, recording.arrivalValues, edgeStep);
+      if (recording.clampPeakAt >= 0 && recording.clampCurrentPeak > this.clampCurrentPeak) {
+        this.clampCurrentPeak = recording.clampCurrentPeak;
+        this.clampCurrentPeakTime = (edgeStep + recording.clampPeakAt) * this.dt;
+      }
+      k += recording.offsets.length;
+      startsHigh = recording.rising[recording.offsets.length - 1] === 1;
+      state = startsHigh ? this.dcHigh : this.dcLow;
+    }
+    this.setDc(state, k);
+    return this.stepCount;
+  }
+
+  /** Records the segment solved since the last rest, which ends with the rest at `rest`, before edge `nextEdge`. */
+  private closeSegment(rest: number, nextEdge: number): void {
+    const segment = this.segment;
+    if (segment === null) return;
+    this.segment = null;
+    const { start, firstEdge } = segment;
+    const offsets = this.rampStart.slice(firstEdge, nextEdge);
+    for (let j = 0; j < offsets.length; j += 1) offsets[j] -= start;
+    const far = this.far.copySince(segment.farFrom, start);
+    const arrivalSteps = this.arrivals.steps.slice(segment.arrivalsFrom, this.arrivals.count);
+    for (let i = 0; i < arrivalSteps.length; i += 1) arrivalSteps[i] -= start;
+    this.library.add({
+      startsHigh: segment.startsHigh,
+      offsets,
+      rising: this.rising.slice(firstEdge, nextEdge),
+      restAt: rest - start,
+      farSteps: far.steps,
+      farValues: far.values,
+      arrivalSteps,
+      arrivalValues: this.arrivals.values.slice(segment.arrivalsFrom, this.arrivals.count),
+      clampCurrentPeak: this.segmentClampPeak,
+      clampPeakAt: this.segmentClampPeakStep < 0 ? -1 : this.segmentClampPeakStep - start,
+    });
+  }
+
+  /** Puts every wave, junction and the pin at the DC state; `edge` is the next edge. */
+  private setDc(state: DcState, edge: number): void {
+    const { segments, forward, backward, junctionState } = this;
     for (let j = 0; j < segments; j += 1) {
       forward[j].read.fillConstant(state.forward[j]);
       backward[j].read.fillConstant(state.backward[j]);
@@ -273,9 +344,7 @@ class DistributedLine {
     this.heldInput = state.forward[segments - 1];
     this.heldOutput = state.backward[segments - 1];
     this.lastWave = this.heldOutput;
-    this.arrivals.push(next, state.backward[0]);
-    this.far.push(next, state.pin);
-    return resume;
+    this.cursor = edge;
   }
 
   private nearEnd(start: number, length: number, incoming: WaveChunk, out: WaveChunk): void {
@@ -423,7 +492,7 @@ class DistributedLine {
     let heldInput = this.heldInput;
     let heldOutput = this.heldOutput;
     let lastWave = this.lastWave;
-    let clampPeak = this.clampCurrentPeak;
+    let clampPeak = 0;
     let clampPeakStep = -1;
     const pin = this.pinValues;
     let traced = 0;
@@ -499,9 +568,13 @@ class DistributedLine {
     this.heldInput = heldInput;
     this.heldOutput = heldOutput;
     this.lastWave = lastWave;
-    if (clampPeakStep >= 0) {
+    if (clampPeak > this.clampCurrentPeak) {
       this.clampCurrentPeak = clampPeak;
       this.clampCurrentPeakTime = clampPeakStep * dt;
+    }
+    if (clampPeak > this.segmentClampPeak) {
+      this.segmentClampPeak = clampPeak;
+      this.segmentClampPeakStep = clampPeakStep;
     }
   }
 }

@@ -46,10 +46,9 @@ export class DriveSource {
     this.endSteps = end;
   }
 
-  /** Moves the cursor to the first edge not yet finished at step n (back to the start if n lies before it). */
+  /** Moves the cursor to the first edge not yet finished at step n. */
   seek(step: number): void {
     const count = this.endSteps.length;
-    if (this.cursor > 0 && this.endSteps[this.cursor - 1] > step) this.cursor = 0;
     while (this.cursor < count && this.endSteps[this.cursor] <= step) this.cursor += 1;
   }
 
@@ -65,11 +64,6 @@ export class DriveSource {
     const { edgeTime, highVoltage, rising } = this.schedule;
     const progress = rampProgress(step - this.startSteps[this.cursor], this.dt, edgeTime);
     return rising[this.cursor] ? highVoltage * progress : highVoltage * (1 - progress);
-  }
-
-  /** The source voltage at `step`, after `seek(step)`. */
-  valueAt(step: number): number {
-    return this.inRamp(step) ? this.rampValue(step) : this.level();
   }
 
   /** The flat level before the current edge. */

@@ -1,5 +1,5 @@
 import type { DecodedBit } from "./decoder";
-import { extremes, firstReach, indexAt, maxOver, minOver, valueAt, type Waveform } from "./waveform";
+import { extremes, firstReach, indexAt, valueAt, type Waveform } from "./waveform";
 
 /**
  * Measurements of the far-end waveform. Windows are placed by the driver's timing shifted by
@@ -64,34 +64,79 @@ const TURN_SHARE = 0.02;
 const SETTLING_BAND = 0.05;
 
 /**
- * The extreme of the ringing after an edge in [from, to]: once the far end has crossed `level`
- * (rising: upward, and the lowest value after it turns down; falling: downward, and the highest
- * value after it turns up). Null when the edge never crosses or never turns back.
+ * The ringing after an edge: once the far end has crossed `level` (sign +1: upward, −1:
+ * downward) and turned back by more than `turn`, its extreme on the way back (the lowest value
+ * after a rise, the highest after a fall). Fed the window's points in time order.
  */
-function ringingAfterEdge(wave: Waveform, from: number, to: number, level: number, rising: boolean, turn: number): Extreme | null {
-  const entered = firstReach(wave, level, rising, from, to);
-  if (entered === null) return null;
-  const sign = rising ? 1 : -1;
-  let front = sign * level;
-  let turned = false;
-  let worst = Infinity;
-  let worstTime = entered;
-  const visit = (t: number, v: number) => {
-    const x = sign * v;
-    if (!turned) {
-      if (x > front) front = x;
-      else if (x < front - turn) turned = true;
-    }
-    if (turned && x < worst) {
-      worst = x;
-      worstTime = t;
-    }
-  };
-  for (let i = indexAt(wave, entered) + 1; i < wave.count && wave.time[i] < to; i += 1) {
-    if (wave.time[i] > entered) visit(wave.time[i], wave.value[i]);
+class RingingAfterEdge {
+  private entered = false;
+  private turned = false;
+  private front: number;
+  private worst = Infinity;
+  private worstTime = 0;
+
+  constructor(
+    private readonly sign: number,
+    level: number,
+    private readonly turn: number,
+  ) {
+    this.front = sign * level;
   }
-  visit(to, valueAt(wave, to));
-  return turned ? { value: sign * worst, time: worstTime } : null;
+
+  /** The window's first value: already past the level means the edge crossed before the window. */
+  begin(v: number): void {
+    if (this.sign * v >= this.front) this.entered = true;
+  }
+
+  visit(t: number, v: number): void {
+    const x = this.sign * v;
+    if (!this.entered) {
+      if (x < this.front) return;
+      this.entered = true;
+    }
+    if (!this.turned) {
+      if (x > this.front) this.front = x;
+      else if (x < this.front - this.turn) this.turned = true;
+    }
+    if (this.turned && x < this.worst) {
+      this.worst = x;
+      this.worstTime = t;
+    }
+  }
+
+  result(): Extreme | null {
+    return this.turned ? { value: this.sign * this.worst, time: this.worstTime } : null;
+  }
+}
+
+/**
+ * One pass over [from, to]: the extreme value (sign +1: highest, −1: lowest; endpoints
+ * interpolated, the start winning ties, then the end) and the ringing after two edges.
+ */
+function scanWindow(wave: Waveform, from: number, to: number, sign: number, edge: RingingAfterEdge, midEdge: RingingAfterEdge): Extreme {
+  const first = valueAt(wave, from);
+  const last = valueAt(wave, to);
+  let best = sign * first;
+  let bestTime = from;
+  if (sign * last > best) {
+    best = sign * last;
+    bestTime = to;
+  }
+  edge.begin(first);
+  midEdge.begin(first);
+  const { time, value, count } = wave;
+  for (let i = indexAt(wave, from) + 1; i < count && time[i] < to; i += 1) {
+    const v = value[i];
+    if (sign * v > best) {
+      best = sign * v;
+      bestTime = time[i];
+    }
+    edge.visit(time[i], v);
+    midEdge.visit(time[i], v);
+  }
+  edge.visit(to, last);
+  midEdge.visit(to, last);
+  return { value: sign * best, time: bestTime };
 }
 
 /**
@@ -103,12 +148,16 @@ export function measureBitLevels(wave: Waveform, bit: DecodedBit, fall: number, 
   const { high, low, mid, supply } = thresholds;
   const fallArrives = fall + delay;
   const turn = TURN_SHARE * supply;
-  const peak = maxOver(wave, bit.slotStart, fallArrives);
-  const trough = minOver(wave, fallArrives, bit.slotEnd);
-  const highDip = ringingAfterEdge(wave, bit.slotStart, fallArrives, high, true, turn);
-  const ringBack = ringingAfterEdge(wave, fallArrives, bit.slotEnd, low, false, turn);
-  const midHighDip = ringingAfterEdge(wave, bit.slotStart, fallArrives, mid, true, turn);
-  const midRingBack = ringingAfterEdge(wave, fallArrives, bit.slotEnd, mid, false, turn);
+  const afterRise = new RingingAfterEdge(1, high, turn);
+  const afterRiseMid = new RingingAfterEdge(1, mid, turn);
+  const afterFall = new RingingAfterEdge(-1, low, turn);
+  const afterFallMid = new RingingAfterEdge(-1, mid, turn);
+  const peak = scanWindow(wave, bit.slotStart, fallArrives, 1, afterRise, afterRiseMid);
+  const trough = scanWindow(wave, fallArrives, bit.slotEnd, -1, afterFall, afterFallMid);
+  const highDip = afterRise.result();
+  const ringBack = afterFall.result();
+  const midHighDip = afterRiseMid.result();
+  const midRingBack = afterFallMid.result();
   // Under hysteresis a dip ends the pulse only below the low threshold; the ring-back is held to the guaranteed low level (docs/simulator.md).
   const voltageMargin = Math.min(
     peak.value - high,

@@ -1,4 +1,4 @@
-import { DriveSource, type DriveSchedule } from "./drive-source";
+import { rampProgress, rampSteps, type DriveSchedule } from "./drive-source";
 import type { RunRecord } from "./run-record";
 import type { Trace } from "./trace";
 
@@ -17,17 +17,21 @@ export type EndCoefficients = { fromSource: number; fromLine: number; sourceShar
 
 /** The distributed line's driver end: source, resistance, R/2N and G/2N in front of the line. */
 export class LineNearEnd implements NearEnd {
-  private readonly source: DriveSource;
+  private readonly rampStart: Int32Array;
+  private readonly rampEnd: Int32Array;
   private run = 0;
+  private edge = 0;
 
   constructor(
     private readonly arrivals: RunRecord,
-    drive: DriveSchedule,
-    dt: number,
+    private readonly drive: DriveSchedule,
+    private readonly dt: number,
     private readonly high: EndCoefficients,
     private readonly low: EndCoefficients,
   ) {
-    this.source = new DriveSource(drive, dt);
+    const ramps = rampSteps(drive, dt);
+    this.rampStart = ramps.start;
+    this.rampEnd = ramps.end;
   }
 
   at(step: number): number {
@@ -35,9 +39,23 @@ export class LineNearEnd implements NearEnd {
     if (this.run > 0 && steps[this.run] > step) this.run = 0;
     while (this.run + 1 < count && steps[this.run + 1] <= step) this.run += 1;
     const arriving = values[this.run];
-    this.source.seek(step);
-    const drive = this.source.valueAt(step);
-    const { fromSource, fromLine, sourceShare } = this.source.drivingHigh(step) ? this.high : this.low;
+    const { rampStart, rampEnd } = this;
+    const { rising, highVoltage, edgeTime } = this.drive;
+    const edges = rampStart.length;
+    if (this.edge > 0 && rampEnd[this.edge - 1] > step) this.edge = 0;
+    while (this.edge < edges && rampEnd[this.edge] <= step) this.edge += 1;
+    const k = this.edge;
+    let up: boolean;
+    let drive: number;
+    if (k < edges && rampStart[k] <= step) {
+      up = rising[k] === 1;
+      const progress = rampProgress(step - rampStart[k], this.dt, edgeTime);
+      drive = up ? highVoltage * progress : highVoltage * (1 - progress);
+    } else {
+      up = k > 0 && rising[k - 1] === 1;
+      drive = up ? highVoltage : 0;
+    }
+    const { fromSource, fromLine, sourceShare } = up ? this.high : this.low;
     const port = fromSource * drive + fromLine * arriving;
     return port + sourceShare * (drive - port);
   }

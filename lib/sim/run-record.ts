@@ -23,6 +23,18 @@ export class RunRecord {
     this.count = count + 1;
   }
 
+  /** Pushes runs copied from another record, their steps moved by `shift`. */
+  append(steps: Int32Array, values: Float64Array, shift: number): void {
+    let i = 0;
+    while (i < steps.length && this.count > 0 && values[i] === this.values[this.count - 1]) i += 1;
+    while (this.count + steps.length - i > this.steps.length) this.grow();
+    for (; i < steps.length; i += 1) {
+      this.steps[this.count] = steps[i] + shift;
+      this.values[this.count] = values[i];
+      this.count += 1;
+    }
+  }
+
   private grow(): void {
     const steps = new Int32Array(this.steps.length * 2);
     const values = new Float64Array(this.values.length * 2);

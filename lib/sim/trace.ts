@@ -77,6 +77,35 @@ export class Trace {
     this.lastValue = lastValue;
   }
 
+  /**
+   * Ends the curve so far exactly where it stands and starts again from (step, value): the
+   * line is set to a known state there (the solver's DC reset), and what follows depends on
+   * nothing before it.
+   */
+  breakAt(step: number, value: number): void {
+    if (this.count > 0) {
+      if (step > this.lastStep + 1) this.extend(step - 1, this.lastValue);
+      if (this.lastStep > this.originStep) this.write(this.lastStep, this.originValue + this.slope() * (this.lastStep - this.originStep));
+    }
+    this.write(step, value);
+    this.lastStep = step;
+    this.lastValue = value;
+  }
+
+  /** Breakpoints written from index `from` on, with their steps counted from `origin`. */
+  copySince(from: number, origin: number): { steps: Int32Array; values: Float64Array } {
+    const steps = this.steps.slice(from, this.count);
+    for (let i = 0; i < steps.length; i += 1) steps[i] -= origin;
+    return { steps, values: this.values.slice(from, this.count) };
+  }
+
+  /** Appends breakpoints copied by `copySince`, moved to start at `origin`; the last one becomes the curve's end. */
+  append(steps: Int32Array, values: Float64Array, origin: number): void {
+    for (let i = 0; i < steps.length; i += 1) this.write(steps[i] + origin, values[i]);
+    this.lastStep = steps[steps.length - 1] + origin;
+    this.lastValue = values[values.length - 1];
+  }
+
   /** Closes the curve at `lastStep` (the run's final step), holding the last value up to it. */
   finish(lastStep: number): void {
     if (this.count === 0) return;

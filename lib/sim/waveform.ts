@@ -91,42 +91,6 @@ export function valueAt(wave: Waveform, t: number): number {
   return wave.value[i] + fraction * (wave.value[i + 1] - wave.value[i]);
 }
 
-/** Highest value on [from, to], endpoints interpolated. */
-export function maxOver(wave: Waveform, from: number, to: number): { value: number; time: number } {
-  let best = valueAt(wave, from);
-  let bestTime = from;
-  const end = valueAt(wave, to);
-  if (end > best) {
-    best = end;
-    bestTime = to;
-  }
-  for (let i = indexAt(wave, from) + 1; i < wave.count && wave.time[i] < to; i += 1) {
-    if (wave.value[i] > best) {
-      best = wave.value[i];
-      bestTime = wave.time[i];
-    }
-  }
-  return { value: best, time: bestTime };
-}
-
-/** Lowest value on [from, to], endpoints interpolated. */
-export function minOver(wave: Waveform, from: number, to: number): { value: number; time: number } {
-  let best = valueAt(wave, from);
-  let bestTime = from;
-  const end = valueAt(wave, to);
-  if (end < best) {
-    best = end;
-    bestTime = to;
-  }
-  for (let i = indexAt(wave, from) + 1; i < wave.count && wave.time[i] < to; i += 1) {
-    if (wave.value[i] < best) {
-      best = wave.value[i];
-      bestTime = wave.time[i];
-    }
-  }
-  return { value: best, time: bestTime };
-}
-
 /**
  * First time in [from, to] at which the wave reaches `level` going up (`rising`) or down;
  * null when it does not.
