@@ -7,7 +7,9 @@ export default defineConfig({
   resolve: { alias: { "@": root, "server-only": `${root}tests/support/server-only.ts` } },
   test: {
     projects: [
-      { extends: true, test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" } },
+      // Property tests run the simulator hundreds of times; on a loaded two-core machine that takes
+      // longer than vitest's 5 s default, which is not what these tests are about.
+      { extends: true, test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node", testTimeout: 60_000 } },
       {
         extends: true,
         test: {
