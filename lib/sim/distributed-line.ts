@@ -115,8 +115,9 @@ class DistributedLine {
   private readonly endResistance: number;
   private readonly theveninScale: number;
   private readonly theveninConductance: number;
-  private readonly junctionArm: number;
-  private readonly junctionDivider: number;
+  /** An inner junction sends back `junctionBack` of each arriving wave and passes on `junctionThrough`. */
+  private readonly junctionBack: number;
+  private readonly junctionThrough: number;
   private readonly forward: Stream[];
   private readonly backward: Stream[];
   /** Per inner junction: the two inputs it last answered and its two outputs. */
@@ -179,8 +180,13 @@ class DistributedLine {
     this.endResistance = ladder.endResistance;
     this.theveninScale = 1 / (1 + ladder.endConductance * this.z0);
     this.theveninConductance = 1 / (this.endResistance + this.z0 * this.theveninScale);
-    this.junctionArm = this.z0 + ladder.junctionResistance / 2;
-    this.junctionDivider = 1 / (2 + ladder.junctionConductance * this.junctionArm);
+    // Junction middle node: m = (a + b)·d with d = 1/(2 + G·arm), arm = Z0 + R/2; each port sends
+    // back a − (2·Z0/arm)·(a − m), so back = 1 − k + k·d and through = k·d with k = 2·Z0/arm.
+    const arm = this.z0 + ladder.junctionResistance / 2;
+    const divider = 1 / (2 + ladder.junctionConductance * arm);
+    const share = (2 * this.z0) / arm;
+    this.junctionBack = 1 - share + share * divider;
+    this.junctionThrough = share * divider;
     this.forward = Array.from({ length: segments }, () => makeStream(m));
     this.backward = Array.from({ length: segments }, () => makeStream(m));
     this.junctionState = new Float64Array(4 * segments);
@@ -286,7 +292,7 @@ class DistributedLine {
         return edgeStep;
       }
       this.far.append(recording.farSteps, recording.farValues, edgeStep);
-      this.arrivals.append(recording.arrivalSteps, recording.arrivalValues, edgeStep);
+      this.arrivals.append(recording.arrivalSteps, recording.arrivalValues, edgeStep, recording.arrivalSteps.length);
       if (recording.clampPeakAt >= 0 && recording.clampCurrentPeak > this.clampCurrentPeak) {
         this.clampCurrentPeak = recording.clampCurrentPeak;
         this.clampCurrentPeakTime = (edgeStep + recording.clampPeakAt) * this.dt;
@@ -356,7 +362,7 @@ class DistributedLine {
     const inCount = incoming.count;
     const outOffsets = out.offsets;
     const outValues = out.values;
-    for (let r = 0; r < inCount; r += 1) this.arrivals.push(start + inOffsets[r], inValues[r]);
+    this.arrivals.append(inOffsets, inValues, start, inCount);
     let outCount = 0;
     let lastOut = Number.NaN;
     let k = this.cursor;
@@ -422,7 +428,7 @@ class DistributedLine {
    * resistors would otherwise bounce between junctions without end.
    */
   private junction(j: number, length: number, fromLeft: WaveChunk, fromRight: WaveChunk, toLeft: WaveChunk, toRight: WaveChunk): void {
-    const { z0, junctionArm, junctionDivider, junctionState } = this;
+    const { junctionThrough, junctionBack, junctionState } = this;
     const base = 4 * j;
     let heldLeft = junctionState[base];
     let heldRight = junctionState[base + 1];
@@ -434,8 +440,12 @@ class DistributedLine {
     const rightOffsets = fromRight.offsets;
     const rightValues = fromRight.values;
     const rightCount = fromRight.count;
-    toLeft.count = 0;
-    toRight.count = 0;
+    const toLeftOffsets = toLeft.offsets;
+    const toLeftValues = toLeft.values;
+    const toRightOffsets = toRight.offsets;
+    const toRightValues = toRight.values;
+    let toLeftCount = 0;
+    let toRightCount = 0;
     let left = 0;
     let right = 0;
     let offset = 0;
@@ -447,16 +457,25 @@ class DistributedLine {
       if (Math.abs(waveLeft - heldLeft) > JUNCTION_DEADBAND || Math.abs(waveRight - heldRight) > JUNCTION_DEADBAND) {
         heldLeft = waveLeft;
         heldRight = waveRight;
-        const middle = (waveLeft + waveRight) * junctionDivider;
-        outLeft = waveLeft - (2 * z0 * (waveLeft - middle)) / junctionArm;
-        outRight = waveRight - (2 * z0 * (waveRight - middle)) / junctionArm;
+        outLeft = junctionBack * waveLeft + junctionThrough * waveRight;
+        outRight = junctionThrough * waveLeft + junctionBack * waveRight;
       }
-      toLeft.push(offset, outLeft);
-      toRight.push(offset, outRight);
-      offset = Math.min(leftEnd, rightEnd);
+      if (toLeftCount === 0 || outLeft !== toLeftValues[toLeftCount - 1]) {
+        toLeftOffsets[toLeftCount] = offset;
+        toLeftValues[toLeftCount] = outLeft;
+        toLeftCount += 1;
+      }
+      if (toRightCount === 0 || outRight !== toRightValues[toRightCount - 1]) {
+        toRightOffsets[toRightCount] = offset;
+        toRightValues[toRightCount] = outRight;
+        toRightCount += 1;
+      }
+      offset = leftEnd < rightEnd ? leftEnd : rightEnd;
       if (offset >= leftEnd) left += 1;
       if (offset >= rightEnd) right += 1;
     }
+    toLeft.count = toLeftCount;
+    toRight.count = toRightCount;
     junctionState[base] = heldLeft;
     junctionState[base + 1] = heldRight;
     junctionState[base + 2] = outLeft;
@@ -549,7 +568,7 @@ class DistributedLine {
       }
       pin[i] = v;
       if (Math.abs(v1 - v2) <= settled) {
-        if (equilibrium !== equilibrium) equilibrium = equilibriumOf(thevenin, theveninConductance, supply, clamps);
+        if (equilibrium !== equilibrium) equilibrium = equilibriumOf(thevenin, theveninConductance, supply, clamps, v1);
         if (Math.abs(v1 - equilibrium) <= settled && Math.abs(v2 - equilibrium) <= settled) {
           v1 = equilibrium;
           v2 = equilibrium;

@@ -53,27 +53,34 @@ export function solveClamped(conductance: number, injected: number, supply: numb
     const residual = x - VT * Math.log(ratio);
     const slope = 1 + (VT * conductance) / (IS * ratio);
     let step = residual / slope;
+    // Where the diode carries more than Vt·G, h is nearly straight: h''/(2h') = (h' − 1)²/(2·Vt·h'),
+    // and a Newton step of δ leaves an error of about that times δ².
+    let curvature = ((slope - 1) * (slope - 1)) / (2 * VT * slope);
     if (slope > 2) {
       // The diode carries less than Vt·G: here f's step is the better one.
       const exponential = Math.exp(x / VT);
       const linearStep = (conductance * x - available + IS * (exponential - 1)) / (conductance + (IS / VT) * exponential);
       // Right of the root both steps fall short: take the longer; left of it both overshoot: take the shorter.
       step = Math.max(step, linearStep);
+      curvature = Infinity;
     }
     if (residual > 0) high = x;
     else low = x;
     let next = x - step;
-    if (!(next > low && next < high)) next = 0.5 * (low + high);
-    if (Math.abs(next - x) < 1e-5) return rail + sign * next;
+    if (!(next > low && next < high)) {
+      next = 0.5 * (low + high);
+      curvature = Infinity;
+    }
+    if (Math.abs(next - x) < 1e-5 || curvature * step * step < 1e-6) return rail + sign * next;
     x = next;
   }
   return rail + sign * x;
 }
 
-/** DC voltage of the pin fed by `source` through `conductance`, with or without clamps. */
-export function pinEquilibrium(source: number, conductance: number, supply: number, clamps: boolean): number {
+/** DC voltage of the pin fed by `source` through `conductance`, with or without clamps; `guess` helps the clamp solve. */
+export function pinEquilibrium(source: number, conductance: number, supply: number, clamps: boolean, guess = source): number {
   if (!clamps || (source <= supply + NEGLIGIBLE_CONDUCTION && source >= -NEGLIGIBLE_CONDUCTION)) return source;
-  return solveClamped(conductance, conductance * source, supply, source);
+  return solveClamped(conductance, conductance * source, supply, guess);
 }
 
 export class FarNode {

@@ -11,6 +11,7 @@ export { SimInputError, SimSolveBudgetError } from "./errors";
 export type { SimInputIssue } from "./errors";
 export { CLAMP_DIODE_MODEL } from "./far-node";
 export { MAX_SOLVER_STEPS } from "./line-solver";
+export type { SolveQuality } from "./line-solver";
 export { simulateRun } from "./simulate";
 export type { SimBit, SimLine, SimResult, SimulateOptions } from "./simulate";
 export type { RunMetrics } from "./metrics";

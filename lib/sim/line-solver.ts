@@ -60,15 +60,25 @@ export type SolveOutput = {
 };
 
 export const MAX_SOLVER_STEPS = 5_000_000;
-/** Fixed step for 3 ns edges (0.1 ns, see docs/simulator.md); finer for faster edges. */
-const BASE_STEP = 1e-10;
-const STEPS_PER_EDGE = 25;
+
+const PREVIEW_STEP = 0.2e-9;
+const PREVIEW_STEPS_PER_EDGE = 15;
+
+/** "grade": the full accuracy every verdict is given at; "preview": coarser steps for redrawing while a control is dragged. */
+export type SolveQuality = "grade" | "preview";
+
+/** Largest step, and steps per edge at least: 0.1 ns for 3 ns edges (docs/simulator.md), finer for faster edges. */
+const STEP_RULES: Record<SolveQuality, { maxStep: number; stepsPerEdge: number }> = {
+  grade: { maxStep: 1e-10, stepsPerEdge: 25 },
+  preview: { maxStep: PREVIEW_STEP, stepsPerEdge: PREVIEW_STEPS_PER_EDGE },
+};
 /** Segments per unit of R/Z0: keeps the lumped-loss error of the first arrival, about R/(4N·Z0), under 0.3 %. */
 const SEGMENTS_PER_LOSS = 80;
 const MAX_SEGMENTS = 16;
 
-export function planSolve(line: LineTotals, edgeTime: number, endTime: number): SolverPlan {
-  const maxStep = Math.min(BASE_STEP, edgeTime / STEPS_PER_EDGE);
+export function planSolve(line: LineTotals, edgeTime: number, endTime: number, quality: SolveQuality = "grade"): SolverPlan {
+  const rule = STEP_RULES[quality];
+  const maxStep = Math.min(rule.maxStep, edgeTime / rule.stepsPerEdge);
   let plan: SolverPlan;
   if (line.delay < maxStep / 2) {
     plan = { dt: maxStep, stepCount: 0, segments: 0, stepsPerSegment: 0 };

@@ -23,16 +23,20 @@ export class RunRecord {
     this.count = count + 1;
   }
 
-  /** Pushes runs copied from another record, their steps moved by `shift`. */
-  append(steps: Int32Array, values: Float64Array, shift: number): void {
-    let i = 0;
-    while (i < steps.length && this.count > 0 && values[i] === this.values[this.count - 1]) i += 1;
-    while (this.count + steps.length - i > this.steps.length) this.grow();
-    for (; i < steps.length; i += 1) {
-      this.steps[this.count] = steps[i] + shift;
-      this.values[this.count] = values[i];
-      this.count += 1;
+  /** Pushes the first `count` runs of another run list, their steps moved by `shift`. */
+  append(steps: Int32Array, values: Float64Array, shift: number, count: number): void {
+    // Runs in the list already differ from their neighbours; only the first can repeat the last one here.
+    const first = this.count > 0 && count > 0 && values[0] === this.values[this.count - 1] ? 1 : 0;
+    while (this.count + count - first > this.steps.length) this.grow();
+    const ownSteps = this.steps;
+    const ownValues = this.values;
+    let at = this.count;
+    for (let i = first; i < count; i += 1) {
+      ownSteps[at] = steps[i] + shift;
+      ownValues[at] = values[i];
+      at += 1;
     }
+    this.count = at;
   }
 
   private grow(): void {

@@ -3,7 +3,7 @@ import { decodeWaveform } from "./decoder";
 import type { DriveSchedule } from "./drive-source";
 import { SimSolveBudgetError } from "./errors";
 import { pinEquilibrium } from "./far-node";
-import { planSolve, solveLine, type LineTotals } from "./line-solver";
+import { planSolve, solveLine, type LineTotals, type SolveQuality } from "./line-solver";
 import { measureBitLevels, measureRun, type RunMetrics } from "./metrics";
 import { parseSimInput, type ResolvedSimInput, type SimInput } from "./schema";
 import { bitSlots, colourBits } from "./signal";
@@ -39,7 +39,11 @@ export type SimResult = {
   line: SimLine;
 };
 
-export type SimulateOptions = { keepFullResolution?: boolean };
+export type SimulateOptions = {
+  keepFullResolution?: boolean;
+  /** "grade" (the default) is the accuracy every verdict and grade uses; "preview" takes coarser steps, for redrawing while a control is dragged. */
+  quality?: SolveQuality;
+};
 
 const MAX_DRAWN_POINTS = 4000;
 
@@ -102,7 +106,7 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
   const slots = bitSlots(bits, signal);
   const endTime = signal.leadIn + bits.length * signal.bitPeriod + Math.max(signal.latchGap ?? 0, totals.delay + signal.bitPeriod);
 
-  const plan = planSolve(totals, driver.edgeTime, endTime);
+  const plan = planSolve(totals, driver.edgeTime, endTime, options.quality);
   const resistanceHigh = driver.outputResistance + resolved.seriesResistance;
   const resistanceLow = (driver.outputResistanceLow ?? driver.outputResistance) + resolved.seriesResistance;
   const solved = solveLine(

@@ -1,0 +1,130 @@
+/**
+ * The solver's building blocks on their own: the pin trace keeps every step within its
+ * tolerance, the clamp solve lands on the root of the diode equation, and recorded stretches
+ * are only reused where the edges ahead are the same.
+ */
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { CLAMP_DIODE_MODEL } from "@/lib/sim";
+import { solveClamped } from "@/lib/sim/far-node";
+import { SegmentLibrary, type SegmentRecording } from "@/lib/sim/segment-replays";
+import { Trace, TRACE_TOLERANCE } from "@/lib/sim/trace";
+import { expandTrace } from "@/lib/sim/waveform";
+
+describe("the pin trace", () => {
+  /** Steps fed one by one (with gaps, which hold the last value) or in spans, then compared step by step. */
+  const feeds = fc.array(
+    fc.record({ gap: fc.nat({ max: 40 }), values: fc.array(fc.double({ min: -1, max: 6, noNaN: true }), { minLength: 1, maxLength: 30 }), smooth: fc.boolean(), span: fc.boolean() }),
+    { minLength: 1, maxLength: 25 },
+  );
+
+  it("passes within TRACE_TOLERANCE of every step fed, and holds the last value over skipped steps", () => {
+    fc.assert(
+      fc.property(feeds, (pieces) => {
+        const trace = new Trace(4);
+        const expected: number[] = [];
+        let step = 0;
+        for (const piece of pieces) {
+          const last = expected.length > 0 ? expected[expected.length - 1] : 0;
+          for (let g = 0; g < piece.gap && expected.length > 0; g += 1) expected.push(last);
+          step = expected.length;
+          // Smooth pieces imitate a settling edge, rough ones noise: both must be kept.
+          const values = piece.smooth ? piece.values.map((v, i) => last + (v - last) * (1 - Math.exp(-i / 5))) : piece.values;
+          if (piece.span) trace.pushSpan(step, Float64Array.from(values), 0, values.length);
+          else values.forEach((v, i) => trace.push(step + i, v));
+          expected.push(...values);
+        }
+        trace.finish(expected.length - 1);
+        const curve = expandTrace(trace, expected.length);
+        for (let n = 0; n < expected.length; n += 1) expect(Math.abs(curve[n] - expected[n])).toBeLessThanOrEqual(TRACE_TOLERANCE * (1 + 1e-9));
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it("keeps a settling exponential in far fewer breakpoints than steps", () => {
+    const trace = new Trace();
+    for (let n = 0; n < 2000; n += 1) trace.push(n, 5 * (1 - Math.exp(-n / 17.5)));
+    trace.finish(1999);
+    expect(trace.count).toBeLessThan(200);
+  });
+
+  it("breaks exactly at a rest, so what follows depends on nothing before it", () => {
+    const trace = new Trace();
+    for (let n = 0; n < 50; n += 1) trace.push(n, Math.sin(n / 3));
+    trace.breakAt(60, 2.5);
+    trace.finish(80);
+    const curve = expandTrace(trace, 81);
+    expect(curve[60]).toBe(2.5);
+    expect(curve[80]).toBe(2.5);
+  });
+});
+
+describe("the clamp solve", () => {
+  const { saturationCurrent: is, thermalVoltage: vt } = CLAMP_DIODE_MODEL;
+  /** G·v − J + Is·(e^((v−VDD)/Vt) − 1) − Is·(e^(−v/Vt) − 1), the pin's equation (lib/sim/README.md). */
+  const residual = (g: number, j: number, supply: number, v: number) => g * v - j + is * Math.expm1((v - supply) / vt) - is * Math.expm1(-v / vt);
+  /** Bisection to 1e-12 V, as an independent reference. */
+  function bisect(g: number, j: number, supply: number): number {
+    let low = -5;
+    let high = supply + 5;
+    for (let k = 0; k < 80; k += 1) {
+      const middle = 0.5 * (low + high);
+      if (residual(g, j, supply, middle) > 0) high = middle;
+      else low = middle;
+    }
+    return 0.5 * (low + high);
+  }
+
+  it("lands within 10 µV of the root from any guess, above the supply and below ground", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-3, max: 0.5, noNaN: true }),
+        fc.double({ min: 0.45, max: 8, noNaN: true }),
+        fc.boolean(),
+        fc.constantFrom(3.3, 5),
+        fc.double({ min: -3, max: 3, noNaN: true }),
+        (g, overdrive, above, supply, guessOffset) => {
+          const open = above ? supply + overdrive : -overdrive;
+          const root = bisect(g, g * open, supply);
+          expect(Math.abs(solveClamped(g, g * open, supply, root + guessOffset) - root)).toBeLessThan(1e-5);
+          expect(Math.abs(solveClamped(g, g * open, supply, root + guessOffset * 1e-3) - root)).toBeLessThan(1e-5);
+        },
+      ),
+      { numRuns: 300 },
+    );
+  });
+});
+
+describe("recorded stretches", () => {
+  const recording = (offsets: number[], rising: number[], restAt: number): SegmentRecording => ({
+    startsHigh: rising[0] === 0,
+    offsets: Int32Array.from(offsets),
+    rising: Uint8Array.from(rising),
+    restAt,
+    farSteps: new Int32Array(1),
+    farValues: new Float64Array(1),
+    arrivalSteps: new Int32Array(0),
+    arrivalValues: new Float64Array(0),
+    clampCurrentPeak: 0,
+    clampPeakAt: -1,
+  });
+  // A 0 bit: rise at 0, fall 4000 steps later, rest 9000 steps after the rise.
+  const zeroBit = recording([0, 4000], [1, 0], 9000);
+  const library = new SegmentLibrary();
+  library.add(zeroBit);
+  const ramps = Int32Array.from([1000, 5000, 13500, 17500, 26000, 34000]);
+  const rising = Uint8Array.from([1, 0, 1, 0, 1, 0]);
+
+  it("are reused where the same edges follow from the same rest, with the next edge after the rest", () => {
+    expect(library.find(false, ramps, rising, 0, 100_000)).toBe(zeroBit);
+    expect(library.find(false, ramps, rising, 2, 100_000)).toBe(zeroBit);
+  });
+
+  it("are not reused for other edge timings, another starting state, an edge before the rest, or past the end of the run", () => {
+    expect(library.find(false, ramps, rising, 4, 100_000)).toBeNull();
+    expect(library.find(true, ramps, rising, 0, 100_000)).toBeNull();
+    expect(library.find(false, Int32Array.from([1000, 5000, 9500]), Uint8Array.from([1, 0, 1]), 0, 100_000)).toBeNull();
+    expect(library.find(false, ramps, rising, 0, 9_500)).toBeNull();
+  });
+});
