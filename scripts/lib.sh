@@ -44,3 +44,8 @@ wait_for_port() {
   for _ in $(seq 1 $((seconds * 10))); do port_in_use "$port" && return 0; sleep 0.1; done
   fail "$what did not start listening on 127.0.0.1:$port within ${seconds}s."
 }
+
+# Background processes run in their own process group (setsid), so stopping one also stops what
+# it spawned: `npx next start` leaves its server behind when only npx is killed.
+start_background() { setsid "$@" & }
+stop_background() { for pid in "$@"; do kill -- "-$pid" 2>/dev/null || kill "$pid" 2>/dev/null || true; done; }

@@ -16,7 +16,7 @@ start_local_services() {
     require_free_port "$SMTP_PORT" "the local mail sink needs it"
     require_free_port "$((base + 26))" "the local mail sink's message list needs it"
     step "Starting the local mail sink (SMTP 127.0.0.1:$SMTP_PORT, messages at $MAIL_SINK_URL)"
-    SMTP_PORT=$SMTP_PORT MAIL_SINK_API_PORT=$((base + 26)) node scripts/mail-sink.mjs >"$DATA_DIR/mail-sink-$profile.log" 2>&1 &
+    SMTP_PORT=$SMTP_PORT MAIL_SINK_API_PORT=$((base + 26)) start_background node scripts/mail-sink.mjs >"$DATA_DIR/mail-sink-$profile.log" 2>&1
     service_pids+=($!)
     wait_for_port "$SMTP_PORT" 15 "The mail sink"
   fi
@@ -35,7 +35,7 @@ start_local_services() {
     require_free_port "$ingest_port" "the local upload fake needs it"
     require_free_port "$api_port" "the local upload fake's file API needs it"
     step "Starting the local upload fake (ingest $UPLOADTHING_INGEST_URL, API $UPLOADTHING_API_URL, files in .data/uploads-$profile)"
-    UPLOAD_FAKE_PORT=$ingest_port UPLOAD_FAKE_API_PORT=$api_port node scripts/upload-fake.mjs >"$DATA_DIR/upload-fake-$profile.log" 2>&1 &
+    UPLOAD_FAKE_PORT=$ingest_port UPLOAD_FAKE_API_PORT=$api_port start_background node scripts/upload-fake.mjs >"$DATA_DIR/upload-fake-$profile.log" 2>&1
     service_pids+=($!)
     wait_for_port "$ingest_port" 15 "The upload fake"
     wait_for_port "$api_port" 15 "The upload fake's file API"

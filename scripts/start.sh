@@ -16,7 +16,7 @@ mkdir -p "$DATA_DIR"
 children=()
 cleanup() {
   trap - INT TERM EXIT
-  for pid in "${children[@]}"; do kill "$pid" 2>/dev/null || true; done
+  stop_background "${children[@]}"
   wait 2>/dev/null || true
   [ "${started_postgres:-0}" = 1 ] && bash scripts/postgres.sh stop
   exit 0
@@ -50,10 +50,10 @@ if [ "$MODE" = production ]; then
     step "Build is up to date"
   fi
   step "Serving Edgewise on http://127.0.0.1:$PORT (Ctrl-C stops it)"
-  NODE_ENV=production npx next start -H 127.0.0.1 -p "$PORT" &
+  NODE_ENV=production start_background npx next start -H 127.0.0.1 -p "$PORT"
 else
   step "Starting the dev server on http://127.0.0.1:$PORT (Ctrl-C stops it)"
-  npx next dev -H 127.0.0.1 -p "$PORT" &
+  start_background npx next dev -H 127.0.0.1 -p "$PORT"
 fi
 children+=($!)
 wait "${children[-1]}"

@@ -16,7 +16,7 @@ unset SMTP_HOST UPLOADTHING_TOKEN
 
 pids=()
 cleanup() {
-  for pid in "${pids[@]}"; do kill "$pid" 2>/dev/null || true; done
+  stop_background "${pids[@]}"
   wait 2>/dev/null
   bash scripts/postgres.sh stop >/dev/null 2>&1
 }
@@ -52,7 +52,8 @@ run_vitest reference
 
 step "Building the app for the browser tests"
 if npx next build >"$DATA_DIR/build-test.log" 2>&1; then
-  NODE_ENV=production npx next start -H 127.0.0.1 -p "$APP_PORT" >"$DATA_DIR/app-test.log" 2>&1 &
+  require_free_port "$APP_PORT" "the browser tests serve the app there"
+  NODE_ENV=production start_background npx next start -H 127.0.0.1 -p "$APP_PORT" >"$DATA_DIR/app-test.log" 2>&1
   pids+=($!)
   wait_for_port "$APP_PORT" 60 "The app"
   run_vitest e2e
