@@ -2,8 +2,8 @@ import { rampProgress, rampSteps, type DriveSchedule } from "./drive-source";
 import { LineNearEnd, type EndCoefficients } from "./near-end";
 import type { RunRecord } from "./run-record";
 import { SegmentLibrary } from "./segment-replays";
-import { NEGLIGIBLE_CONDUCTION, pinEquilibrium, SETTLED_TOLERANCE, solveClamped } from "./far-node";
-import type { DriverResistances, LineTotals, ReceiverLoad, SolveOutput, SolverPlan, SolverScratch } from "./line-solver";
+import { clampStepFrom, NEGLIGIBLE_CONDUCTION, pinEquilibrium, solveClamped } from "./far-node";
+import type { DriverResistances, LineTotals, ReceiverLoad, SolveOutput, SolverPlan, SolverScratch, SolverTolerances } from "./line-solver";
 import type { Trace } from "./trace";
 import { WaveChunk } from "./wave-chunk";
 
@@ -15,20 +15,8 @@ import { WaveChunk } from "./wave-chunk";
  * hot loops keep their state in locals and write the typed arrays directly.
  */
 
-/**
- * A settled pin ignores arriving changes smaller than this. Without it every small arrival
- * would send back a train of still smaller ones, multiplying without end; with it the tail of
- * the ringing stops once it is far below anything the decoder can see.
- */
-const INPUT_DEADBAND = 5e-4;
-const JUNCTION_DEADBAND = 1e-4;
-/** The wave a moving pin sends back is passed on only when it has moved this much. */
-const OUTPUT_DEADBAND = 2e-4;
-/**
- * When every wave on the line and the pin lie this close to the DC state of a flat drive, the
- * state is set to that DC state and the solver jumps to the driver's next edge.
- */
-const QUIET_BAND = 2e-3;
+/** Longer stretches between rests (a run that keeps ringing) are unlikely to come again: not worth copying. */
+const MAX_RECORDED_EDGES = 8;
 
 type DcState = {
   /** Stream values entering each segment from its left (forward) and right (backward) end. */
@@ -111,6 +99,7 @@ class DistributedLine {
   private readonly segments: number;
   private readonly dt: number;
   private readonly stepCount: number;
+  private readonly tolerances: SolverTolerances;
   private readonly z0: number;
   private readonly endResistance: number;
   private readonly theveninScale: number;
@@ -159,6 +148,8 @@ class DistributedLine {
   private heldInput = 0;
   private heldOutput = 0;
   private lastWave = 0;
+  /** Clamp current of the last step (A, positive into VDD), 0 when the clamps were off. */
+  private clampCurrent = 0;
   clampCurrentPeak = 0;
   clampCurrentPeakTime = 0;
 
@@ -168,6 +159,7 @@ class DistributedLine {
     this.segments = segments;
     this.dt = dt;
     this.stepCount = plan.stepCount;
+    this.tolerances = plan.tolerances;
     this.z0 = line.z0;
     const ladder: Ladder = {
       segments,
@@ -234,7 +226,7 @@ class DistributedLine {
         stream.write = stream.read;
         stream.read = written;
       }
-      start = this.skipWhileQuiet(start + length);
+      start = this.restIfQuiet(start + length);
     }
     this.far.finish(stepCount - 1);
   }
@@ -251,18 +243,19 @@ class DistributedLine {
     return k;
   }
 
-  /** When the whole line sits within QUIET_BAND of the DC state of a flat drive, rests it there. Returns the step to go on from. */
-  private skipWhileQuiet(next: number): number {
+  /** When the whole line sits within the quiet tolerance of the DC state of a flat drive, rests it there. Returns the step to go on from. */
+  private restIfQuiet(next: number): number {
     if (next >= this.stepCount) return next;
     const k = this.edgeAt(next);
     if (k < this.rampStart.length && this.rampStart[k] <= next) return next;
     const high = k > 0 && this.rising[k - 1] === 1;
     const state = high ? this.dcHigh : this.dcLow;
-    if (Math.abs(this.v1 - state.pin) > QUIET_BAND || Math.abs(this.v2 - state.pin) > QUIET_BAND) return next;
+    const band = this.tolerances.quiet;
+    if (Math.abs(this.v1 - state.pin) > band || Math.abs(this.v2 - state.pin) > band) return next;
     const { segments, forward, backward } = this;
     for (let j = 0; j < segments; j += 1) {
-      if (!forward[j].read.isNear(state.forward[j], QUIET_BAND)) return next;
-      if (!backward[j].read.isNear(state.backward[j], QUIET_BAND)) return next;
+      if (!forward[j].read.isNear(state.forward[j], band)) return next;
+      if (!backward[j].read.isNear(state.backward[j], band)) return next;
     }
     return this.restAt(next, high, k);
   }
@@ -308,8 +301,8 @@ class DistributedLine {
   /** Records the segment solved since the last rest, which ends with the rest at `rest`, before edge `nextEdge`. */
   private closeSegment(rest: number, nextEdge: number): void {
     const segment = this.segment;
-    if (segment === null) return;
     this.segment = null;
+    if (segment === null || nextEdge - segment.firstEdge > MAX_RECORDED_EDGES) return;
     const { start, firstEdge } = segment;
     const offsets = this.rampStart.slice(firstEdge, nextEdge);
     for (let j = 0; j < offsets.length; j += 1) offsets[j] -= start;
@@ -350,6 +343,7 @@ class DistributedLine {
     this.heldInput = state.forward[segments - 1];
     this.heldOutput = state.backward[segments - 1];
     this.lastWave = this.heldOutput;
+    this.clampCurrent = 0;
     this.cursor = edge;
   }
 
@@ -423,12 +417,13 @@ class DistributedLine {
   }
 
   /**
-   * An inner junction (R/N in series, G/N to ground). It ignores input changes within
-   * JUNCTION_DEADBAND of the inputs it last answered: the small reflections of the lumped
+   * An inner junction (R/N in series, G/N to ground). It ignores input changes within the
+   * junction tolerance of the inputs it last answered: the small reflections of the lumped
    * resistors would otherwise bounce between junctions without end.
    */
   private junction(j: number, length: number, fromLeft: WaveChunk, fromRight: WaveChunk, toLeft: WaveChunk, toRight: WaveChunk): void {
     const { junctionThrough, junctionBack, junctionState } = this;
+    const deadband = this.tolerances.junction;
     const base = 4 * j;
     let heldLeft = junctionState[base];
     let heldRight = junctionState[base + 1];
@@ -454,7 +449,7 @@ class DistributedLine {
       const rightEnd = right + 1 < rightCount ? rightOffsets[right + 1] : length;
       const waveLeft = leftValues[left];
       const waveRight = rightValues[right];
-      if (Math.abs(waveLeft - heldLeft) > JUNCTION_DEADBAND || Math.abs(waveRight - heldRight) > JUNCTION_DEADBAND) {
+      if (Math.abs(waveLeft - heldLeft) > deadband || Math.abs(waveRight - heldRight) > deadband) {
         heldLeft = waveLeft;
         heldRight = waveRight;
         outLeft = junctionBack * waveLeft + junctionThrough * waveRight;
@@ -484,14 +479,15 @@ class DistributedLine {
 
   /**
    * The pin: C by BDF2, the clamps by a bracketed Newton solve when the pin is beyond a rail.
-   * Once it sits within SETTLED_TOLERANCE of its DC value for the arriving wave it is held
-   * there, and ignores arriving changes under INPUT_DEADBAND.
+   * Once it sits within the settled tolerance of its DC value for the arriving wave it is held
+   * there, and ignores arriving changes under the input tolerance.
    */
   private farEnd(start: number, length: number, incoming: WaveChunk, out: WaveChunk): void {
     const { endResistance, theveninScale, theveninConductance, safeLow, safeHigh, supply, clamps, dt } = this;
-    // Imported bindings are property reads in bundled code: read them once, not every step.
-    const settled = SETTLED_TOLERANCE;
+    const { settled, input: inputDeadband, output: outputDeadband } = this.tolerances;
+    // Imported functions are property reads in bundled code: read them once, not every step.
     const clampedVoltage = solveClamped;
+    const clampStep = clampStepFrom;
     const equilibriumOf = pinEquilibrium;
     const total = theveninConductance + this.capacitiveConductance;
     const inverseTotal = 1 / total;
@@ -511,6 +507,7 @@ class DistributedLine {
     let heldInput = this.heldInput;
     let heldOutput = this.heldOutput;
     let lastWave = this.lastWave;
+    let clampCurrent = this.clampCurrent;
     let clampPeak = 0;
     let clampPeakStep = -1;
     const pin = this.pinValues;
@@ -532,7 +529,7 @@ class DistributedLine {
         equilibrium = Number.NaN;
       }
       if (held) {
-        if (Math.abs(arriving - heldInput) <= INPUT_DEADBAND) {
+        if (Math.abs(arriving - heldInput) <= inputDeadband) {
           trace.pushSpan(start, pin, traced, i);
           traced = nextChange;
           if (heldOutput !== lastOut) {
@@ -549,17 +546,21 @@ class DistributedLine {
       const injected = driven + weight1 * v1 - weight2 * v2;
       let v = injected * inverseTotal;
       if (v > safeHigh || v < safeLow) {
-        v = clampedVoltage(total, injected, supply, 2 * v1 - v2);
-        const current = Math.abs(injected - total * v);
-        if (current > clampPeak) {
-          clampPeak = current;
+        const quick = clampCurrent === 0 ? Number.NaN : clampStep(total, injected, supply, v1, clampCurrent);
+        v = quick === quick ? quick : clampedVoltage(total, injected, supply, 2 * v1 - v2);
+        clampCurrent = injected - total * v;
+        const magnitude = Math.abs(clampCurrent);
+        if (magnitude > clampPeak) {
+          clampPeak = magnitude;
           clampPeakStep = start + i;
         }
+      } else {
+        clampCurrent = 0;
       }
       v2 = v1;
       v1 = v;
       const wave = 2 * (v + endResistance * (thevenin - v) * theveninConductance) - arriving;
-      if (Math.abs(wave - lastWave) > OUTPUT_DEADBAND) lastWave = wave;
+      if (Math.abs(wave - lastWave) > outputDeadband) lastWave = wave;
       if (lastWave !== lastOut) {
         outOffsets[outCount] = i;
         outValues[outCount] = lastWave;
@@ -568,10 +569,13 @@ class DistributedLine {
       }
       pin[i] = v;
       if (Math.abs(v1 - v2) <= settled) {
-        if (equilibrium !== equilibrium) equilibrium = equilibriumOf(thevenin, theveninConductance, supply, clamps, v1);
+        // A clamped pin's DC value is one short Newton step away, or too far away to hold at.
+        if (clampCurrent !== 0) equilibrium = clampStep(theveninConductance, driven, supply, v1, clampCurrent);
+        else if (equilibrium !== equilibrium) equilibrium = equilibriumOf(thevenin, theveninConductance, supply, clamps);
         if (Math.abs(v1 - equilibrium) <= settled && Math.abs(v2 - equilibrium) <= settled) {
           v1 = equilibrium;
           v2 = equilibrium;
+          clampCurrent = 0;
           held = true;
           heldInput = arriving;
           heldOutput = lastWave;
@@ -587,6 +591,7 @@ class DistributedLine {
     this.heldInput = heldInput;
     this.heldOutput = heldOutput;
     this.lastWave = lastWave;
+    this.clampCurrent = clampCurrent;
     if (clampPeak > this.clampCurrentPeak) {
       this.clampCurrentPeak = clampPeak;
       this.clampCurrentPeakTime = clampPeakStep * dt;

@@ -1,7 +1,7 @@
 import { solveDistributed } from "./distributed-line";
 import { DriveSource, type DriveSchedule } from "./drive-source";
 import { SimSolveBudgetError } from "./errors";
-import { FarNode, SETTLED_TOLERANCE } from "./far-node";
+import { FarNode } from "./far-node";
 import { TracedNearEnd, type NearEnd } from "./near-end";
 import { RunRecord } from "./run-record";
 import { Trace } from "./trace";
@@ -43,6 +43,7 @@ export type SolverPlan = {
   /** 0 when the line is treated as a lumped resistor and capacitor. */
   segments: number;
   stepsPerSegment: number;
+  tolerances: SolverTolerances;
 };
 
 /** Records a caller lends to the solver so that repeated runs reuse their memory. */
@@ -61,33 +62,52 @@ export type SolveOutput = {
 
 export const MAX_SOLVER_STEPS = 5_000_000;
 
-const PREVIEW_STEP = 0.2e-9;
-const PREVIEW_STEPS_PER_EDGE = 15;
+/**
+ * How far the solver lets small changes go unanswered (V). Without these every small arrival
+ * would send back a train of still smaller ones, multiplying without end; with them the tail of
+ * the ringing stops once it is far below anything the decoder can see. Each bounds its own error.
+ */
+export type SolverTolerances = {
+  /** A pin this close to its DC value for a constant arriving wave is held there, so the wave it sends back is exactly constant. */
+  settled: number;
+  /** A held pin ignores arriving changes smaller than this. */
+  input: number;
+  /** The wave a moving pin sends back is passed on only when it has moved this much. */
+  output: number;
+  /** An inner junction ignores input changes this close to the inputs it last answered. */
+  junction: number;
+  /** When every wave and the pin lie this close to the DC state of a flat drive, the line is set to it (a rest). */
+  quiet: number;
+};
 
-/** "grade": the full accuracy every verdict is given at; "preview": coarser steps for redrawing while a control is dragged. */
+/** "grade": the full accuracy every verdict is given at; "preview": coarser, for redrawing while a control is dragged. */
 export type SolveQuality = "grade" | "preview";
 
-/** Largest step, and steps per edge at least: 0.1 ns for 3 ns edges (docs/simulator.md), finer for faster edges. */
-const STEP_RULES: Record<SolveQuality, { maxStep: number; stepsPerEdge: number }> = {
-  grade: { maxStep: 1e-10, stepsPerEdge: 25 },
-  preview: { maxStep: PREVIEW_STEP, stepsPerEdge: PREVIEW_STEPS_PER_EDGE },
+/**
+ * Largest step and least steps per edge (0.1 ns for 3 ns edges, docs/simulator.md), and the
+ * tolerances. Preview: half the steps and looser holds, within 1 % of VDD of "grade" (README).
+ */
+const QUALITY_RULES: Record<SolveQuality, { maxStep: number; stepsPerEdge: number; tolerances: SolverTolerances }> = {
+  grade: { maxStep: 1e-10, stepsPerEdge: 25, tolerances: { settled: 2e-4, input: 5e-4, output: 2e-4, junction: 1e-4, quiet: 2e-3 } },
+  preview: { maxStep: 2e-10, stepsPerEdge: 15, tolerances: { settled: 1e-3, input: 3e-3, output: 1e-3, junction: 5e-4, quiet: 5e-3 } },
 };
+
 /** Segments per unit of R/Z0: keeps the lumped-loss error of the first arrival, about R/(4N·Z0), under 0.3 %. */
 const SEGMENTS_PER_LOSS = 80;
 const MAX_SEGMENTS = 16;
 
 export function planSolve(line: LineTotals, edgeTime: number, endTime: number, quality: SolveQuality = "grade"): SolverPlan {
-  const rule = STEP_RULES[quality];
+  const rule = QUALITY_RULES[quality];
   const maxStep = Math.min(rule.maxStep, edgeTime / rule.stepsPerEdge);
   let plan: SolverPlan;
   if (line.delay < maxStep / 2) {
-    plan = { dt: maxStep, stepCount: 0, segments: 0, stepsPerSegment: 0 };
+    plan = { dt: maxStep, stepCount: 0, segments: 0, stepsPerSegment: 0, tolerances: rule.tolerances };
   } else {
     const loss = Math.max(line.resistance / line.z0, line.conductance * line.z0);
     const wanted = Math.min(MAX_SEGMENTS, Math.max(1, Math.ceil(loss * SEGMENTS_PER_LOSS)));
     const segments = Math.max(1, Math.min(wanted, Math.floor(line.delay / maxStep)));
     const stepsPerSegment = Math.ceil(line.delay / segments / maxStep - 1e-9);
-    plan = { dt: line.delay / (segments * stepsPerSegment), stepCount: 0, segments, stepsPerSegment };
+    plan = { dt: line.delay / (segments * stepsPerSegment), stepCount: 0, segments, stepsPerSegment, tolerances: rule.tolerances };
   }
   plan.stepCount = Math.ceil(endTime / plan.dt) + 1;
   if (plan.stepCount > MAX_SOLVER_STEPS) {
@@ -163,7 +183,7 @@ function solveLumped(
     while (step < stop) {
       advance(step, drive, g);
       step += 1;
-      if (node.isSettledAt(equilibrium, SETTLED_TOLERANCE)) {
+      if (node.isSettledAt(equilibrium, plan.tolerances.settled)) {
         node.holdAt(equilibrium);
         step = stop;
       }

@@ -1,5 +1,5 @@
 import { rampProgress, rampSteps, type DriveSchedule } from "./drive-source";
-import type { RunRecord } from "./run-record";
+import { runAt, type RunRecord } from "./run-record";
 import type { Trace } from "./trace";
 
 /**
@@ -36,8 +36,7 @@ export class LineNearEnd implements NearEnd {
 
   at(step: number): number {
     const { steps, values, count } = this.arrivals;
-    if (this.run > 0 && steps[this.run] > step) this.run = 0;
-    while (this.run + 1 < count && steps[this.run + 1] <= step) this.run += 1;
+    this.run = runAt(steps, count, step, this.run);
     const arriving = values[this.run];
     const { rampStart, rampEnd } = this;
     const { rising, highVoltage, edgeTime } = this.drive;
@@ -69,8 +68,7 @@ export class TracedNearEnd implements NearEnd {
 
   at(step: number): number {
     const { steps, values, count } = this.trace;
-    if (this.segment > 0 && steps[this.segment] > step) this.segment = 0;
-    while (this.segment + 1 < count && steps[this.segment + 1] <= step) this.segment += 1;
+    this.segment = runAt(steps, count, step, this.segment);
     const k = this.segment;
     if (k + 1 >= count) return values[k];
     return values[k] + ((step - steps[k]) / (steps[k + 1] - steps[k])) * (values[k + 1] - values[k]);

@@ -1,3 +1,22 @@
+/**
+ * Index of the last of `count` ascending `steps` at or before `step` (0 if none), searched from
+ * `from`: the next few by walking, any further by halving, so sampling a busy record stays cheap.
+ */
+export function runAt(steps: Int32Array, count: number, step: number, from: number): number {
+  let low = from > 0 && steps[from] > step ? 0 : from;
+  for (let walk = 0; walk < 8; walk += 1) {
+    if (low + 1 >= count || steps[low + 1] > step) return low;
+    low += 1;
+  }
+  let high = count;
+  while (high - low > 1) {
+    const middle = (low + high) >> 1;
+    if (steps[middle] <= step) low = middle;
+    else high = middle;
+  }
+  return low;
+}
+
 /** A whole wave as runs of equal values: run k holds `values[k]` from step `steps[k]` to the next run. */
 export class RunRecord {
   steps: Int32Array;

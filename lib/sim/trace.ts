@@ -46,11 +46,14 @@ export class Trace {
     if (from >= to) return;
     this.push(firstStep + from, values[from]);
     // The swinging door of `extend`, kept in locals for the busy stretches of a run.
+    if (this.count + (to - from) > this.steps.length) this.grow(this.count + (to - from));
+    const steps = this.steps;
+    const points = this.values;
+    let count = this.count;
     let originStep = this.originStep;
     let originValue = this.originValue;
     let upper = this.upper;
     let lower = this.lower;
-    let lastValue = this.lastValue;
     for (let i = from + 1; i < to; i += 1) {
       const step = firstStep + i;
       const value = values[i];
@@ -63,18 +66,22 @@ export class Trace {
         lower = nextLower;
       } else {
         const corner = originValue + (upper === Infinity ? 0 : 0.5 * (upper + lower)) * (step - 1 - originStep);
-        this.write(step - 1, corner);
+        steps[count] = step - 1;
+        points[count] = corner;
+        count += 1;
         originStep = step - 1;
         originValue = corner;
         upper = value - corner + TRACE_TOLERANCE;
         lower = value - corner - TRACE_TOLERANCE;
       }
-      lastValue = value;
     }
+    this.count = count;
+    this.originStep = originStep;
+    this.originValue = originValue;
     this.upper = upper;
     this.lower = lower;
     this.lastStep = firstStep + to - 1;
-    this.lastValue = lastValue;
+    this.lastValue = values[to - 1];
   }
 
   /**
@@ -83,6 +90,12 @@ export class Trace {
    * nothing before it.
    */
   breakAt(step: number, value: number): void {
+    if (this.count > 0 && step === this.originStep && this.lastStep === step) {
+      this.values[this.count - 1] = value;
+      this.originValue = value;
+      this.lastValue = value;
+      return;
+    }
     if (this.count > 0) {
       if (step > this.lastStep + 1) this.extend(step - 1, this.lastValue);
       if (this.lastStep > this.originStep) this.write(this.lastStep, this.originValue + this.slope() * (this.lastStep - this.originStep));
@@ -159,9 +172,12 @@ export class Trace {
     this.lower = -Infinity;
   }
 
-  private grow(): void {
-    const steps = new Int32Array(this.steps.length * 2);
-    const values = new Float64Array(this.values.length * 2);
+  /** Makes room for at least `needed` breakpoints. */
+  private grow(needed = this.count + 1): void {
+    let capacity = this.steps.length * 2;
+    while (capacity < needed) capacity *= 2;
+    const steps = new Int32Array(capacity);
+    const values = new Float64Array(capacity);
     steps.set(this.steps);
     values.set(this.values);
     this.steps = steps;

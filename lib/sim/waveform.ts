@@ -1,4 +1,5 @@
 import type { NearEnd } from "./near-end";
+import { runAt } from "./run-record";
 import type { Trace } from "./trace";
 
 /** A waveform as a piecewise-linear curve through its breakpoints (a solver trace on the time axis). */
@@ -8,14 +9,18 @@ export type Waveform = { time: Float64Array; value: Float64Array; count: number 
 export function waveformFromTrace(trace: Trace, dt: number, reuse?: Waveform): Waveform {
   const count = trace.count;
   const fits = reuse !== undefined && reuse.time.length >= count;
-  const time = fits ? reuse.time : new Float64Array(count);
-  const value = fits ? reuse.value : new Float64Array(count);
-  const { steps, values } = trace;
+  const wave = fits ? { time: reuse.time, value: reuse.value, count } : { time: new Float64Array(count), value: new Float64Array(count), count };
+  placeOnTimeAxis(wave, trace.steps, trace.values, dt);
+  return wave;
+}
+
+/** Kept apart from the allocation above so that the loop is compiled once, not re-entered every run. */
+function placeOnTimeAxis(wave: Waveform, steps: Int32Array, values: Float64Array, dt: number): void {
+  const { time, value, count } = wave;
   for (let k = 0; k < count; k += 1) {
     time[k] = steps[k] * dt;
     value[k] = values[k];
   }
-  return { time, value, count };
 }
 
 /** Every solver step's value, for callers that asked for full resolution. */
@@ -40,7 +45,7 @@ export function sampleTrace(trace: Trace, dt: number, interval: number, points: 
   let k = 0;
   for (let p = 0; p < points; p += 1) {
     const position = Math.min((p * interval) / dt, lastStep);
-    while (k + 1 < count && steps[k + 1] <= position) k += 1;
+    k = runAt(steps, count, position, k);
     if (k + 1 >= count) {
       out[p] = values[k];
     } else {

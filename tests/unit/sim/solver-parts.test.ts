@@ -6,7 +6,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { CLAMP_DIODE_MODEL } from "@/lib/sim";
-import { solveClamped } from "@/lib/sim/far-node";
+import { clampStepFrom, solveClamped } from "@/lib/sim/far-node";
 import { SegmentLibrary, type SegmentRecording } from "@/lib/sim/segment-replays";
 import { Trace, TRACE_TOLERANCE } from "@/lib/sim/trace";
 import { expandTrace } from "@/lib/sim/waveform";
@@ -93,6 +93,39 @@ describe("the clamp solve", () => {
       ),
       { numRuns: 300 },
     );
+  });
+});
+
+describe("the quick clamp step from the last step's answer", () => {
+  const { saturationCurrent: is, thermalVoltage: vt } = CLAMP_DIODE_MODEL;
+  const diodeCurrent = (v: number, supply: number) => is * Math.expm1((v - supply) / vt) - is * Math.expm1(-v / vt);
+
+  it("lands within 25 µV of the new root when it answers, and declines a long step", () => {
+    let answered = 0;
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-3, max: 0.5, noNaN: true }),
+        fc.double({ min: 0.45, max: 6, noNaN: true }),
+        fc.boolean(),
+        fc.double({ min: -0.05, max: 0.05, noNaN: true }),
+        (g, overdrive, above, change) => {
+          const supply = 5;
+          const open = above ? supply + overdrive : -overdrive;
+          const previous = solveClamped(g, g * open, supply, open);
+          const previousCurrent = g * open - g * previous;
+          const next = g * (open + change);
+          const root = solveClamped(g, next, supply, previous);
+          const quick = clampStepFrom(g, next, supply, previous, previousCurrent);
+          if (Number.isNaN(quick)) return;
+          answered += 1;
+          expect(Math.abs(quick - root)).toBeLessThan(2.5e-5);
+          expect(Math.abs(g * quick - next + diodeCurrent(quick, supply))).toBeLessThan(2.5e-5 * (g + Math.abs(diodeCurrent(quick, supply)) / vt));
+        },
+      ),
+      { numRuns: 300 },
+    );
+    expect(answered).toBeGreaterThan(20);
+    expect(clampStepFrom(0.1, 0.1 * 6.5, 5, 5.6, 0.05)).toBeNaN();
   });
 });
 
