@@ -1,24 +1,6 @@
 import { and, desc, eq, max, sql } from "drizzle-orm";
 import { db } from "../client";
-import { cohortMemberships, cohorts, labAttempts, type LabAttempt } from "../schema";
-
-/** The learner's cohort for a course: the latest-starting one when they were moved between cohorts. */
-export async function findLearnerCohortId(params: { userId: string; courseSlug: string }): Promise<string | null> {
-  const [row] = await db
-    .select({ id: cohorts.id })
-    .from(cohortMemberships)
-    .innerJoin(cohorts, eq(cohorts.id, cohortMemberships.cohortId))
-    .where(
-      and(
-        eq(cohortMemberships.userId, params.userId),
-        eq(cohortMemberships.role, "learner"),
-        eq(cohorts.courseSlug, params.courseSlug),
-      ),
-    )
-    .orderBy(desc(cohorts.startsOn))
-    .limit(1);
-  return row?.id ?? null;
-}
+import { labAttempts, type LabAttempt } from "../schema";
 
 export type AttemptScore = { outcome: unknown; score: number; passed: boolean };
 

@@ -20,24 +20,6 @@ export const editableBenchStatuses = ["draft", "returned"] as const;
 
 const isEditable = (status: BenchSubmission["status"]) => (editableBenchStatuses as readonly string[]).includes(status);
 
-/** The learner's cohort for a course: the latest-starting one when they were moved between cohorts. */
-export async function findLearnerCohortForCourse(params: { learnerId: string; courseSlug: string }): Promise<string | null> {
-  const [row] = await db
-    .select({ id: cohorts.id })
-    .from(cohortMemberships)
-    .innerJoin(cohorts, eq(cohorts.id, cohortMemberships.cohortId))
-    .where(
-      and(
-        eq(cohortMemberships.userId, params.learnerId),
-        eq(cohortMemberships.role, "learner"),
-        eq(cohorts.courseSlug, params.courseSlug),
-      ),
-    )
-    .orderBy(desc(cohorts.startsOn))
-    .limit(1);
-  return row?.id ?? null;
-}
-
 export async function findBenchSubmissionByExercise(params: {
   learnerId: string;
   exerciseSlug: string;

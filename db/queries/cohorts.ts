@@ -1,4 +1,4 @@
-import { and, asc, eq, getTableColumns, sql } from "drizzle-orm";
+import { and, asc, desc, eq, getTableColumns, sql } from "drizzle-orm";
 import { db } from "../client";
 import { cohortMemberships, cohorts, users, type Cohort, type CohortRole } from "../schema";
 
@@ -76,3 +76,20 @@ export async function listCohortMembers(params: { cohortId: string; role: Cohort
     .orderBy(asc(users.name));
 }
 
+/** The learner's cohort for a course: the latest-starting one when they were moved between cohorts. */
+export async function findLearnerCohortId(params: { userId: string; courseSlug: string }): Promise<string | null> {
+  const [row] = await db
+    .select({ id: cohorts.id })
+    .from(cohortMemberships)
+    .innerJoin(cohorts, eq(cohorts.id, cohortMemberships.cohortId))
+    .where(
+      and(
+        eq(cohortMemberships.userId, params.userId),
+        eq(cohortMemberships.role, "learner"),
+        eq(cohorts.courseSlug, params.courseSlug),
+      ),
+    )
+    .orderBy(desc(cohorts.startsOn))
+    .limit(1);
+  return row?.id ?? null;
+}

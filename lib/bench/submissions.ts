@@ -2,10 +2,10 @@ import "server-only";
 import {
   ensureBenchDraft,
   findBenchSubmissionByExercise,
-  findLearnerCohortForCourse,
   removeBenchPhoto,
   submitBenchWork,
 } from "@/db/queries/bench";
+import { findLearnerCohortId } from "@/db/queries/cohorts";
 import { hasPermission } from "@/lib/auth/permissions";
 import type { SessionUser } from "@/lib/auth/session-store";
 import { deleteStoredFiles } from "@/lib/uploads/stored-files";
@@ -29,7 +29,7 @@ export async function openBenchDraft(params: { learner: SessionUser; exerciseSlu
       ? { status: "ready", submissionId: existing.id }
       : { status: "locked" };
   }
-  const cohortId = await findLearnerCohortForCourse({ learnerId: learner.id, courseSlug: entry.courseSlug });
+  const cohortId = await findLearnerCohortId({ userId: learner.id, courseSlug: entry.courseSlug });
   if (!cohortId) return { status: "no-cohort" };
   const draft = await ensureBenchDraft({ learnerId: learner.id, cohortId, exerciseSlug: entry.exercise.slug });
   return { status: "ready", submissionId: draft.id };

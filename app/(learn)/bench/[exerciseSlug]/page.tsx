@@ -9,10 +9,10 @@ import { PageHeading } from "@/components/ui/page-heading";
 import {
   editableBenchStatuses,
   findBenchSubmissionByExercise,
-  findLearnerCohortForCourse,
   listBenchPhotos,
   listBenchReviews,
 } from "@/db/queries/bench";
+import { findLearnerCohortId } from "@/db/queries/cohorts";
 import type { BenchSubmission } from "@/db/schema";
 import { requireRouteAccess } from "@/lib/auth/current-user";
 import { findBenchExercise, rubricMaximum } from "@/lib/bench/exercises";
@@ -49,7 +49,7 @@ export default async function BenchExercisePage({ params }: Params) {
   const [photos, reviews, cohortId] = await Promise.all([
     submission ? listBenchPhotos({ submissionId: submission.id }) : [],
     submission ? listBenchReviews({ submissionId: submission.id }) : [],
-    submission ? submission.cohortId : findLearnerCohortForCourse({ learnerId: learner.id, courseSlug: entry.courseSlug }),
+    submission ? submission.cohortId : findLearnerCohortId({ userId: learner.id, courseSlug: entry.courseSlug }),
   ]);
   const status = statusLines[submission?.status ?? "new"];
   const editable = !submission || (editableBenchStatuses as readonly string[]).includes(submission.status);

@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
-import { findLearnerCohortId, listLabAttemptsByLearner, recordLabAttempt } from "@/db/queries/attempts";
+import { listLabAttemptsByLearner, recordLabAttempt } from "@/db/queries/attempts";
+import { findLearnerCohortId } from "@/db/queries/cohorts";
 import { getCourse } from "@/lessons";
 import { checkCertificateAfterCourseWork } from "@/lib/certificates";
 import { gradeWork, outcomeOf, scoreWork, toAttemptView, variantSeedFor, verdictLines } from "@/lib/grading";
