@@ -26,7 +26,7 @@ const styles: { tone: Tone; dash: Dash }[] = [
 
 /** Simulates one cable of the comparison and hands its run to the figure; draws nothing itself. */
 function CableRun({ kind, input, onRun }: { kind: string; input: SimInput; onRun: (kind: string, run: LiveRun | null) => void }) {
-  const { result } = useLiveSimulation(input);
+  const { result } = useLiveSimulation(input, { quality: "preview" });
   useEffect(() => onRun(kind, result), [kind, result, onRun]);
   return null;
 }

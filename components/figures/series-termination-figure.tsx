@@ -21,7 +21,7 @@ export function SeriesTerminationFigure({ params, caption, resistorValues }: { p
   const values = "series" in slider ? resistorValues : gridValues(slider.min, slider.max, slider.step);
   const [moved, setMoved] = useState(params[slider.field]);
   const [input] = figureSimInputs({ figure: "series-termination", params }, moved);
-  const { result, pending, error } = useLiveSimulation(input ?? null);
+  const { result, pending, error } = useLiveSimulation(input ?? null, { quality: "preview" });
   const shown = isResistor ? formatQuantity(moved, "Ω") : `${moved} m`;
 
   return (

@@ -1,4 +1,4 @@
-import type { RunMetrics, SimBit, SimLine, SimInput, Verdict } from "@/lib/sim";
+import type { RunMetrics, SimBit, SimInput, SimLine, SolveQuality, Verdict } from "@/lib/sim";
 
 /** A simulated run as the browser draws it: fine-grained traces as typed arrays, plus what decoding found. */
 export type LiveRun = {
@@ -15,6 +15,6 @@ export type LiveRun = {
   computeMs: number;
 };
 
-export type SimulationRequest = { id: number; input: SimInput };
+export type SimulationRequest = { id: number; input: SimInput; quality: SolveQuality };
 
 export type SimulationReply = { id: number; ok: true; run: LiveRun } | { id: number; ok: false; error: string };

@@ -1,4 +1,4 @@
-import type { SimInput } from "@/lib/sim";
+import type { SimInput, SolveQuality } from "@/lib/sim";
 import type { LiveRun, SimulationReply, SimulationRequest } from "./live-run";
 
 export type ChannelUpdate =
@@ -24,6 +24,7 @@ export class SimulationChannel {
     private readonly nextId: () => number,
     private readonly deliver: (update: ChannelUpdate) => void,
     private readonly onClose: () => void = () => undefined,
+    private readonly quality: SolveQuality = "grade",
   ) {}
 
   submit(key: string, input: SimInput): void {
@@ -71,6 +72,6 @@ export class SimulationChannel {
   private send(key: string, input: SimInput): void {
     const id = this.nextId();
     this.inFlight = { id, key, sentAt: performance.now() };
-    this.port.post({ id, input });
+    this.port.post({ id, input, quality: this.quality });
   }
 }

@@ -1,3 +1,4 @@
+import type { SolveQuality } from "@/lib/sim";
 import type { SimulationReply } from "./live-run";
 import { SimulationChannel, type ChannelUpdate } from "./simulation-channel";
 
@@ -21,12 +22,13 @@ function startWorker(): Worker {
   return started;
 }
 
-export function openSimulationChannel(deliver: (update: ChannelUpdate) => void): SimulationChannel {
+export function openSimulationChannel(deliver: (update: ChannelUpdate) => void, quality: SolveQuality): SimulationChannel {
   const channel = new SimulationChannel(
     { post: (request) => (worker ??= startWorker()).postMessage(request) },
     () => (lastId += 1),
     deliver,
     () => channels.delete(channel),
+    quality,
   );
   channels.add(channel);
   return channel;

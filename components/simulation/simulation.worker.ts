@@ -1,4 +1,4 @@
-import { parseSimInput, SimInputError, simulateRun, type SimInput } from "@/lib/sim";
+import { parseSimInput, SimInputError, simulateRun, type SimInput, type SolveQuality } from "@/lib/sim";
 import type { LiveRun, SimulationReply, SimulationRequest } from "./live-run";
 
 // Sampling for the scope view: fine enough for a 3 ns edge to keep its shape when zoomed to
@@ -18,10 +18,10 @@ function describe(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
 }
 
-function simulate(input: SimInput): LiveRun {
+function simulate(input: SimInput, quality: SolveQuality): LiveRun {
   const started = performance.now();
   const resolved = parseSimInput(input);
-  const result = simulateRun({ ...resolved, output: { sampleInterval: sampleInterval(resolved) } });
+  const result = simulateRun({ ...resolved, output: { sampleInterval: sampleInterval(resolved) } }, { quality });
   const { receiver, signal } = resolved;
   return {
     trace: {
@@ -47,10 +47,10 @@ const scope = self as unknown as {
 };
 
 scope.onmessage = (event) => {
-  const { id, input } = event.data;
+  const { id, input, quality } = event.data;
   let reply: SimulationReply;
   try {
-    reply = { id, ok: true, run: simulate(input) };
+    reply = { id, ok: true, run: simulate(input, quality) };
   } catch (error) {
     scope.postMessage({ id, ok: false, error: describe(error) });
     return;

@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useRef, useState } from "react";
-import type { SimInput } from "@/lib/sim";
+import type { SimInput, SolveQuality } from "@/lib/sim";
 import type { LiveRun } from "./live-run";
 import type { SimulationChannel } from "./simulation-channel";
 import { openSimulationChannel } from "./simulation-worker-client";
@@ -22,8 +22,10 @@ type Settled = { key: string; run: LiveRun | null; error: string | null; roundTr
 /**
  * Simulates `input` in a Web Worker and re-simulates whenever it changes (compared by value).
  * Only the newest input counts: older results are dropped, never shown after a newer one.
+ * `quality: "preview"` (for runs redrawn while a control moves) takes half the solver steps and
+ * stays within about 1 % of VDD; grading always runs at full accuracy on the server.
  */
-export function useLiveSimulation(input: SimInput | null): LiveSimulation {
+export function useLiveSimulation(input: SimInput | null, { quality = "grade" }: { quality?: SolveQuality } = {}): LiveSimulation {
   const key = input === null ? null : JSON.stringify(input);
   const [settled, setSettled] = useState<Settled | null>(null);
   const channel = useRef<SimulationChannel | null>(null);
@@ -31,19 +33,21 @@ export function useLiveSimulation(input: SimInput | null): LiveSimulation {
   latestInput.current = input;
 
   useEffect(() => {
-    const opened = openSimulationChannel((update) =>
-      setSettled((previous) =>
-        update.kind === "result"
-          ? { key: update.key, run: update.run, error: null, roundTripMs: update.roundTripMs }
-          : { key: update.key, run: previous?.run ?? null, error: update.message, roundTripMs: null },
-      ),
+    const opened = openSimulationChannel(
+      (update) =>
+        setSettled((previous) =>
+          update.kind === "result"
+            ? { key: update.key, run: update.run, error: null, roundTripMs: update.roundTripMs }
+            : { key: update.key, run: previous?.run ?? null, error: update.message, roundTripMs: null },
+        ),
+      quality,
     );
     channel.current = opened;
     return () => {
       opened.close();
       channel.current = null;
     };
-  }, []);
+  }, [quality]);
 
   useEffect(() => {
     if (key !== null && latestInput.current) channel.current?.submit(key, latestInput.current);

@@ -26,7 +26,7 @@ function SimulationBadge({ pending, roundTripMs, computeMs }: { pending: boolean
  * the scope view, with the lab's pass rule applied to it as a preview. Grading happens only on submit.
  */
 export function BenchPreview({ input, rule, caption, note }: { input: SimInput; rule: PassRule; caption: string; note?: React.ReactNode }) {
-  const live = useLiveSimulation(input);
+  const live = useLiveSimulation(input, { quality: "preview" });
   const run = live.result;
   const judgement = run ? previewJudgement(rule, run) : null;
 
