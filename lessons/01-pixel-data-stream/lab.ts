@@ -1,4 +1,5 @@
 import type { LabInput } from "../schema";
+import { scoringPolicy } from "../scoring-policy";
 
 export const lab = {
   slug: "timing-budget",
@@ -47,14 +48,7 @@ The bit period stays at 1.25 µs. A high time too close to the whole period leav
     },
   ],
   passRule: { allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.5 },
-  scoring: {
-    fullMarksMargin: { timing: 190e-9, voltage: 1.2 },
-    passBase: 60,
-    failCreditMax: 30,
-    questionShare: 0.3,
-    penaltyPerAttemptBeyond: 3,
-    penalty: 5,
-  },
+  scoring: { ...scoringPolicy, fullMarksMargin: { timing: 190e-9, voltage: 1.2 }, questionShare: 0.3 },
   reference: {
     solution: { main: { zeroHigh: 0.4e-6, oneHigh: 0.8e-6 } },
     mistakes: [

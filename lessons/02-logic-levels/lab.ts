@@ -1,4 +1,5 @@
 import type { LabInput } from "../schema";
+import { scoringPolicy } from "../scoring-policy";
 
 const direct = { id: "direct-3v3", label: "3.3 V controller pin, wired direct", highVoltage: 3.3, outputResistance: 30, edgeTime: 4e-9 };
 const shifted = { id: "shifter-5v", label: "Through a 5 V level shifter", highVoltage: 5, outputResistance: 20, edgeTime: 3e-9 };
@@ -45,14 +46,7 @@ Then answer the two questions about the margins.
     },
   ],
   passRule: { allBitsDecode: true, minTimingMargin: 100e-9, minVoltageMargin: 0.5 },
-  scoring: {
-    fullMarksMargin: { timing: 150e-9, voltage: 1.2 },
-    passBase: 60,
-    failCreditMax: 30,
-    questionShare: 0.3,
-    penaltyPerAttemptBeyond: 3,
-    penalty: 5,
-  },
+  scoring: { ...scoringPolicy, fullMarksMargin: { timing: 150e-9, voltage: 1.2 }, questionShare: 0.3 },
   reference: {
     solution: { main: { driver: "shifter-5v" } },
     mistakes: [

@@ -1,4 +1,5 @@
 import type { LabInput } from "../schema";
+import { scoringPolicy } from "../scoring-policy";
 
 export const lab = {
   slug: "rc-window",
@@ -30,14 +31,7 @@ Too little resistance and the edge overshoots the pixel's supply, driving curren
   ],
   questions: [],
   passRule: { allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.5, maxRiseTime: 120e-9, maxClampCurrent: 10e-3 },
-  scoring: {
-    fullMarksMargin: { timing: 180e-9, voltage: 1.2 },
-    passBase: 60,
-    failCreditMax: 30,
-    questionShare: 0,
-    penaltyPerAttemptBeyond: 3,
-    penalty: 5,
-  },
+  scoring: { ...scoringPolicy, fullMarksMargin: { timing: 180e-9, voltage: 1.2 }, questionShare: 0 },
   reference: {
     solution: { main: { seriesResistance: 220 } },
     mistakes: [

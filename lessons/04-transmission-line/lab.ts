@@ -1,4 +1,5 @@
 import type { LabInput } from "../schema";
+import { scoringPolicy } from "../scoring-policy";
 
 export const lab = {
   slug: "cable-spec",
@@ -53,14 +54,7 @@ Then answer the two questions. Use the catalogue table of the lesson.
     minVoltageMargin: 0.3,
     cableSpec: { minZ0: 85, maxZ0: 110, maxDelayPerMetre: 5.7e-9, maxCapacitancePerMetre: 65e-12 },
   },
-  scoring: {
-    fullMarksMargin: { timing: 160e-9, voltage: 0.6 },
-    passBase: 60,
-    failCreditMax: 30,
-    questionShare: 0.2,
-    penaltyPerAttemptBeyond: 3,
-    penalty: 5,
-  },
+  scoring: { ...scoringPolicy, fullMarksMargin: { timing: 160e-9, voltage: 0.6 }, questionShare: 0.2 },
   reference: {
     solution: { main: { cable: "beside-ground" } },
     mistakes: [

@@ -1,4 +1,5 @@
 import type { LabInput } from "../schema";
+import { scoringPolicy } from "../scoring-policy";
 
 export const lab = {
   slug: "overshoot-limit",
@@ -32,14 +33,7 @@ Predict first: what source resistance makes Γ_s = (R_src − Z0) / (R_src + Z0)
   ],
   questions: [],
   passRule: { allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.5, maxOvershoot: 0.1, maxRiseTime: 60e-9 },
-  scoring: {
-    fullMarksMargin: { timing: 180e-9, voltage: 1.2 },
-    passBase: 60,
-    failCreditMax: 30,
-    questionShare: 0,
-    penaltyPerAttemptBeyond: 3,
-    penalty: 5,
-  },
+  scoring: { ...scoringPolicy, fullMarksMargin: { timing: 180e-9, voltage: 1.2 }, questionShare: 0 },
   reference: {
     solution: { main: { seriesResistance: 330 } },
     mistakes: [

@@ -1,4 +1,5 @@
 import type { LabInput } from "../schema";
+import { scoringPolicy } from "../scoring-policy";
 
 export const lab = {
   slug: "lone-lead-termination",
@@ -32,14 +33,7 @@ Use the 3.3 V window of the lesson: R_src between about 0.25 × Z0 and 0.74 × Z
   ],
   questions: [],
   passRule: { allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.3, maxClampCurrent: 5e-3, rejectFilteredRinging: true },
-  scoring: {
-    fullMarksMargin: { timing: 180e-9, voltage: 0.9 },
-    passBase: 60,
-    failCreditMax: 30,
-    questionShare: 0,
-    penaltyPerAttemptBeyond: 3,
-    penalty: 5,
-  },
+  scoring: { ...scoringPolicy, fullMarksMargin: { timing: 180e-9, voltage: 0.9 }, questionShare: 0 },
   reference: {
     solution: { main: { seriesResistance: 150 } },
     mistakes: [

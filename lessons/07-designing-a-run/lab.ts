@@ -1,4 +1,5 @@
 import type { LabInput } from "../schema";
+import { scoringPolicy } from "../scoring-policy";
 
 export const lab = {
   slug: "beside-ground-termination",
@@ -28,14 +29,7 @@ Before you touch the workbench, work out the window: the first arrival 3.3 V × 
   ],
   questions: [],
   passRule: { allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.3, rejectFilteredRinging: true },
-  scoring: {
-    fullMarksMargin: { timing: 180e-9, voltage: 0.7 },
-    passBase: 60,
-    failCreditMax: 30,
-    questionShare: 0,
-    penaltyPerAttemptBeyond: 3,
-    penalty: 5,
-  },
+  scoring: { ...scoringPolicy, fullMarksMargin: { timing: 180e-9, voltage: 0.7 }, questionShare: 0 },
   reference: {
     solution: { main: { seriesResistance: 22.1 } },
     mistakes: [

@@ -1,4 +1,5 @@
 import type { LabInput } from "../schema";
+import { scoringPolicy } from "../scoring-policy";
 
 const pin = { id: "pin-3v3", label: "3.3 V controller pin", highVoltage: 3.3, outputResistance: 30, edgeTime: 4e-9 };
 const receiver = { supplyVoltage: 5 };
@@ -63,14 +64,7 @@ Work through lesson 7's steps for each run first: Z0 from the catalogue, the 3.3
   ],
   questions: [],
   passRule: { allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.3, rejectFilteredRinging: true },
-  scoring: {
-    fullMarksMargin: { timing: 180e-9, voltage: 0.7 },
-    passBase: 60,
-    failCreditMax: 30,
-    questionShare: 0,
-    penaltyPerAttemptBeyond: 3,
-    penalty: 5,
-  },
+  scoring: { ...scoringPolicy, fullMarksMargin: { timing: 180e-9, voltage: 0.7 }, questionShare: 0 },
   reference: {
     solution: { arch: { seriesResistance: 150 }, facade: { seriesResistance: 22 }, canopy: { seriesResistance: 20 } },
     mistakes: [
