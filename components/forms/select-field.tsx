@@ -1,3 +1,5 @@
+import { describedByIds, FieldFrame, fieldControlClass } from "./field-frame";
+
 type Option = { value: string; label: string };
 
 export function SelectField({
@@ -15,19 +17,14 @@ export function SelectField({
 }) {
   const id = `field-${name}`;
   return (
-    <div className="space-y-1.5">
-      <label htmlFor={id} className="block text-sm font-medium text-ink">
-        {label}
-      </label>
+    <FieldFrame id={id} label={label} error={error}>
       <select
         id={id}
         name={name}
         defaultValue={defaultValue}
         aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
-        className={`block w-full rounded-lg border bg-surface px-3 py-2.5 text-base text-ink focus:border-accent focus:ring-2 focus:ring-accent/25 focus:outline-none ${
-          error ? "border-danger" : "border-line-strong"
-        }`}
+        aria-describedby={describedByIds(id, { error })}
+        className={fieldControlClass(error)}
       >
         {options.map((option) => (
           <option key={option.value} value={option.value}>
@@ -35,11 +32,6 @@ export function SelectField({
           </option>
         ))}
       </select>
-      {error ? (
-        <p id={`${id}-error`} className="text-sm font-medium text-danger">
-          {error}
-        </p>
-      ) : null}
-    </div>
+    </FieldFrame>
   );
 }

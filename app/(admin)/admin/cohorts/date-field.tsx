@@ -1,3 +1,5 @@
+import { describedByIds, FieldFrame, fieldControlClass } from "@/components/forms/field-frame";
+
 /** A calendar date input with the same label, hint and error layout as the shared text fields. */
 export function DateField({
   label,
@@ -12,10 +14,7 @@ export function DateField({
 }) {
   const id = `field-${name}`;
   return (
-    <div className="space-y-1.5">
-      <label htmlFor={id} className="block text-sm font-medium text-ink">
-        {label}
-      </label>
+    <FieldFrame id={id} label={label} error={error}>
       <input
         id={id}
         name={name}
@@ -23,16 +22,9 @@ export function DateField({
         required
         defaultValue={defaultValue}
         aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
-        className={`block w-full rounded-lg border bg-surface px-3 py-2.5 text-base text-ink outline-none focus:border-accent focus:ring-2 focus:ring-accent/25 ${
-          error ? "border-danger" : "border-line-strong"
-        }`}
+        aria-describedby={describedByIds(id, { error })}
+        className={fieldControlClass(error)}
       />
-      {error ? (
-        <p id={`${id}-error`} className="text-sm font-medium text-danger">
-          {error}
-        </p>
-      ) : null}
-    </div>
+    </FieldFrame>
   );
 }

@@ -1,6 +1,7 @@
 "use client";
 
 import { useActionState } from "react";
+import { describedByIds, FieldFrame, fieldControlClass } from "@/components/forms/field-frame";
 import { FormAlert } from "@/components/forms/form-alert";
 import { SelectField } from "@/components/forms/select-field";
 import { SubmitButton } from "@/components/forms/submit-button";
@@ -12,10 +13,7 @@ import { submitBenchWork, type BenchFormState } from "./actions";
 function TextArea({ name, label, defaultValue, error, rows }: { name: string; label: string; defaultValue?: string; error?: string; rows: number }) {
   const id = `field-${name}`;
   return (
-    <div className="space-y-1.5">
-      <label htmlFor={id} className="block text-sm font-medium text-ink">
-        {label}
-      </label>
+    <FieldFrame id={id} label={label} error={error}>
       <textarea
         id={id}
         name={name}
@@ -23,17 +21,10 @@ function TextArea({ name, label, defaultValue, error, rows }: { name: string; la
         maxLength={2000}
         defaultValue={defaultValue}
         aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
-        className={`block w-full rounded-lg border bg-surface px-3 py-2.5 text-base text-ink outline-none focus:border-accent focus:ring-2 focus:ring-accent/25 ${
-          error ? "border-danger" : "border-line-strong"
-        }`}
+        aria-describedby={describedByIds(id, { error })}
+        className={fieldControlClass(error)}
       />
-      {error ? (
-        <p id={`${id}-error`} className="text-sm font-medium text-danger">
-          {error}
-        </p>
-      ) : null}
-    </div>
+    </FieldFrame>
   );
 }
 
