@@ -1,5 +1,6 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
+import { buffer5v } from "../drivers";
 
 export const lab = {
   slug: "timing-budget",
@@ -17,7 +18,7 @@ The bit period stays at 1.25 µs. A high time too close to the whole period leav
       id: "main",
       label: "Controller to first pixel",
       scenario: {
-        driver: { id: "buffer-5v", label: "5 V buffered output", highVoltage: 5, outputResistance: 20, edgeTime: 3e-9 },
+        driver: buffer5v,
         receiver: { supplyVoltage: 5 },
         signal: { pattern: { colours: [[40, 200, 90]], byteOrder: "GRB" }, bitPeriod: 1.25e-6, zeroHigh: 0.55e-6, oneHigh: 0.65e-6 },
         cable: "beside-ground",

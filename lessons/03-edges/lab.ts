@@ -1,5 +1,6 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
+import { buffer5v } from "../drivers";
 
 export const lab = {
   slug: "rc-window",
@@ -18,7 +19,7 @@ Too little resistance and the edge overshoots the pixel's supply, driving curren
       id: "main",
       label: "Controller to first pixel",
       scenario: {
-        driver: { id: "buffer-5v", label: "5 V buffered output", highVoltage: 5, outputResistance: 20, edgeTime: 3e-9 },
+        driver: buffer5v,
         receiver: { supplyVoltage: 5 },
         signal: { pattern: { bits: "0100110101100010" } },
         cable: "beside-ground",

@@ -1,5 +1,6 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
+import { controllerPin3v3 } from "../drivers";
 
 export const lab = {
   slug: "cable-spec",
@@ -22,7 +23,7 @@ Then answer the two questions. Use the catalogue table of the lesson.
       id: "main",
       label: "Controller to first pixel",
       scenario: {
-        driver: { id: "pin-3v3", label: "3.3 V controller pin", highVoltage: 3.3, outputResistance: 30, edgeTime: 4e-9 },
+        driver: controllerPin3v3,
         receiver: { supplyVoltage: 5 },
         signal: { pattern: { bits: "0100110101100010" } },
         cable: "lone-lead",

@@ -1,5 +1,6 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
+import { buffer5v } from "../drivers";
 
 export const lab = {
   slug: "overshoot-limit",
@@ -20,7 +21,7 @@ Predict first: what source resistance makes Γ_s = (R_src − Z0) / (R_src + Z0)
       id: "main",
       label: "Controller to first pixel",
       scenario: {
-        driver: { id: "buffer-5v", label: "5 V buffered output", highVoltage: 5, outputResistance: 20, edgeTime: 3e-9 },
+        driver: buffer5v,
         receiver: { supplyVoltage: 5 },
         signal: { pattern: { bits: "0100110101100010" } },
         cable: "lone-lead",

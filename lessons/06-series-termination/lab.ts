@@ -1,5 +1,6 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
+import { controllerPin3v3 } from "../drivers";
 
 export const lab = {
   slug: "lone-lead-termination",
@@ -20,7 +21,7 @@ Use the 3.3 V window of the lesson: R_src between about 0.25 × Z0 and 0.74 × Z
       id: "main",
       label: "Controller to first pixel",
       scenario: {
-        driver: { id: "pin-3v3", label: "3.3 V controller pin", highVoltage: 3.3, outputResistance: 30, edgeTime: 4e-9 },
+        driver: controllerPin3v3,
         receiver: { supplyVoltage: 5 },
         signal: { pattern: { bits: "0100110101100010" } },
         cable: "lone-lead",

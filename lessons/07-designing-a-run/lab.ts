@@ -1,5 +1,6 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
+import { controllerPin3v3 } from "../drivers";
 
 export const lab = {
   slug: "beside-ground-termination",
@@ -16,7 +17,7 @@ Before you touch the workbench, work out the window: the first arrival 3.3 V × 
       id: "main",
       label: "Controller to first pixel",
       scenario: {
-        driver: { id: "pin-3v3", label: "3.3 V controller pin", highVoltage: 3.3, outputResistance: 30, edgeTime: 4e-9 },
+        driver: controllerPin3v3,
         receiver: { supplyVoltage: 5 },
         signal: { pattern: { bits: "0100110101100010" } },
         cable: "beside-ground",

@@ -1,7 +1,8 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
+import { controllerPin3v3 } from "../drivers";
 
-const pin = { id: "pin-3v3", label: "3.3 V controller pin", highVoltage: 3.3, outputResistance: 30, edgeTime: 4e-9 };
+const pin = controllerPin3v3;
 const receiver = { supplyVoltage: 5 };
 
 export const lab = {
