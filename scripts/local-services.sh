@@ -4,7 +4,7 @@
 
 start_local_services() {
   local profile="$1" base
-  [ "$profile" = test ] && base=55000 || base=54000
+  [ "$profile" = test ] && base=$((55000 + ${TEST_PORT_OFFSET:-0})) || base=54000
   service_pids=()
 
   if [ -n "${SMTP_HOST:-}" ]; then

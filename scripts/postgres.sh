@@ -51,7 +51,7 @@ CONF
     require_free_port "$PGPORT" "the database needs it; set PGPORT to use another"
     step "Starting PostgreSQL on 127.0.0.1:$PGPORT"
     touch "$PGLOG"; [ "$(id -u)" -eq 0 ] && chown postgres:postgres "$PGLOG"
-    run_as_postgres "$BIN/pg_ctl" -D "$PGDATA" -l "$PGLOG" -w -t 60 start >/dev/null ||
+    run_as_postgres "$BIN/pg_ctl" -D "$PGDATA" -l "$PGLOG" -o "-p $PGPORT" -w -t 60 start >/dev/null ||
       fail "PostgreSQL did not start (see $PGLOG)."
   fi
   for _ in $(seq 1 100); do is_ready && break; sleep 0.1; done

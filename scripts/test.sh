@@ -7,10 +7,12 @@ source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
 mkdir -p "$DATA_DIR" test-results
 
-export PGPORT=54339 PGDATA="$DATA_DIR/pg-test" PG_EXTRA_CONF="fsync = off
+# TEST_PORT_OFFSET moves every port of this run, so two checkouts can test side by side.
+offset="${TEST_PORT_OFFSET:-0}"
+export PGPORT=$((54339 + offset)) PGDATA="$DATA_DIR/pg-test" PG_EXTRA_CONF="fsync = off
 synchronous_commit = off"
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/edgewise_test"
-export APP_PORT=3100
+export APP_PORT=$((3100 + offset))
 export APP_URL="http://127.0.0.1:$APP_PORT" E2E_BASE_URL="http://127.0.0.1:$APP_PORT"
 unset SMTP_HOST UPLOADTHING_TOKEN
 
@@ -39,16 +41,30 @@ pids+=("${service_pids[@]}")
 set +e
 
 reports=()
+# `npm test -- <file filters>` runs only the matching test files; the browser suite (and the
+# build it needs) then runs only when a filter names an e2e file.
+filters=("$@")
 run_vitest() {
-  local name="$1"; shift
+  local name="$1"
   step "Running the $name tests"
-  npx vitest run --project "$name" --reporter=default --reporter=json --outputFile.json="test-results/$name.json" --passWithNoTests "$@"
+  npx vitest run --project "$name" --reporter=default --reporter=json --outputFile.json="test-results/$name.json" --passWithNoTests "${filters[@]}"
   reports+=("test-results/$name.json")
+}
+wants_browser_suite() {
+  [ ${#filters[@]} -eq 0 ] && return 0
+  local filter
+  for filter in "${filters[@]}"; do [[ "$filter" == *e2e* ]] && return 0; done
+  return 1
 }
 
 run_vitest unit
 run_vitest integration
 run_vitest reference
+
+if ! wants_browser_suite; then
+  node scripts/test-summary.mjs "${reports[@]}"
+  exit $?
+fi
 
 step "Building the app for the browser tests"
 if npx next build >"$DATA_DIR/build-test.log" 2>&1; then

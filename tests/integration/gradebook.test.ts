@@ -228,7 +228,8 @@ describe("the progress grid from the database", () => {
   });
 
   it("flags a learner idle for a week", async () => {
-    const later = new Date(now.getTime() + 6 * day);
+    // Noon six days on, whatever the hour the suite runs: Ben's last work was two days ago at 10:00.
+    const later = daysAgo(-6, 12);
     const { gradebook } = (await loadCohortGradebook({ cohortId, viewer: viewerOf(instructor), now: later }))!;
     const ben = gradebook.rows.find((row) => row.learner.id === learners.ben.id)!;
     expect(ben.attention).toEqual([{ kind: "idle", idleDays: 8, lastActivityAt: daysAgo(2) }]);
