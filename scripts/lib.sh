@@ -38,6 +38,21 @@ ensure_node_modules() {
   fi
 }
 
+# Builds the production app unless .next already holds a build of the committed sources and
+# nothing under the app's folders has changed since.
+ensure_production_build() {
+  local stamp
+  stamp=$(cd "$ROOT" && git ls-files -s -- app components lessons lib db public next.config.ts tailwind.config.ts postcss.config.mjs package-lock.json 2>/dev/null | sha1sum | cut -c1-40)
+  if [ ! -f "$ROOT/.next/BUILD_ID" ] || [ "$(cat "$ROOT/.next/edgewise-source-stamp" 2>/dev/null)" != "$stamp" ] ||
+    [ -n "$(cd "$ROOT" && git status --porcelain -- app components lessons lib db 2>/dev/null)" ]; then
+    step "Building the app (next build, about a minute)"
+    (cd "$ROOT" && npx next build >"$DATA_DIR/build.log" 2>&1) || { tail -n 40 "$DATA_DIR/build.log"; fail "the build failed (full log: .data/build.log)."; }
+    echo "$stamp" >"$ROOT/.next/edgewise-source-stamp"
+  else
+    step "Build is up to date"
+  fi
+}
+
 # Wait for a TCP port to accept connections, up to N seconds.
 wait_for_port() {
   local port="$1" seconds="$2" what="$3"

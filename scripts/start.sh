@@ -41,14 +41,7 @@ start_local_services dev
 children+=("${service_pids[@]}")
 
 if [ "$MODE" = production ]; then
-  stamp=$(git ls-files -s -- app components lessons lib db public next.config.ts tailwind.config.ts postcss.config.mjs package-lock.json 2>/dev/null | sha1sum | cut -c1-40)
-  if [ ! -f .next/BUILD_ID ] || [ "$(cat .next/edgewise-source-stamp 2>/dev/null)" != "$stamp" ] || [ -n "$(git status --porcelain -- app components lessons lib db 2>/dev/null)" ]; then
-    step "Building the app (next build, about a minute)"
-    npx next build >"$DATA_DIR/build.log" 2>&1 || { tail -n 40 "$DATA_DIR/build.log"; fail "the build failed (full log: .data/build.log)."; }
-    echo "$stamp" >.next/edgewise-source-stamp
-  else
-    step "Build is up to date"
-  fi
+  ensure_production_build
   step "Serving Edgewise on http://127.0.0.1:$PORT (Ctrl-C stops it)"
   NODE_ENV=production start_background npx next start -H 127.0.0.1 -p "$PORT"
 else
