@@ -53,7 +53,7 @@ export async function startAppInstance(options: AppInstanceOptions): Promise<App
     maxBuffer: 16 * 1024 * 1024,
   });
   const env = readEnvFile(path.join(dataDir, `instance-${name}.env`));
-  const processEnv = { ...process.env, ...env } as Record<string, string>;
+  const processEnv: NodeJS.ProcessEnv = { ...process.env, ...env };
   const children = new Map<InstancePart, ChildProcess>();
 
   const postgres = (command: "up" | "stop") =>
@@ -61,7 +61,7 @@ export async function startAppInstance(options: AppInstanceOptions): Promise<App
 
   async function startPart(part: InstancePart): Promise<void> {
     const { args, port } = partCommands[part];
-    const partEnv = part === "app" ? { ...processEnv, NODE_ENV: "production", ...options.appEnv } : processEnv;
+    const partEnv: NodeJS.ProcessEnv = part === "app" ? { ...processEnv, NODE_ENV: "production", ...options.appEnv } : processEnv;
     const fullArgs = part === "app" ? [...args, "-p", env.APP_PORT] : args;
     const log = openSync(path.join(dataDir, `instance-${name}-${part}.log`), "a");
     // Own process group, so stopping the part also stops whatever it spawned.
