@@ -24,12 +24,14 @@ async function expectAlert(page: Page, text: string): Promise<void> {
   await page.getByRole("status").filter({ hasText: text }).waitFor({ timeout: 15_000 });
 }
 
-/** Clicks a submit button and waits for the server action's answer to arrive. */
+/**
+ * Clicks a submit button and waits for the server action's answer to arrive and be shown: React
+ * resets the form when the action settles, so typing into it before then can be wiped out.
+ */
 async function submit(page: Page, button: string): Promise<void> {
-  await Promise.all([
-    page.waitForResponse((response) => response.request().method() === "POST"),
-    page.getByRole("button", { name: button }).click(),
-  ]);
+  const submitButton = page.getByRole("button", { name: button, exact: true });
+  await Promise.all([page.waitForResponse((response) => response.request().method() === "POST"), submitButton.click()]);
+  await submitButton.and(page.locator(":enabled")).waitFor();
 }
 
 describe("invitation", () => {
