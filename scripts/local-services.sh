@@ -36,7 +36,7 @@ start_local_services() {
     step "Starting the local mail sink (SMTP 127.0.0.1:$SMTP_PORT, messages at $MAIL_SINK_URL)"
     start_background node scripts/mail-sink.mjs >"$DATA_DIR/mail-sink-$profile.log" 2>&1
     service_pids+=($!)
-    wait_for_port "$SMTP_PORT" 15 "The mail sink"
+    wait_for_port "$SMTP_PORT" 60 "The mail sink"
   fi
 
   if [ -n "${UPLOADTHING_TOKEN:-}" ]; then
@@ -50,7 +50,7 @@ start_local_services() {
     step "Starting the local upload fake (ingest $UPLOADTHING_INGEST_URL, API $UPLOADTHING_API_URL, files in .data/uploads-$profile)"
     start_background node scripts/upload-fake.mjs >"$DATA_DIR/upload-fake-$profile.log" 2>&1
     service_pids+=($!)
-    wait_for_port "$UPLOAD_FAKE_PORT" 15 "The upload fake"
-    wait_for_port "$UPLOAD_FAKE_API_PORT" 15 "The upload fake's file API"
+    wait_for_port "$UPLOAD_FAKE_PORT" 60 "The upload fake"
+    wait_for_port "$UPLOAD_FAKE_API_PORT" 60 "The upload fake's file API"
   fi
 }

@@ -14,9 +14,10 @@ export APP_URL="${APP_URL:-http://127.0.0.1:$PORT}"
 mkdir -p "$DATA_DIR"
 
 children=()
+service_pids=()  # filled by start_local_services as each stand-in starts
 cleanup() {
   trap - INT TERM EXIT
-  stop_background "${children[@]}"
+  stop_background "${children[@]}" "${service_pids[@]}"
   wait 2>/dev/null || true
   [ "${started_postgres:-0}" = 1 ] && bash scripts/postgres.sh stop
   exit 0
@@ -38,7 +39,6 @@ npx tsx scripts/seed.ts
 
 source scripts/local-services.sh
 start_local_services dev
-children+=("${service_pids[@]}")
 
 if [ "$MODE" = production ]; then
   ensure_production_build

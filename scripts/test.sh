@@ -17,8 +17,9 @@ export APP_URL="http://127.0.0.1:$APP_PORT" E2E_BASE_URL="http://127.0.0.1:$APP_
 unset SMTP_HOST UPLOADTHING_TOKEN
 
 pids=()
+service_pids=()  # filled by start_local_services as each stand-in starts
 cleanup() {
-  stop_background "${pids[@]}"
+  stop_background "${pids[@]}" "${service_pids[@]}"
   wait 2>/dev/null
   bash scripts/postgres.sh stop >/dev/null 2>&1
 }
@@ -37,7 +38,6 @@ npx tsx scripts/seed.ts >/dev/null
 
 source scripts/local-services.sh
 start_local_services test
-pids+=("${service_pids[@]}")
 set +e
 
 reports=()
