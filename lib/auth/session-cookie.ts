@@ -1,6 +1,6 @@
 import "server-only";
 import { cookies } from "next/headers";
-import { invalidateSession, type SessionCookie } from "./session-store";
+import { invalidateSession, validateSessionToken, type SessionCookie } from "./session-store";
 
 /** Only callable from server actions and route handlers: pages cannot set cookies. */
 export async function writeSessionCookie(cookie: SessionCookie): Promise<void> {
@@ -14,7 +14,8 @@ export async function writeSessionCookie(cookie: SessionCookie): Promise<void> {
  */
 export async function replaceSessionCookie(cookie: SessionCookie): Promise<void> {
   const previous = await readSessionToken(cookie.name);
-  if (previous && previous !== cookie.value) await invalidateSession(previous);
+  const held = previous && previous !== cookie.value ? await validateSessionToken(previous) : null;
+  if (held?.sessionId) await invalidateSession(held.sessionId);
   await writeSessionCookie(cookie);
 }
 

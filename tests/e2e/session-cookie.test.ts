@@ -100,6 +100,24 @@ describe("the session cookie", () => {
     }
   });
 
+  it("reads as signed out when mangled, on pages and route handlers alike, and does not stop a sign-in", async () => {
+    const { context, page } = await openPage(browser);
+    try {
+      // %00 decodes to a NUL byte, which the database refuses in text.
+      await context.addCookies([{ name: sessionCookieName, value: "%00", url: baseUrl }]);
+      for (const path of ["/", "/sign-in", "/learn", "/api/bench-photos/3f2b8c1e-9a4d-4e6b-8c7a-1d2e3f4a5b6c"]) {
+        const response = await page.goto(path);
+        expect(response!.status(), path).toBeLessThan(500);
+      }
+      await page.goto("/learn");
+      expect(new URL(page.url()).pathname).toBe("/sign-in");
+      await signInThroughForm(page, accounts[0]!);
+      expect(new URL(page.url()).pathname).toBe("/learn");
+    } finally {
+      await context.close();
+    }
+  });
+
   it("is replaced, and the earlier session ended, when someone signs in from a sign-in page left open", async () => {
     const { context, page } = await openPage(browser);
     try {
