@@ -59,24 +59,30 @@ function expectSafeFlags(cookie: SetCookie): void {
   expect(cookie.attributes.has("secure"), `${cookie.name} Secure over ${baseUrl}`).toBe(baseUrl.startsWith("https:"));
 }
 
+/** Runs `use` in a browser context of its own, closed afterwards whatever happens. */
+async function inFreshContext<T>(use: (opened: { context: BrowserContext; page: Page }) => Promise<T>): Promise<T> {
+  const opened = await openPage(browser);
+  try {
+    return await use(opened);
+  } finally {
+    await opened.context.close();
+  }
+}
+
 const sessionValueIn = async (context: BrowserContext) => (await context.cookies()).find((c) => c.name === sessionCookieName)?.value;
 
 /** Whether a browser holding only this session cookie value is let into the learner's home. */
-async function sessionOpensHome(value: string): Promise<boolean> {
-  const { context, page } = await openPage(browser);
-  try {
+function sessionOpensHome(value: string): Promise<boolean> {
+  return inFreshContext(async ({ context, page }) => {
     await context.addCookies([{ name: sessionCookieName, value, url: baseUrl }]);
     await page.goto("/learn");
     return !new URL(page.url()).pathname.startsWith("/sign-in");
-  } finally {
-    await context.close();
-  }
+  });
 }
 
 describe("the session cookie", () => {
   it("is set on sign-in HttpOnly, SameSite=Lax, Path=/, and never takes over a value the browser had before", async () => {
-    const { context, page } = await openPage(browser);
-    try {
+    await inFreshContext(async ({ context, page }) => {
       const planted = "planted0before0sign0in0aaaaaaaaaaaaaaaa";
       await context.addCookies([{ name: sessionCookieName, value: planted, url: baseUrl }]);
       const readSetCookies = collectSetCookies(page);
@@ -95,14 +101,11 @@ describe("the session cookie", () => {
       expect(await page.evaluate(() => document.cookie)).not.toContain(sessionCookieName);
       expect(await sessionOpensHome(issued[0]!.value)).toBe(true);
       expect(await sessionOpensHome(planted)).toBe(false);
-    } finally {
-      await context.close();
-    }
+    });
   });
 
   it("reads as signed out when mangled, on pages and route handlers alike, and does not stop a sign-in", async () => {
-    const { context, page } = await openPage(browser);
-    try {
+    await inFreshContext(async ({ context, page }) => {
       // %00 decodes to a NUL byte, which the database refuses in text.
       await context.addCookies([{ name: sessionCookieName, value: "%00", url: baseUrl }]);
       for (const path of ["/", "/sign-in", "/learn", "/api/bench-photos/3f2b8c1e-9a4d-4e6b-8c7a-1d2e3f4a5b6c"]) {
@@ -113,14 +116,11 @@ describe("the session cookie", () => {
       expect(new URL(page.url()).pathname).toBe("/sign-in");
       await signInThroughForm(page, accounts[0]!);
       expect(new URL(page.url()).pathname).toBe("/learn");
-    } finally {
-      await context.close();
-    }
+    });
   });
 
   it("is replaced, and the earlier session ended, when someone signs in from a sign-in page left open", async () => {
-    const { context, page } = await openPage(browser);
-    try {
+    await inFreshContext(async ({ context, page }) => {
       const staleForm = await context.newPage();
       await staleForm.goto("/sign-in");
       await signInThroughForm(page, accounts[0]!);
@@ -136,14 +136,11 @@ describe("the session cookie", () => {
       expect(second).not.toBe(first);
       expect(await sessionOpensHome(second)).toBe(true);
       expect(await sessionOpensHome(first)).toBe(false);
-    } finally {
-      await context.close();
-    }
+    });
   });
 
   it("is cleared on sign-out with the same flags, and the session it held stops working", async () => {
-    const { context, page } = await openPage(browser);
-    try {
+    await inFreshContext(async ({ context, page }) => {
       await signInThroughForm(page, accounts[1]!);
       const signedIn = (await sessionValueIn(context))!;
       const readSetCookies = collectSetCookies(page);
@@ -161,8 +158,6 @@ describe("the session cookie", () => {
 
       expect(await sessionValueIn(context)).toBeUndefined();
       expect(await sessionOpensHome(signedIn)).toBe(false);
-    } finally {
-      await context.close();
-    }
+    });
   });
 });
