@@ -6,20 +6,33 @@ import { lesson as reflections } from "./05-reflections";
 import { lesson as seriesTermination } from "./06-series-termination";
 import { lesson as designingARun } from "./07-designing-a-run";
 import { lesson as onTheBench } from "./08-on-the-bench";
-import type { CourseInput } from "./schema";
+import type { CourseInput, LessonInput } from "./schema";
 
 export const COURSE_FILE = "lessons/course.ts";
 
-/** Each lesson with the file it lives in, so a validation error can point at that file. */
+/** The parts of a lesson that live in their own file beside its index.ts. */
+export type LessonPart = "lab" | "bench";
+
+/** A lesson with the files it is written in, so a validation error can point at the file that holds the field. */
+export type LessonSource<L = unknown> = { file: string; lesson: L; partFiles: Partial<Record<LessonPart, string>> };
+
+function lessonFolder<L extends LessonInput>(folder: string, lesson: L, parts: readonly LessonPart[]): LessonSource<L> {
+  return {
+    file: `lessons/${folder}/index.ts`,
+    lesson,
+    partFiles: Object.fromEntries(parts.map((part) => [part, `lessons/${folder}/${part}.ts`])),
+  };
+}
+
 export const lessonSources = [
-  { file: "lessons/01-pixel-data-stream/index.ts", lesson: pixelDataStream },
-  { file: "lessons/02-logic-levels/index.ts", lesson: logicLevels },
-  { file: "lessons/03-edges/index.ts", lesson: edges },
-  { file: "lessons/04-transmission-line/index.ts", lesson: transmissionLine },
-  { file: "lessons/05-reflections/index.ts", lesson: reflections },
-  { file: "lessons/06-series-termination/index.ts", lesson: seriesTermination },
-  { file: "lessons/07-designing-a-run/index.ts", lesson: designingARun },
-  { file: "lessons/08-on-the-bench/index.ts", lesson: onTheBench },
+  lessonFolder("01-pixel-data-stream", pixelDataStream, ["lab"]),
+  lessonFolder("02-logic-levels", logicLevels, ["lab"]),
+  lessonFolder("03-edges", edges, ["lab"]),
+  lessonFolder("04-transmission-line", transmissionLine, ["lab"]),
+  lessonFolder("05-reflections", reflections, ["lab"]),
+  lessonFolder("06-series-termination", seriesTermination, ["lab"]),
+  lessonFolder("07-designing-a-run", designingARun, ["lab", "bench"]),
+  lessonFolder("08-on-the-bench", onTheBench, ["lab", "bench"]),
 ] as const;
 
 export const course = {

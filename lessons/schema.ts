@@ -9,6 +9,22 @@ const volts = z.number().positive().max(12);
 const ohms = z.number().min(0).max(100_000);
 const fraction = z.number().gt(0).lt(1);
 
+type Keyed = { value: string; path: (string | number)[]; where: string };
+
+/** Flags each value met before at its own path, naming where it was first used: ids and slugs key stored work. */
+function flagRepeats(ctx: z.RefinementCtx, items: readonly Keyed[]): void {
+  const first = new Map<string, string>();
+  for (const item of items) {
+    const earlier = first.get(item.value);
+    if (earlier === undefined) first.set(item.value, item.where);
+    else ctx.addIssue({ code: "custom", path: item.path, message: `"${item.value}" is already used by ${earlier}` });
+  }
+}
+
+/** Items' `id` fields, each at its path in the list at `list`. */
+const idsAt = (list: string, items: readonly { id: string }[]): Keyed[] =>
+  items.map((item, i) => ({ value: item.id, path: [list, i, "id"], where: `${list}.${i}.id` }));
+
 /**
  * A numeric answer: `value` in SI base units, `unit` the mathjs unit the learner is expected to
  * type in ("ns", "ohm", "pF/m", "V", "Hz", "s"; "" for a plain number). The learner's entry is
@@ -249,7 +265,8 @@ export const labSchema = z
   })
   .superRefine((lab, ctx) => {
     const ids = lab.runs.map((r) => r.id);
-    if (new Set(ids).size !== ids.length) ctx.addIssue({ code: "custom", path: ["runs"], message: "run ids must be unique" });
+    flagRepeats(ctx, idsAt("runs", lab.runs));
+    flagRepeats(ctx, idsAt("questions", lab.questions));
     if (lab.questions.length === 0 && lab.scoring.questionShare > 0) {
       ctx.addIssue({ code: "custom", path: ["scoring", "questionShare"], message: "must be 0 when the lab asks no questions" });
     }
@@ -271,14 +288,19 @@ export const benchAskSchema = z.strictObject({
   unit: z.string(),
 });
 
-export const benchExerciseSchema = z.strictObject({
-  slug,
-  title: z.string().trim().min(1),
-  brief: markdown,
-  asks: z.array(benchAskSchema).min(1),
-  photo: z.strictObject({ required: z.boolean(), mustShow: z.array(z.string().trim().min(1)).min(1) }),
-  rubric: z.array(z.strictObject({ id: slug, criterion: z.string().trim().min(1), points: z.number().int().positive() })).min(1),
-});
+export const benchExerciseSchema = z
+  .strictObject({
+    slug,
+    title: z.string().trim().min(1),
+    brief: markdown,
+    asks: z.array(benchAskSchema).min(1),
+    photo: z.strictObject({ required: z.boolean(), mustShow: z.array(z.string().trim().min(1)).min(1) }),
+    rubric: z.array(z.strictObject({ id: slug, criterion: z.string().trim().min(1), points: z.number().int().positive() })).min(1),
+  })
+  .superRefine((bench, ctx) => {
+    flagRepeats(ctx, idsAt("asks", bench.asks));
+    flagRepeats(ctx, idsAt("rubric", bench.rubric));
+  });
 
 export const lessonSchema = z
   .strictObject({
@@ -292,11 +314,11 @@ export const lessonSchema = z
     bench: benchExerciseSchema.optional(),
   })
   .superRefine((lesson, ctx) => {
-    const ids = lesson.blocks.flatMap((b) => (b.kind === "check" ? [b.id] : []));
-    if (ids.length < 3 || ids.length > 6) {
-      ctx.addIssue({ code: "custom", path: ["blocks"], message: `a lesson needs 3 to 6 quick checks, found ${ids.length}` });
+    const checks = lesson.blocks.flatMap((b, i) => (b.kind === "check" ? [{ value: b.id, path: ["blocks", i, "id"], where: `blocks.${i}.id` }] : []));
+    if (checks.length < 3 || checks.length > 6) {
+      ctx.addIssue({ code: "custom", path: ["blocks"], message: `a lesson needs 3 to 6 quick checks, found ${checks.length}` });
     }
-    if (new Set(ids).size !== ids.length) ctx.addIssue({ code: "custom", path: ["blocks"], message: "check ids must be unique" });
+    flagRepeats(ctx, checks);
   });
 
 export const courseSchema = z
@@ -323,8 +345,16 @@ export const courseSchema = z
     course.completion.benchExercises.forEach((slugValue, i) => {
       if (!benches.has(slugValue)) ctx.addIssue({ code: "custom", path: ["completion", "benchExercises", i], message: `no bench exercise "${slugValue}"` });
     });
-    const slugs = course.lessons.map((l) => l.slug);
-    if (new Set(slugs).size !== slugs.length) ctx.addIssue({ code: "custom", path: ["lessons"], message: "lesson slugs must be unique" });
+    // Lessons, labs and bench exercises are stored and linked by slug, each kind in its own table.
+    const slugsOf = (part: "lab" | "bench" | null) =>
+      course.lessons.flatMap((lesson, i) => {
+        const owner = part ? lesson[part] : lesson;
+        const where = `lesson ${lesson.number}${part ? `'s ${part}` : ""}`;
+        return owner ? [{ value: owner.slug, path: part ? ["lessons", i, part, "slug"] : ["lessons", i, "slug"], where }] : [];
+      });
+    flagRepeats(ctx, slugsOf(null));
+    flagRepeats(ctx, slugsOf("lab"));
+    flagRepeats(ctx, slugsOf("bench"));
   });
 
 export type NumericAnswer = z.infer<typeof numericAnswerSchema>;

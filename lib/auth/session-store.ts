@@ -31,6 +31,10 @@ export type SessionCookie = {
 
 export const sessionCookieName = "edgewise_session";
 
+// The library's session ids are 40 base32 characters; a cookie value of any other shape is not
+// looked up, so a mangled one (a NUL byte, which PostgreSQL refuses in text) reads as no session.
+const possibleSessionToken = /^[a-z0-9]{1,64}$/;
+
 function createLucia() {
   return new Lucia(new DrizzlePostgreSQLAdapter(db, sessions, users), {
     sessionExpiresIn: new TimeSpan(30, "d"),
@@ -72,6 +76,7 @@ export type ValidatedSession =
 
 /** Looks the token up; a session of a deactivated user counts as no session. */
 export async function validateSessionToken(token: string): Promise<ValidatedSession> {
+  if (!possibleSessionToken.test(token)) return { user: null, sessionId: null, refreshedCookie: getLucia().createBlankSessionCookie() };
   const { session, user } = await getLucia().validateSession(token);
   if (!session) return { user: null, sessionId: null, refreshedCookie: getLucia().createBlankSessionCookie() };
   if (!user.active) {

@@ -4,6 +4,8 @@ import { findBenchPhotoForViewer } from "@/db/queries/bench";
 import type { SessionUser } from "@/lib/auth/session-store";
 import { AppError } from "@/lib/http/errors";
 import { errorResponse } from "@/lib/http/respond";
+import { downloadNameOf, inlineContentDisposition } from "@/lib/uploads/file-names";
+import { isImageContentType } from "@/lib/uploads/image-content";
 import { fetchStoredFile } from "@/lib/uploads/stored-files";
 
 /**
@@ -24,6 +26,9 @@ async function streamVisiblePhoto(params: { photoId: string; viewer: SessionUser
   const photo = await findBenchPhotoForViewer({ photoId: params.photoId, viewer: params.viewer });
   if (!photo) return errorResponse(new AppError("not-found"));
 
+  // Only a row the content check wrote is served, and always as the image type it found.
+  if (!isImageContentType(photo.contentType)) return errorResponse(new AppError("not-found"));
+
   const stored = await fetchStoredFile(photo.fileKey);
   if (!stored.ok || !stored.body) {
     console.error(`The upload service answered ${stored.status} for bench photo ${photo.id}`);
@@ -33,7 +38,7 @@ async function streamVisiblePhoto(params: { photoId: string; viewer: SessionUser
     headers: {
       "content-type": photo.contentType,
       "content-length": String(photo.size),
-      "content-disposition": `inline; filename*=UTF-8''${encodeURIComponent(photo.name)}`,
+      "content-disposition": inlineContentDisposition(downloadNameOf(photo.name, photo.contentType)),
       // Only this viewer's browser may keep it; a shared cache must not.
       "cache-control": "private, max-age=3600",
       "x-content-type-options": "nosniff",

@@ -1,4 +1,5 @@
-import { imageContentTypes } from "@/lib/uploads/image-content";
+import { displayNameOf } from "@/lib/uploads/file-names";
+import { imageContentTypes, isImageContentType } from "@/lib/uploads/image-content";
 
 // One set of limits for the page (instant messages before anything is sent), the upload route
 // (the rule) and the upload service's own file route configuration.
@@ -29,13 +30,14 @@ export function refuseDeclaredPhotos(files: readonly DeclaredFile[], stored: num
       : `A submission holds at most ${benchPhotoLimits.maxPhotos} photos: you can add ${room} more.`;
   }
   for (const file of files) {
-    if (!(benchPhotoLimits.contentTypes as readonly string[]).includes(file.type)) {
-      return `“${file.name}” is not a PNG, JPEG or WebP image. Photograph the scope screen and upload the photo itself.`;
+    const name = displayNameOf(file.name);
+    if (!isImageContentType(file.type)) {
+      return `“${name}” is not a PNG, JPEG or WebP image. Photograph the scope screen and upload the photo itself.`;
     }
     if (file.size > benchPhotoLimits.maxBytes) {
-      return `“${file.name}” is larger than ${formatFileSize(benchPhotoLimits.maxBytes)}, the most a photo may be. Save it smaller and try again.`;
+      return `“${name}” is larger than ${formatFileSize(benchPhotoLimits.maxBytes)}, the most a photo may be. Save it smaller and try again.`;
     }
-    if (file.size === 0) return `“${file.name}” is empty.`;
+    if (file.size === 0) return `“${name}” is empty (0 bytes). Choose the photo file itself and try again.`;
   }
   return null;
 }

@@ -1,13 +1,15 @@
 import "server-only";
 import { countBenchPhotos, editableBenchStatuses, findBenchSubmissionOfLearner, storeBenchPhoto } from "@/db/queries/bench";
 import type { SessionUser } from "@/lib/auth/session-store";
+import { displayNameOf } from "@/lib/uploads/file-names";
 import { readImageContent } from "@/lib/uploads/image-content";
 import { deleteStoredFiles, fetchStoredFile } from "@/lib/uploads/stored-files";
 import { benchPhotoLimits, formatFileSize, refuseDeclaredPhotos, type DeclaredFile } from "./photo-limits";
 
 // The two halves of a bench photo upload. Before anything is sent, the upload route asks whether
 // this learner may add these files to this submission. Once the service holds the bytes, they are
-// read back and checked; only a real image becomes a row, and anything else is deleted again.
+// read back and checked; only a real image, and nothing else, becomes a row (under the service's
+// own key and a cleaned display name); anything else is deleted again.
 
 export type UploadRefusal = { code: "FORBIDDEN" | "NOT_FOUND" | "BAD_REQUEST"; message: string };
 
@@ -54,28 +56,34 @@ export async function acceptUploadedBenchPhoto(params: {
   file: UploadedFile;
 }): Promise<UploadOutcome> {
   const { file } = params;
+  const name = displayNameOf(file.name);
   const reject = async (reason: string): Promise<UploadOutcome> => {
     await deleteStoredFiles([file.key]).catch((error: unknown) => console.error(`Could not delete refused upload ${file.key}`, error));
     return { rejected: reason };
   };
   try {
     const bytes = await readStoredBytes(file.key);
-    if (!bytes) return await reject(`“${file.name}” could not be read back from storage. Try again.`);
-    if (bytes.length > benchPhotoLimits.maxBytes) return await reject(`“${file.name}” is larger than ${formatFileSize(benchPhotoLimits.maxBytes)}, so it was not kept.`);
-    const image = readImageContent(bytes);
-    if (!image) {
-      return await reject(`“${file.name}” is not a PNG, JPEG or WebP image, whatever its name says, so it was not kept.`);
+    if (!bytes) return await reject(`“${name}” could not be read back from storage. Try again.`);
+    if (bytes.length > benchPhotoLimits.maxBytes) return await reject(`“${name}” is larger than ${formatFileSize(benchPhotoLimits.maxBytes)}, so it was not kept.`);
+    const reading = readImageContent(bytes);
+    if (!reading) return await reject(`“${name}” is not a PNG, JPEG or WebP image, whatever its name says, so it was not kept.`);
+    const { end, ...image } = reading;
+    if (end < bytes.length) {
+      // Phones' motion photos append a video this way, and so do files built to pass as an image.
+      return await reject(
+        `“${name}” carries other data after the end of the picture, so it was not kept. Save or export it as a plain still photo and upload that.`,
+      );
     }
     const stored = await storeBenchPhoto({
       submissionId: params.submissionId,
       learnerId: params.learnerId,
       maxPhotos: benchPhotoLimits.maxPhotos,
-      photo: { fileKey: file.key, name: file.name.slice(0, 200), size: bytes.length, ...image },
+      photo: { fileKey: file.key, name, size: bytes.length, ...image },
     });
     if (stored.status !== "stored") return await reject(refusals[stored.status]);
     return { photoId: stored.photo.id };
   } catch (error) {
     console.error(`Could not record uploaded bench photo ${file.key}`, error);
-    return reject(`“${file.name}” could not be stored. Try again in a moment.`);
+    return reject(`“${name}” could not be stored. Try again in a moment.`);
   }
 }

@@ -1,5 +1,6 @@
 import "server-only";
-import { sessionCookieName, validateSessionToken, type SessionUser } from "@/lib/auth/session-store";
+import { readSessionTokenOfRequest } from "@/lib/auth/request-session-token";
+import { validateSessionToken, type SessionUser } from "@/lib/auth/session-store";
 
 /**
  * The signed-in user behind a request, read from its Cookie header. Route handlers that serve
@@ -7,23 +8,7 @@ import { sessionCookieName, validateSessionToken, type SessionUser } from "@/lib
  * wherever the request object comes from.
  */
 export async function findViewerOfRequest(request: Request): Promise<SessionUser | null> {
-  const token = readCookie(request.headers.get("cookie"), sessionCookieName);
+  const token = readSessionTokenOfRequest(request);
   if (!token) return null;
   return (await validateSessionToken(token)).user;
-}
-
-function readCookie(header: string | null, name: string): string | null {
-  for (const part of header?.split(";") ?? []) {
-    const cut = part.indexOf("=");
-    if (cut > 0 && part.slice(0, cut).trim() === name) return decodeCookieValue(part.slice(cut + 1).trim());
-  }
-  return null;
-}
-
-function decodeCookieValue(value: string): string | null {
-  try {
-    return decodeURIComponent(value);
-  } catch {
-    return null;
-  }
 }

@@ -10,7 +10,9 @@ import { GET as getBenchPhoto } from "@/app/api/bench-photos/[photoId]/route";
 import { db } from "@/db/client";
 import { benchPhotos, benchSubmissions } from "@/db/schema";
 import { openBenchDraft } from "@/lib/bench/submissions";
+import { concatBytes, gifScript, htmlPayload, svgWithScript, zipArchive } from "../support/uploads/hidden-payloads";
 import { noisyPhoto } from "../support/uploads/noisy-photo";
+import { plainJpeg } from "../support/uploads/plain-jpeg";
 import { createBenchSchool, type BenchSchool, type SignedIn } from "./support/bench-people";
 import { startBenchUploadService, type BenchUploadService } from "./support/bench-upload-service";
 
@@ -18,7 +20,7 @@ let service: BenchUploadService;
 let people: BenchSchool;
 
 const photo = noisyPhoto(320, 240);
-const pngFile = (name = "scope-edge.png", bytes: Uint8Array = photo) => new File([new Uint8Array(bytes)], name, { type: "image/png" });
+const pngFile = (name = "scope-edge.png", bytes: Uint8Array = photo, type = "image/png") => new File([new Uint8Array(bytes)], name, { type });
 
 async function learnerWithDraft(): Promise<{ learner: SignedIn; submissionId: string }> {
   const learner = await people.createMember(people.homeCohortId, "learner", "bench-uploader");
@@ -119,6 +121,85 @@ describe("a bench photo upload", () => {
     await db.update(benchSubmissions).set({ status: "submitted" }).where(eq(benchSubmissions.id, submissionId));
     await expect(attempt(learner.cookie)).rejects.toThrow(/with your instructor/);
     expect(await photosOf(submissionId)).toEqual([]);
+  });
+});
+
+describe("a hostile bench photo upload", () => {
+  /** Uploads expecting a refusal and checks that neither the database nor the fake's directory changed. */
+  async function expectRefusedAndNothingKept(file: File, reason: RegExp): Promise<void> {
+    const { learner, submissionId } = await learnerWithDraft();
+    const before = service.storedFiles();
+    const outcome = await service.upload({ files: [file], submissionId, cookie: learner.cookie }).then(
+      ([result]) => result.serverData,
+      (error: Error) => ({ thrown: error.message }),
+    );
+    expect(JSON.stringify(outcome)).toMatch(reason);
+    expect(await photosOf(submissionId)).toEqual([]);
+    expect(service.storedFiles()).toEqual(before);
+  }
+
+  it("refuses an empty file before anything is sent to storage", async () => {
+    await expectRefusedAndNothingKept(pngFile("empty.png", new Uint8Array()), /“empty\.png” is empty \(0 bytes\)/);
+  });
+
+  const trailing = /carries other data after the end of the picture, so it was not kept/;
+  const notAnImage = /is not a PNG, JPEG or WebP image/;
+  it.each([
+    ["a PNG with an HTML page after IEND", () => pngFile("edge.png", concatBytes(photo, htmlPayload)), trailing],
+    ["a PNG with a ZIP archive after IEND", () => pngFile("edge.png", concatBytes(photo, zipArchive("run.html", htmlPayload))), trailing],
+    ["a PNG with a single stray byte after IEND", () => pngFile("edge.png", concatBytes(photo, new Uint8Array([0]))), trailing],
+    ["a JPEG with a script after EOI", () => pngFile("edge.jpg", concatBytes(plainJpeg(320, 240), htmlPayload), "image/jpeg"), trailing],
+    ["a GIF that is also a script, named and declared as a PNG", () => pngFile("edge.png", gifScript), notAnImage],
+    ["an SVG with a script, named and declared as a PNG", () => pngFile("edge.png", svgWithScript), notAnImage],
+    ["a PNG whose chunks stop before IEND", () => pngFile("edge.png", photo.subarray(0, photo.length - 12)), notAnImage],
+  ])("refuses %s and keeps nothing", async (_label, file, reason) => {
+    await expectRefusedAndNothingKept(file(), reason);
+  });
+
+  it("stores the same JPEG without the appended script, so the refusal is about what follows EOI", async () => {
+    const { learner, submissionId } = await learnerWithDraft();
+    const [result] = await service.upload({ files: [pngFile("edge.jpg", plainJpeg(320, 240), "image/jpeg")], submissionId, cookie: learner.cookie });
+    expect(result.serverData).toEqual({ photoId: expect.any(String) });
+    expect(await photosOf(submissionId)).toMatchObject([{ contentType: "image/jpeg", width: 320, height: 240 }]);
+  });
+
+  it.each([
+    ["../../etc/passwd.png", "passwd.png", "passwd.png"],
+    ["a/b.png", "b.png", "b.png"],
+    ["a\\b.png", "b.png", "b.png"],
+    ["C:\\Users\\bench\\scope.png", "scope.png", "scope.png"],
+    ["scope\u0000edge.png", "scopeedge.png", "scopeedge.png"],
+    ["scope\u001b[2J\u0007 \r\n edge.png", "scope[2J edge.png", "scope[2J edge.png"],
+    ["scope\u202egnp.html", "scopegnp.html", "scopegnp.png"],
+    ["../..", "photo", "photo.png"],
+    [`${"long-".repeat(60)}edge.png`, `${"long-".repeat(60).slice(0, 116)}.png`, `${"long-".repeat(60).slice(0, 116)}.png`],
+  ])("stores a photo named %j under the service's own key as %j, never as a path", async (uploadedName, displayName, savedName) => {
+    const { learner, submissionId } = await learnerWithDraft();
+    const before = new Set(service.storedFiles());
+    const [result] = await service.upload({ files: [pngFile(uploadedName)], submissionId, cookie: learner.cookie });
+
+    const rows = await photosOf(submissionId);
+    expect(rows).toMatchObject([{ fileKey: result.key, name: displayName }]);
+    expect(result.key).toMatch(/^[A-Za-z0-9_-]+$/);
+    expect(service.storedFiles().filter((entry) => !before.has(entry))).toEqual([result.key, `${result.key}.json`].sort());
+
+    const served = await photoRequest(rows[0]!.id, learner.cookie);
+    expect(served.status).toBe(200);
+    expect(served.headers.get("content-disposition")).toBe(`inline; filename="${savedName}"; filename*=UTF-8''${encodeURIComponent(savedName)}`);
+  });
+
+  it("serves a photo named .html as a fixed image type that the browser may not sniff, saved under an image name", async () => {
+    const { learner, submissionId } = await learnerWithDraft();
+    await service.upload({ files: [pngFile("mesures d’écho.html")], submissionId, cookie: learner.cookie });
+    const [row] = await photosOf(submissionId);
+    expect(row!.name).toBe("mesures d’écho.html");
+
+    const served = await photoRequest(row!.id, learner.cookie);
+    expect(served.status).toBe(200);
+    expect(served.headers.get("content-type")).toBe("image/png");
+    expect(served.headers.get("x-content-type-options")).toBe("nosniff");
+    // RFC 6266 §4.3: an ASCII fallback and the exact name, each ending in the type's own extension.
+    expect(served.headers.get("content-disposition")).toBe(`inline; filename="mesures d__cho.png"; filename*=UTF-8''mesures%20d%E2%80%99%C3%A9cho.png`);
   });
 });
 

@@ -2,7 +2,8 @@
  * Hostile input against every route handler under app/api, called directly with a Request that
  * carries a real session cookie: random and malformed bodies (wrong types, huge strings, deep
  * nesting, prototype-pollution keys, invalid JSON, wrong content types) and hostile route
- * parameters. Never a 500, never a stack trace, a 4xx with a readable message, and no row written.
+ * parameters, and Cookie headers whose session value is mangled. Never a 500, never a stack trace,
+ * a 4xx with a readable message, and no row written.
  */
 import { readdirSync } from "node:fs";
 import path from "node:path";
@@ -151,6 +152,13 @@ const hostileParam = fc.oneof(
   fc.constantFrom("../../etc/passwd", "..%2F..%2F", "%00", "' or '1'='1", "<script>x</script>", "x".repeat(10_000), "NaN", "-1", " ", "\n"),
 );
 
+// A session cookie as a browser extension, a proxy or an attacker might mangle it.
+const hostileCookie = fc.oneof(
+  fc.constantFrom("%", "%E0%A4%A", "%zz", "%00", "", "=", "a=b=c", "x".repeat(8_000), "' or '1'='1", '"quoted"', "\\u0000"),
+  fc.string({ maxLength: 200 }).map(encodeURIComponent),
+  fc.string({ maxLength: 200 }).filter((value) => !/[;\r\n\0]/.test(value)),
+).map((value) => `edgewise_session=${value}`);
+
 beforeAll(async () => {
   const learner = await createPerson({ role: "learner", password: "hostile bodies", label: "hostile" });
   learnerId = learner.id;
@@ -222,6 +230,27 @@ describe("hostile input on every route handler", () => {
     );
     expect(await rowsWritten()).toEqual(before);
     expect(uploads.storedKeys()).toHaveLength(keysBefore);
+  });
+
+  it("answers a mangled session cookie on every route handler as no session: never a 500", async () => {
+    for (const [route, { params }] of Object.entries(routeTable)) {
+      const handlers = await loadRoute(route);
+      const routeParams = Object.fromEntries(params.map((name) => [name, name === "labSlug" ? LAB : "3f2b8c1e-9a4d-4e6b-8c7a-1d2e3f4a5b6c"]));
+      await fc.assert(
+        fc.asyncProperty(hostileCookie, fc.constantFrom(...(["GET", "POST"] as const).filter((method) => handlers[method])), async (cookie, method) => {
+          const request = new Request(`http://app.test/api/${route}`, {
+            method,
+            headers: { cookie, "content-type": "application/json" },
+            ...(method === "POST" ? { body: "{}" } : {}),
+          });
+          const response = await handlers[method]!(request, { params: Promise.resolve(routeParams) });
+          const text = await response.text();
+          expect(response.status, `${method} ${route} with ${cookie.slice(0, 80)} → ${text.slice(0, 200)}`).toBeLessThan(500);
+          expectNoInternals(text);
+        }),
+        { numRuns: Math.ceil(runs / 5) },
+      );
+    }
   });
 
   it("answers hostile route parameters on every GET handler without a 500 or a stack trace", async () => {

@@ -6,7 +6,7 @@ import { safeReturnPath } from "@/lib/auth/access";
 import { readClientAddress } from "@/lib/auth/client-address";
 import { emailSchema } from "@/lib/auth/fields";
 import { homePathFor } from "@/lib/auth/permissions";
-import { writeSessionCookie } from "@/lib/auth/session-cookie";
+import { replaceSessionCookie } from "@/lib/auth/session-cookie";
 import { signInWithPassword, type SignInResult } from "@/lib/auth/sign-in";
 import {
   failedFormState,
@@ -46,6 +46,6 @@ export async function signIn(_previous: SignInState, formData: FormData): Promis
   }
   if (!result.ok) return failedFormState("That e-mail and password do not match an account. Check both and try again.", values);
 
-  await writeSessionCookie(result.cookie);
+  await replaceSessionCookie(result.cookie);
   redirect(safeReturnPath(parsed.data.next) ?? homePathFor(result.user.role));
 }

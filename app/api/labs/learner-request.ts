@@ -1,7 +1,8 @@
 import "server-only";
 import type { NextResponse } from "next/server";
 import { decideRoleAccess } from "@/lib/auth/access";
-import { sessionCookieName, validateSessionToken, type SessionCookie, type SessionUser } from "@/lib/auth/session-store";
+import { readSessionTokenOfRequest } from "@/lib/auth/request-session-token";
+import { validateSessionToken, type SessionCookie, type SessionUser } from "@/lib/auth/session-store";
 import { getLab, getLessonOfLab, type Lab } from "@/lessons";
 import { AppError } from "@/lib/http/errors";
 import { findLessonProgressView } from "@/lib/progress";
@@ -9,19 +10,10 @@ import { findLessonProgressView } from "@/lib/progress";
 // Route handlers answer in JSON: no redirect to sign-in and no 403 page, but 401 and 403 bodies.
 // The session is read from the request itself, so the handlers run the same under a test.
 
-function sessionToken(request: Request): string | null {
-  const header = request.headers.get("cookie") ?? "";
-  for (const part of header.split(";")) {
-    const [name, ...value] = part.trim().split("=");
-    if (name === sessionCookieName) return decodeURIComponent(value.join("="));
-  }
-  return null;
-}
-
 export type LearnerRequest = { user: SessionUser; refreshedCookie: SessionCookie | null };
 
 export async function requireLearner(request: Request): Promise<LearnerRequest> {
-  const token = sessionToken(request);
+  const token = readSessionTokenOfRequest(request);
   const session = token ? await validateSessionToken(token) : null;
   const decision = decideRoleAccess(session?.user ?? null, ["learner"]);
   if (decision === "sign-in") throw new AppError("unauthenticated");

@@ -20,6 +20,8 @@ export type BenchUploadService = {
   apiKey: string;
   fakeUrl: string;
   routeUrl: string;
+  /** Every entry in the fake's directory: stored files, their metadata and unfinished parts. */
+  storedFiles: () => string[];
   storedKeys: () => string[];
   upload: (params: { files: File[]; submissionId: string; cookie?: string }) => ReturnType<ReturnType<typeof genUploader<UploadRouter>>["uploadFiles"]>;
   stop: () => Promise<void>;
@@ -53,6 +55,7 @@ export async function startBenchUploadService(): Promise<BenchUploadService> {
     apiKey,
     fakeUrl: fake.url,
     routeUrl,
+    storedFiles: () => readdirSync(dir).sort(),
     storedKeys: () => readdirSync(dir).filter((name) => !name.includes(".")),
     upload: ({ files, submissionId, cookie }) =>
       uploadFiles("benchPhoto", { files, input: { submissionId }, headers: cookie ? { cookie } : {} }),

@@ -14,8 +14,10 @@ export type RunningUploadFake = {
   stop: () => Promise<void>;
 };
 
+// A private fake listens on its one port only: the API port exported for the suite's own fake
+// (scripts/local-services.sh) is already taken by it.
 function environment({ token, dir, port = 0 }: UploadFakeSettings) {
-  return { ...process.env, UPLOADTHING_TOKEN: token, UPLOAD_FAKE_DIR: dir, UPLOAD_FAKE_PORT: String(port) };
+  return { ...process.env, UPLOADTHING_TOKEN: token, UPLOAD_FAKE_DIR: dir, UPLOAD_FAKE_PORT: String(port), UPLOAD_FAKE_API_PORT: "" };
 }
 
 export function startUploadFake(settings: UploadFakeSettings): Promise<RunningUploadFake> {

@@ -5,7 +5,7 @@ import { z } from "zod";
 import { newPasswordSchema, personNameSchema, tokenSchema, withMatchingPasswords } from "@/lib/auth/fields";
 import { acceptInvitation, type AcceptInvitationResult } from "@/lib/auth/invitations";
 import { homePathFor } from "@/lib/auth/permissions";
-import { writeSessionCookie } from "@/lib/auth/session-cookie";
+import { replaceSessionCookie } from "@/lib/auth/session-cookie";
 import {
   failedFormState,
   invalidFormState,
@@ -42,6 +42,6 @@ export async function acceptInvitationAction(
     return unexpectedFormState(error, values);
   }
   if (!result.ok) return failedFormState(invitationProblems[result.reason], values);
-  await writeSessionCookie(result.cookie);
+  await replaceSessionCookie(result.cookie);
   redirect(homePathFor(result.role));
 }

@@ -5,7 +5,7 @@ import { z } from "zod";
 import { newPasswordSchema, tokenSchema, withMatchingPasswords } from "@/lib/auth/fields";
 import { completePasswordReset, type CompletePasswordResetResult } from "@/lib/auth/password-reset";
 import { homePathFor } from "@/lib/auth/permissions";
-import { writeSessionCookie } from "@/lib/auth/session-cookie";
+import { replaceSessionCookie } from "@/lib/auth/session-cookie";
 import {
   failedFormState,
   invalidFormState,
@@ -41,6 +41,6 @@ export async function completePasswordResetAction(
     return unexpectedFormState(error, values);
   }
   if (!result.ok) return failedFormState(passwordResetProblems[result.reason], values);
-  await writeSessionCookie(result.cookie);
+  await replaceSessionCookie(result.cookie);
   redirect(homePathFor(result.role));
 }
