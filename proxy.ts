@@ -1,8 +1,8 @@
 import { NextResponse, type NextRequest } from "next/server";
 
-// Sets the per-request Content-Security-Policy (and HSTS) on every page. The headers that never
-// change per request (referrer, nosniff, framing, permissions) are in next.config.ts so that static
-// files carry them too.
+// Sets the per-request Content-Security-Policy (and HSTS) on every page, and refuses form posts
+// from other sites. The headers that never change per request (referrer, nosniff, framing,
+// permissions) are in next.config.ts so that static files carry them too.
 
 const isProduction = process.env.NODE_ENV === "production";
 const servedOverHttps = process.env.APP_URL?.startsWith("https://") ?? false;
@@ -51,7 +51,28 @@ function createNonce(): string {
   return btoa(String.fromCharCode(...crypto.getRandomValues(new Uint8Array(16))));
 }
 
+/**
+ * A POST to a page is a server action. Next aborts one whose Origin names another host, but answers
+ * 500 with an error; it is refused here first with 403. The comparison is Next's own: the Origin's
+ * host against X-Forwarded-Host (first entry) or else Host. A request without Origin is let through
+ * as Next lets it through: browsers send Origin on every POST, so only hand-made requests lack it,
+ * and those carry no one's session unwillingly.
+ */
+function isCrossSitePost(request: NextRequest): boolean {
+  if (request.method === "GET" || request.method === "HEAD") return false;
+  const origin = request.headers.get("origin");
+  if (origin === null) return false;
+  const host = request.headers.get("x-forwarded-host")?.split(",")[0]?.trim() || request.headers.get("host");
+  return !URL.canParse(origin) || new URL(origin).host !== host;
+}
+
 export function proxy(request: NextRequest) {
+  if (isCrossSitePost(request)) {
+    return new NextResponse("This form was sent from another site, so it was not accepted. Open the page on this site and send it again.", {
+      status: 403,
+      headers: { "content-type": "text/plain; charset=utf-8", "cache-control": "no-store" },
+    });
+  }
   const policy = contentSecurityPolicy(createNonce());
   // Next takes the nonce for its own inline scripts from the policy on the request.
   const requestHeaders = new Headers(request.headers);
