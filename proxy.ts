@@ -66,12 +66,25 @@ function isCrossSitePost(request: NextRequest): boolean {
   return !URL.canParse(origin) || new URL(origin).host !== host;
 }
 
+// Next's default limit on a server action's body (serverActions.bodySizeLimit, "1 MB" = 1024² bytes).
+const actionBodyLimitBytes = 1024 * 1024;
+
+/** Next refuses a larger action body with a 500; it is answered here with 413 before Next reads it. */
+function isOversizedPost(request: NextRequest): boolean {
+  if (request.method === "GET" || request.method === "HEAD") return false;
+  return Number(request.headers.get("content-length") ?? 0) > actionBodyLimitBytes;
+}
+
+function refusal(status: number, message: string): NextResponse {
+  return new NextResponse(message, { status, headers: { "content-type": "text/plain; charset=utf-8", "cache-control": "no-store" } });
+}
+
 export function proxy(request: NextRequest) {
   if (isCrossSitePost(request)) {
-    return new NextResponse("This form was sent from another site, so it was not accepted. Open the page on this site and send it again.", {
-      status: 403,
-      headers: { "content-type": "text/plain; charset=utf-8", "cache-control": "no-store" },
-    });
+    return refusal(403, "This form was sent from another site, so it was not accepted. Open the page on this site and send it again.");
+  }
+  if (isOversizedPost(request)) {
+    return refusal(413, "This form is larger than 1 MB, so it was not accepted. Shorten what you typed or attach a smaller file.");
   }
   const policy = contentSecurityPolicy(createNonce());
   // Next takes the nonce for its own inline scripts from the policy on the request.

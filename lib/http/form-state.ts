@@ -52,3 +52,12 @@ export function unexpectedFormState<Field extends string>(
 ): FormState<Field> {
   return failedFormState(describeError(error).body.error.message, values);
 }
+
+/**
+ * A server action is a public endpoint: anyone can call it with any arguments, not only through
+ * its form. Whatever arrives in place of the form data that is not form data is read as an empty
+ * form, which the action's own validation then refuses with its usual message.
+ */
+export function formDataOrEmpty(value: unknown): FormData {
+  return value instanceof FormData ? value : new FormData();
+}

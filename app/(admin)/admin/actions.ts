@@ -8,6 +8,7 @@ import { issueInvitation } from "@/lib/auth/invitations";
 import { isMailDeliveryError } from "@/lib/enrolment";
 import {
   failedFormState,
+  formDataOrEmpty,
   invalidFormState,
   readFormValues,
   unexpectedFormState,
@@ -24,6 +25,7 @@ const inviteSchema = z.object({
 });
 
 export async function invitePerson(_previous: InviteState, formData: FormData): Promise<InviteState> {
+  formData = formDataOrEmpty(formData);
   const admin = await requirePermission("invitations:create", { returnTo: "/admin" });
   const values = readFormValues(formData, ["email", "role", "cohortId"] as const);
   const parsed = inviteSchema.safeParse({ cohortId: "", ...Object.fromEntries(formData) });

@@ -5,6 +5,7 @@ import { z } from "zod";
 import { requirePermission } from "@/lib/auth/current-user";
 import { deactivateLearner, describeUnsent, reactivateLearner, resendInvitation, revokeInvitationLink } from "@/lib/enrolment";
 import { describeError } from "@/lib/http/errors";
+import { formDataOrEmpty } from "@/lib/http/form-state";
 
 export type EntryState = { status: "idle" } | { status: "success" | "warning" | "error"; message: string };
 
@@ -47,6 +48,7 @@ async function runEntryAction(admin: { id: string; schoolId: string; name: strin
 
 /** Resend, revoke, deactivate or reactivate one line of a list (a cohort's, or the school's open invitations). */
 export async function rosterEntryAction(_previous: EntryState, formData: FormData): Promise<EntryState> {
+  formData = formDataOrEmpty(formData);
   const admin = await requirePermission("learners:manage", { returnTo: "/admin" });
   const parsed = entrySchema.safeParse({ ...Object.fromEntries(formData), cohortId: formData.get("cohortId") || undefined });
   if (!parsed.success) return { status: "error", message: "That request could not be read. Reload the page and try again." };

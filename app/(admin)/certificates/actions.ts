@@ -5,6 +5,7 @@ import { requirePermission } from "@/lib/auth/current-user";
 import { revokeCertificate } from "@/lib/certificates/revoke";
 import {
   failedFormState,
+  formDataOrEmpty,
   invalidFormState,
   readFormValues,
   unexpectedFormState,
@@ -15,6 +16,7 @@ export type RevokeField = "certificateId" | "reason";
 export type RevokeState = FormState<RevokeField>;
 
 export async function revokeCertificateAction(_previous: RevokeState, formData: FormData): Promise<RevokeState> {
+  formData = formDataOrEmpty(formData);
   const admin = await requirePermission("certificates:revoke", { returnTo: "/certificates" });
   const values = readFormValues(formData, ["certificateId", "reason"] as const);
   try {

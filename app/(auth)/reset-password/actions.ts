@@ -4,7 +4,7 @@ import { after } from "next/server";
 import { z } from "zod";
 import { emailSchema } from "@/lib/auth/fields";
 import { passwordResetLifetimeMinutes, requestPasswordReset } from "@/lib/auth/password-reset";
-import { invalidFormState, readFormValues, type FormState } from "@/lib/http/form-state";
+import { formDataOrEmpty, invalidFormState, readFormValues, type FormState } from "@/lib/http/form-state";
 
 export type RequestResetField = "email";
 export type RequestResetState = FormState<RequestResetField>;
@@ -15,6 +15,7 @@ export async function requestPasswordResetAction(
   _previous: RequestResetState,
   formData: FormData,
 ): Promise<RequestResetState> {
+  formData = formDataOrEmpty(formData);
   const values = readFormValues(formData, ["email"] as const);
   const parsed = requestSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return invalidFormState(parsed.error, values);

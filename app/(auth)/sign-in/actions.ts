@@ -10,6 +10,7 @@ import { replaceSessionCookie } from "@/lib/auth/session-cookie";
 import { signInWithPassword, type SignInResult } from "@/lib/auth/sign-in";
 import {
   failedFormState,
+  formDataOrEmpty,
   invalidFormState,
   readFormValues,
   unexpectedFormState,
@@ -26,6 +27,7 @@ const signInSchema = z.object({
 });
 
 export async function signIn(_previous: SignInState, formData: FormData): Promise<SignInState> {
+  formData = formDataOrEmpty(formData);
   const values = readFormValues(formData, ["email", "next"] as const);
   const parsed = signInSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return invalidFormState(parsed.error, values);

@@ -20,8 +20,14 @@ export type ActionForm = {
   bound?: (world: AccessWorld, persona: Persona) => Promise<unknown[]> | unknown[];
   /** The form an allowed persona sends; absent for actions that take no form data. */
   fields?: (world: AccessWorld, persona: Persona) => Promise<Record<string, FieldValue>> | Record<string, FieldValue>;
-  /** Fields without which the action must refuse and write nothing (others, like a quick-check entry, are stored whatever they hold). */
+  /**
+   * Fields that, made wrong in any way, must make the action refuse and write nothing. Other
+   * fields may hold values the action rightly accepts (any text is a feedback, a quick-check
+   * entry is stored right or wrong), so the hostile-input test always spoils one of these.
+   */
   guarded?: readonly string[];
+  /** Positions of bound arguments that, made wrong, must make the action refuse. */
+  guardedArgs?: readonly number[];
   /** A separate session for the call, for actions that end the one they are sent with. */
   session?: (world: AccessWorld, persona: Persona) => Promise<string>;
   /** Tables the action writes even when it refuses, by design (sign-in throttling). */
@@ -57,6 +63,7 @@ export const actionForms: Record<string, ActionForm> = {
     allowed: "learnerA",
     path: () => `/bench/${benchExercise}`,
     bound: () => [benchExercise],
+    guardedArgs: [0],
   },
   "app/(learn)/bench/[exerciseSlug]/actions.ts#submitBenchWork": {
     allowed: "learnerA",
@@ -66,20 +73,23 @@ export const actionForms: Record<string, ActionForm> = {
       return [benchExercise];
     },
     fields: () => statedRun,
-    guarded: ["cable", "driver-voltage", "length", "resistor", "rise-time", "overshoot"],
+    guarded: ["cable"],
+    guardedArgs: [0],
   },
   "app/(learn)/bench/[exerciseSlug]/actions.ts#deleteBenchPhoto": {
     allowed: "learnerA",
     path: () => `/bench/${benchExercise}`,
     // Always learner A's photo: for learner B it is somebody else's.
     bound: async (world) => [benchExercise, (await draftWithPhoto(world, "learnerA"))[0]],
+    guardedArgs: [1],
   },
   "app/(teach)/reviews/[submissionId]/actions.ts#submitReview": {
     allowed: "instructorA",
     path: (world) => `/reviews/${world.reviewSubmissionId}`,
     bound: async (world) => [await world.submitWork(await world.createLearner())],
     fields: () => ({ ...rubricScores(), feedback: "Clear photo at the first pixel; the stated rise time matches it.", decision: "accept" }),
-    guarded: ["feedback", "decision", ...Object.keys(rubricScores())],
+    guarded: ["decision"],
+    guardedArgs: [0],
   },
   "app/(auth)/sign-in/actions.ts#signIn": {
     allowed: "learnerA",
@@ -105,19 +115,19 @@ export const actionForms: Record<string, ActionForm> = {
     allowed: "learnerA",
     path: (world) => `/reset-password/${world.resetToken}`,
     fields: async (world) => ({ token: await world.createResetToken(), password: actionPassword, confirmPassword: actionPassword }),
-    guarded: ["token", "password", "confirmPassword"],
+    guarded: ["token"],
   },
   "app/(auth)/invitations/[token]/actions.ts#acceptInvitationAction": {
     allowed: "learnerA",
     path: (world) => `/invitations/${world.invitationToken}`,
     fields: async (world) => ({ token: await world.createInvitation(), name: "Wren Accepting", password: actionPassword, confirmPassword: actionPassword }),
-    guarded: ["token", "password", "confirmPassword"],
+    guarded: ["token"],
   },
   "app/(admin)/certificates/actions.ts#revokeCertificateAction": {
     allowed: "admin",
     path: () => "/certificates",
     fields: async (world) => ({ certificateId: (await world.createCertificate()).id, reason: "Issued in error during a records check." }),
-    guarded: ["certificateId", "reason"],
+    guarded: ["certificateId"],
   },
   "app/(admin)/admin/actions.ts#invitePerson": {
     allowed: "admin",
@@ -135,13 +145,13 @@ export const actionForms: Record<string, ActionForm> = {
       startsOn: "2026-09-07",
       endsOn: "2027-03-26",
     }),
-    guarded: ["name", "courseSlug", "startsOn", "endsOn"],
+    guarded: ["courseSlug", "startsOn", "endsOn"],
   },
   "app/(admin)/admin/cohorts/[cohortId]/actions.ts#enrolLearnerAction": {
     allowed: "admin",
     path: (world) => `/admin/cohorts/${world.spareCohort}`,
     fields: (world) => ({ cohortId: world.spareCohort, name: "Ivo Enrolling", email: uniqueAddress("enrolee") }),
-    guarded: ["cohortId", "name", "email"],
+    guarded: ["cohortId", "email"],
   },
   "app/(admin)/admin/cohorts/[cohortId]/actions.ts#resendWaitingAction": {
     allowed: "admin",

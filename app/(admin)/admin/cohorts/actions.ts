@@ -6,7 +6,7 @@ import { z } from "zod";
 import { createCohort, updateCohort, type SaveCohortResult } from "@/db/queries/admin-cohorts";
 import { requirePermission } from "@/lib/auth/current-user";
 import { cohortInputSchema } from "@/lib/enrolment";
-import { failedFormState, invalidFormState, readFormValues, unexpectedFormState, type FormState } from "@/lib/http/form-state";
+import { failedFormState, formDataOrEmpty, invalidFormState, readFormValues, unexpectedFormState, type FormState } from "@/lib/http/form-state";
 
 export type CohortField = "name" | "courseSlug" | "startsOn" | "endsOn" | "instructorIds";
 export type CohortFormState = FormState<CohortField>;
@@ -15,6 +15,7 @@ const cohortIdSchema = z.union([z.literal(""), z.uuid()]);
 
 /** Creates a cohort (no id) or saves an existing one of the admin's school, then opens it. */
 export async function saveCohortAction(_previous: CohortFormState, formData: FormData): Promise<CohortFormState> {
+  formData = formDataOrEmpty(formData);
   const admin = await requirePermission("cohorts:manage", { returnTo: "/admin" });
   const instructorIds = formData.getAll("instructorIds").map(String);
   const values = { ...readFormValues(formData, ["name", "courseSlug", "startsOn", "endsOn"] as const), instructorIds: instructorIds.join(",") };

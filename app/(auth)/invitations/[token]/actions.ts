@@ -8,6 +8,7 @@ import { homePathFor } from "@/lib/auth/permissions";
 import { replaceSessionCookie } from "@/lib/auth/session-cookie";
 import {
   failedFormState,
+  formDataOrEmpty,
   invalidFormState,
   readFormValues,
   unexpectedFormState,
@@ -31,6 +32,7 @@ export async function acceptInvitationAction(
   _previous: AcceptInvitationState,
   formData: FormData,
 ): Promise<AcceptInvitationState> {
+  formData = formDataOrEmpty(formData);
   const values = readFormValues(formData, ["token", "name"] as const);
   const parsed = acceptSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return invalidFormState(parsed.error, values);

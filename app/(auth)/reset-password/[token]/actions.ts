@@ -8,6 +8,7 @@ import { homePathFor } from "@/lib/auth/permissions";
 import { replaceSessionCookie } from "@/lib/auth/session-cookie";
 import {
   failedFormState,
+  formDataOrEmpty,
   invalidFormState,
   readFormValues,
   unexpectedFormState,
@@ -30,6 +31,7 @@ export async function completePasswordResetAction(
   _previous: CompleteResetState,
   formData: FormData,
 ): Promise<CompleteResetState> {
+  formData = formDataOrEmpty(formData);
   const values = readFormValues(formData, ["token"] as const);
   const parsed = completeSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return invalidFormState(parsed.error, values);

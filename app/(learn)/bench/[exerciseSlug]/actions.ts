@@ -1,11 +1,12 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { z } from "zod";
 import { requirePermission } from "@/lib/auth/current-user";
 import { benchExercisePath } from "@/lib/bench/exercises";
 import { handInBenchWork, openBenchDraft, removeLearnerBenchPhoto } from "@/lib/bench/submissions";
 import { describeError } from "@/lib/http/errors";
-import { failedFormState, unexpectedFormState, type FormState } from "@/lib/http/form-state";
+import { failedFormState, formDataOrEmpty, unexpectedFormState, type FormState } from "@/lib/http/form-state";
 
 export type BenchFormState = FormState<string>;
 
@@ -16,10 +17,16 @@ const draftProblems = {
   locked: "This work is with your instructor now, so it cannot change.",
 } as const;
 
+// Bound arguments come from the browser like form fields do: anyone may send anything in their place.
+// An exercise name that is not text reads as no exercise; a photo id that is not a UUID names no photo.
+const readExerciseSlug = (value: unknown): string => z.string().max(200).catch("").parse(value);
+const readPhotoId = (value: unknown): string | null => z.uuid().nullable().catch(null).parse(value);
+
 export type DraftResult = { ok: true; submissionId: string } | { ok: false; message: string };
 
 /** Called by the uploader before the first photo goes up: the draft the photos belong to. */
-export async function startBenchDraft(exerciseSlug: string): Promise<DraftResult> {
+export async function startBenchDraft(sentSlug: string): Promise<DraftResult> {
+  const exerciseSlug = readExerciseSlug(sentSlug);
   const learner = await requirePermission("bench:submit", { returnTo: benchExercisePath(exerciseSlug) });
   try {
     const draft = await openBenchDraft({ learner, exerciseSlug });
@@ -29,7 +36,9 @@ export async function startBenchDraft(exerciseSlug: string): Promise<DraftResult
   }
 }
 
-export async function submitBenchWork(exerciseSlug: string, _previous: BenchFormState, formData: FormData): Promise<BenchFormState> {
+export async function submitBenchWork(sentSlug: string, _previous: BenchFormState, formData: FormData): Promise<BenchFormState> {
+  const exerciseSlug = readExerciseSlug(sentSlug);
+  formData = formDataOrEmpty(formData);
   const learner = await requirePermission("bench:submit", { returnTo: benchExercisePath(exerciseSlug) });
   const typed = Object.fromEntries([...formData.entries()].filter((e): e is [string, string] => typeof e[1] === "string"));
   try {
@@ -48,15 +57,20 @@ export async function submitBenchWork(exerciseSlug: string, _previous: BenchForm
 
 export type RemovePhotoResult = { ok: boolean; message: string };
 
-export async function deleteBenchPhoto(exerciseSlug: string, photoId: string): Promise<RemovePhotoResult> {
+const alreadyRemoved = "That photo was already removed.";
+
+export async function deleteBenchPhoto(sentSlug: string, sentPhotoId: string): Promise<RemovePhotoResult> {
+  const exerciseSlug = readExerciseSlug(sentSlug);
   const learner = await requirePermission("bench:submit", { returnTo: benchExercisePath(exerciseSlug) });
+  const photoId = readPhotoId(sentPhotoId);
+  if (!photoId) return { ok: false, message: alreadyRemoved };
   try {
     const outcome = await removeLearnerBenchPhoto({ learner, photoId });
     if (outcome.status === "removed") {
       revalidatePath(benchExercisePath(exerciseSlug));
       return { ok: true, message: "Photo removed." };
     }
-    return { ok: false, message: outcome.status === "locked" ? draftProblems.locked : "That photo was already removed." };
+    return { ok: false, message: outcome.status === "locked" ? draftProblems.locked : alreadyRemoved };
   } catch (error) {
     return { ok: false, message: describeError(error).body.error.message };
   }

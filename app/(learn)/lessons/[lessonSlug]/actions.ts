@@ -9,6 +9,7 @@ import { describeError } from "@/lib/http/errors";
 import { isLessonOpen } from "@/lib/progress";
 import type { QuickCheckState } from "@/components/lesson/quick-check-state";
 import { getLesson } from "@/lessons";
+import { formDataOrEmpty } from "@/lib/http/form-state";
 
 const answerSchema = z.object({
   lessonSlug: z.string().min(1).max(100),
@@ -21,6 +22,7 @@ const answerSchema = z.object({
  * record shows every try. Empty and over-long entries are answered without being stored.
  */
 export async function answerQuickCheck(_previous: QuickCheckState, formData: FormData): Promise<QuickCheckState> {
+  formData = formDataOrEmpty(formData);
   const user = await requireRouteAccess("/lessons/[lessonSlug]", { lessonSlug: String(formData.get("lessonSlug") ?? "") });
   const parsed = answerSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return { status: "error", message: "That answer could not be sent. Reload the page and try again.", entry: "" };

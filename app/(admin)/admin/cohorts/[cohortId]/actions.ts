@@ -7,7 +7,7 @@ import { emailSchema, personNameSchema } from "@/lib/auth/fields";
 import { describeUnsent, enrolLearner, resendWaitingInvitations, type EnrolLearnerResult } from "@/lib/enrolment";
 import { describeError } from "@/lib/http/errors";
 import type { EntryState } from "../../entry-actions";
-import { failedFormState, invalidFormState, readFormValues, unexpectedFormState, type FormState } from "@/lib/http/form-state";
+import { failedFormState, formDataOrEmpty, invalidFormState, readFormValues, unexpectedFormState, type FormState } from "@/lib/http/form-state";
 
 /** A result that is not an error but that the admin must read: the e-mail did not go out. */
 type Warning = { status: "warning"; message: string };
@@ -30,6 +30,7 @@ function cohortPath(cohortId: string): string {
 }
 
 export async function enrolLearnerAction(_previous: EnrolState, formData: FormData): Promise<EnrolState> {
+  formData = formDataOrEmpty(formData);
   const admin = await requirePermission("learners:manage", { returnTo: "/admin" });
   const values = readFormValues(formData, ["cohortId", "name", "email"] as const);
   const parsed = enrolSchema.safeParse(Object.fromEntries(formData));
@@ -56,6 +57,7 @@ export async function enrolLearnerAction(_previous: EnrolState, formData: FormDa
 }
 
 export async function resendWaitingAction(_previous: EntryState, formData: FormData): Promise<EntryState> {
+  formData = formDataOrEmpty(formData);
   const admin = await requirePermission("learners:manage", { returnTo: "/admin" });
   const cohortId = z.uuid().safeParse(formData.get("cohortId"));
   if (!cohortId.success) return { status: "error", message: "This cohort is not part of your school." };

@@ -5,6 +5,7 @@ import { z } from "zod";
 import { requirePermission } from "@/lib/auth/current-user";
 import { describeUnsent, importRoster, previewRoster, type RosterPreview } from "@/lib/enrolment";
 import { describeError } from "@/lib/http/errors";
+import { formDataOrEmpty } from "@/lib/http/form-state";
 
 export type RosterImportState =
   | { status: "idle" }
@@ -22,6 +23,7 @@ const requestSchema = z.discriminatedUnion("intent", [
  * (intent "import": the same file again, with the count of valid rows the admin saw).
  */
 export async function rosterImportAction(_previous: RosterImportState, formData: FormData): Promise<RosterImportState> {
+  formData = formDataOrEmpty(formData);
   const admin = await requirePermission("learners:manage", { returnTo: "/admin" });
   const request = requestSchema.safeParse({
     intent: formData.get("intent"),
