@@ -11,6 +11,7 @@ import { benchSubmissions } from "@/db/schema";
 import { handInBenchWork, openBenchDraft } from "@/lib/bench/submissions";
 import { reviewBenchWork, type ReviewInput } from "@/lib/bench/reviews";
 import { findLinks } from "@/lib/mail/sink";
+import { statedRun } from "../support/bench-run";
 import { noisyPhoto } from "../support/uploads/noisy-photo";
 import { createBenchSchool, type BenchSchool, type SignedIn } from "./support/bench-people";
 import { startBenchUploadService, type BenchUploadService } from "./support/bench-upload-service";
@@ -18,17 +19,6 @@ import { countMessagesTo, waitForMessage } from "./support/mail-sink";
 
 let service: BenchUploadService;
 let people: BenchSchool;
-
-const statedRun = {
-  cable: "beside-ground",
-  "driver-voltage": "3.3 V",
-  length: "12 m",
-  resistor: "22 ohm",
-  "rise-time": "14 ns",
-  overshoot: "0.35 V",
-  prediction: "Z0 about 94 ohm; first arrival 3.3 V x (1 - gamma) clears 3.5 V for R below about 40 ohm; chose 22 ohm.",
-  note: "Probe at the first pixel with the spring ground. Edge clean, one small overshoot, no re-crossing.",
-};
 
 function formOf(values: Record<string, string>): FormData {
   const form = new FormData();

@@ -41,29 +41,15 @@ export const reviewedExercise = "document-a-run";
 /** A lab behind five lessons, with a choice known to pass it (E24 150 Ω). */
 export const gradedLab = { slug: "lone-lead-termination", choices: { main: { seriesResistance: 150 } } } as const;
 
-export const statedRun = {
-  cable: "beside-ground",
-  "driver-voltage": "3.3 V",
-  length: "12 m",
-  resistor: "22 ohm",
-  "rise-time": "14 ns",
-  overshoot: "0.35 V",
-  prediction: "Z0 about 94 ohm; first arrival clears 3.5 V for R below about 40 ohm; chose 22 ohm.",
-  note: "Probe at the first pixel with the spring ground. Edge clean, one small overshoot.",
-};
-
-const password = "access matrix password";
+/** Every person made here signs in with this. */
+export const personPassword = "access matrix password";
 let passwordHash: Promise<string> | undefined;
 
 export type Person = { id: string; email: string; name: string; schoolId: string; cookie: string };
 
 export type AccessWorld = {
   people: Record<Member, Person>;
-  schoolId: string;
-  otherSchoolId: string;
   cohortA: string;
-  cohortB: string;
-  otherCohort: string;
   /** A cohort of Fernhallow made for the run, for edits that must not touch the seeded ones. */
   spareCohort: string;
   lessonSlug: string;
@@ -78,7 +64,7 @@ export type AccessWorld = {
   invitationToken: string;
   resetToken: string;
   /** A learner of cohort A made on demand, for actions that use somebody up (deactivate, review, revoke). */
-  createLearner: (cohortId?: string) => Promise<Person>;
+  createLearner: () => Promise<Person>;
   createInvitation: () => Promise<string>;
   createResetToken: () => Promise<string>;
   createCertificate: (learner?: Person) => Promise<{ id: string; code: string }>;
@@ -101,7 +87,7 @@ async function createUser(params: { schoolId: string; role: Role; label: string;
       email: `${params.label}.${randomUUID().slice(0, 8)}@access.example`,
       name: `Access ${params.label}`,
       role: params.role,
-      passwordHash: await (passwordHash ??= hashPassword(password)),
+      passwordHash: await (passwordHash ??= hashPassword(personPassword)),
     })
     .returning();
   if (params.cohortId && params.role !== "admin") {
@@ -184,7 +170,7 @@ export async function buildAccessWorld(): Promise<AccessWorld> {
   await createUser({ schoolId: otherSchoolId, role: "instructor", label: "other-instructor", cohortId: otherCohort });
   await createUser({ schoolId: otherSchoolId, role: "learner", label: "other-learner", cohortId: otherCohort });
 
-  const createLearner = (cohortId = cohortA) => createUser({ schoolId, role: "learner", label: "spare-learner", cohortId });
+  const createLearner = () => createUser({ schoolId, role: "learner", label: "spare-learner", cohortId: cohortA });
 
   const createInvitation = async () => {
     const token = generateToken();
@@ -269,11 +255,7 @@ export async function buildAccessWorld(): Promise<AccessWorld> {
 
   return {
     people,
-    schoolId,
-    otherSchoolId,
     cohortA,
-    cohortB,
-    otherCohort,
     spareCohort,
     lessonSlug: lesson.slug,
     checkId: check.id,

@@ -1,7 +1,8 @@
 import { randomUUID } from "node:crypto";
 import { getCourse } from "@/lessons";
 import { findBenchExercise } from "@/lib/bench/exercises";
-import { benchExercise, reviewedExercise, statedRun, type AccessWorld, type Member, type Persona } from "./access-world";
+import { statedRun } from "../../support/bench-run";
+import { benchExercise, personPassword, reviewedExercise, type AccessWorld, type Member, type Persona } from "./access-world";
 
 // How every server action is called with input it accepts: the page its form lives on, the
 // arguments bound in front of (previous state, form data), and the form fields. Fresh records are
@@ -94,7 +95,7 @@ export const actionForms: Record<string, ActionForm> = {
   "app/(auth)/sign-in/actions.ts#signIn": {
     allowed: "learnerA",
     path: () => "/sign-in",
-    fields: async (world) => ({ email: (await world.createLearner()).email, password: "access matrix password" }),
+    fields: async (world) => ({ email: (await world.createLearner()).email, password: personPassword }),
     guarded: ["email", "password"],
     bookkeeping: ["sign_in_attempts"],
   },
