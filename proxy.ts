@@ -56,7 +56,8 @@ function createNonce(): string {
  * 500 with an error; it is refused here first with 403. The comparison is Next's own: the Origin's
  * host against X-Forwarded-Host (first entry) or else Host. A request without Origin is let through
  * as Next lets it through: browsers send Origin on every POST, so only hand-made requests lack it,
- * and those carry no one's session unwillingly.
+ * and those carry no one's session unwillingly. next.config.ts lists no serverActions.allowedOrigins;
+ * one listed there would have to be let through here too.
  */
 function isCrossSitePost(request: NextRequest): boolean {
   if (request.method === "GET" || request.method === "HEAD") return false;
