@@ -7,10 +7,10 @@
  */
 import { randomUUID } from "node:crypto";
 import fc from "fast-check";
-import { beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { expectNoInternals, hostileText, hugeLength, pollutingKey } from "../support/hostile-input";
 import { actionForms, planActionCall, type ActionForm, type FieldValue } from "./support/action-forms";
-import { buildAccessWorld, type AccessWorld } from "./support/access-world";
+import { buildAccessWorld, removeAccessWorld, type AccessWorld } from "./support/access-world";
 import { readBuiltActions, type BuiltAction } from "./support/app-surface";
 import { changedTables, readDatabaseState } from "./support/database-state";
 import { callAction, type ActionReply } from "./support/server-actions";
@@ -23,6 +23,9 @@ let builtActions: Map<string, BuiltAction>;
 beforeAll(async () => {
   builtActions = readBuiltActions();
   world = await buildAccessWorld();
+});
+afterAll(async () => {
+  if (world) await removeAccessWorld(world);
 });
 
 const unicodeText = fc.string({ unit: "grapheme", minLength: 1, maxLength: 200 });

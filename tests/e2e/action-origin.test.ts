@@ -3,10 +3,10 @@
  * the action's header and a valid body, sent as a persona allowed to run it, but with an Origin
  * that is not the app's. Next aborts such a call with a 500; proxy.ts answers 403 before it.
  */
-import { beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { expectNoInternals } from "../support/hostile-input";
 import { actionForms, planActionCall, type ActionForm } from "./support/action-forms";
-import { buildAccessWorld, type AccessWorld } from "./support/access-world";
+import { buildAccessWorld, removeAccessWorld, type AccessWorld } from "./support/access-world";
 import { readBuiltActions, type BuiltAction } from "./support/app-surface";
 import { baseUrl } from "./support/browser";
 import { changedTables, readDatabaseState } from "./support/database-state";
@@ -18,6 +18,9 @@ let builtActions: Map<string, BuiltAction>;
 beforeAll(async () => {
   builtActions = readBuiltActions();
   world = await buildAccessWorld();
+});
+afterAll(async () => {
+  if (world) await removeAccessWorld(world);
 });
 
 async function sendFrom(origin: string, key: string, form: ActionForm) {

@@ -6,11 +6,11 @@
  * arguments encoded by React); a refused call must leave the database exactly as it was.
  */
 import { randomUUID } from "node:crypto";
-import { beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { protectedRoutes } from "@/lib/auth/route-access";
 import { homePathFor } from "@/lib/auth/permissions";
 import { actionForms, planActionCall } from "./support/action-forms";
-import { buildAccessWorld, cookieOf, gradedLab, personas, reviewedExercise, benchExercise, type AccessWorld, type Persona } from "./support/access-world";
+import { benchExercise, buildAccessWorld, cookieOf, gradedLab, personas, removeAccessWorld, type AccessWorld, type Persona } from "./support/access-world";
 import { discoverPages, discoverRouteHandlers, discoverServerActions, readBuiltActions, type BuiltAction } from "./support/app-surface";
 import { baseUrl } from "./support/browser";
 import { changedTables, readDatabaseState } from "./support/database-state";
@@ -137,6 +137,9 @@ let builtActions: Map<string, BuiltAction>;
 beforeAll(async () => {
   builtActions = readBuiltActions();
   world = await buildAccessWorld();
+});
+afterAll(async () => {
+  if (world) await removeAccessWorld(world);
 });
 
 async function pageOutcome(persona: Persona, path: string, protectedPage: boolean): Promise<PageOutcome | string> {

@@ -1,11 +1,12 @@
 import { randomUUID } from "node:crypto";
-import { and, eq } from "drizzle-orm";
+import { and, eq, inArray, like, or } from "drizzle-orm";
 import { genUploader } from "uploadthing/client";
 import { db } from "@/db/client";
 import { demoCohorts, demoSchool } from "@/db/demo-data";
 import { markLessonsCompleted } from "@/db/queries/progress";
 import {
   benchPhotos,
+  benchReviews,
   benchSubmissions,
   certificates,
   cohortMemberships,
@@ -29,7 +30,8 @@ import { baseUrl } from "./browser";
 // The people and records the authorization tests act on. Fernhallow's two seeded cohorts are
 // cohort A and B; a second, invented school ("Quarrydown Signal Institute") gets an admin, a
 // cohort, an instructor and a learner. Everyone here is created for the run, with addresses no
-// other test uses, so accepted actions change nothing another test looks at.
+// other test uses (all at access.example), and removed again afterwards, so the seeded school
+// looks the same to the tests that run after these.
 
 export const personas = ["anonymous", "learnerA", "learnerB", "instructorA", "instructorB", "admin", "otherAdmin"] as const;
 export type Persona = (typeof personas)[number];
@@ -49,6 +51,7 @@ export type Person = { id: string; email: string; name: string; schoolId: string
 
 export type AccessWorld = {
   people: Record<Member, Person>;
+  otherSchoolId: string;
   cohortA: string;
   /** A cohort of Fernhallow made for the run, for edits that must not touch the seeded ones. */
   spareCohort: string;
@@ -79,12 +82,20 @@ async function cookieFor(userId: string): Promise<string> {
   return `${cookie.name}=${cookie.value}`;
 }
 
+const accessDomain = "access.example";
+const accessAddresses = `%@${accessDomain}`;
+
+/** A new address at the one domain every account and invitation of these tests uses, so all can be found and removed. */
+export function accessAddress(label: string): string {
+  return `${label}.${randomUUID().slice(0, 8)}@${accessDomain}`;
+}
+
 async function createUser(params: { schoolId: string; role: Role; label: string; cohortId?: string }): Promise<Person> {
   const [user] = await db
     .insert(users)
     .values({
       schoolId: params.schoolId,
-      email: `${params.label}.${randomUUID().slice(0, 8)}@access.example`,
+      email: accessAddress(params.label),
       name: `Access ${params.label}`,
       role: params.role,
       passwordHash: await (passwordHash ??= hashPassword(personPassword)),
@@ -176,7 +187,7 @@ export async function buildAccessWorld(): Promise<AccessWorld> {
     const token = generateToken();
     await db.insert(invitations).values({
       schoolId,
-      email: `invited.${randomUUID().slice(0, 8)}@access.example`,
+      email: accessAddress("invited"),
       role: "learner",
       cohortId: cohortA,
       tokenHash: hashToken(token),
@@ -255,6 +266,7 @@ export async function buildAccessWorld(): Promise<AccessWorld> {
 
   return {
     people,
+    otherSchoolId,
     cohortA,
     spareCohort,
     lessonSlug: lesson.slug,
@@ -279,4 +291,18 @@ export async function buildAccessWorld(): Promise<AccessWorld> {
 
 export function cookieOf(world: AccessWorld, persona: Persona): string {
   return persona === "anonymous" ? "" : world.people[persona].cookie;
+}
+
+/**
+ * Deletes everything the world made and every account and invitation the accepted actions made
+ * (all at access.example): certificates and reviews first, as they keep their people.
+ */
+export async function removeAccessWorld(world: AccessWorld): Promise<void> {
+  const made = db.select({ id: users.id }).from(users).where(like(users.email, accessAddresses));
+  await db.delete(certificates).where(or(inArray(certificates.userId, made), eq(certificates.schoolId, world.otherSchoolId)));
+  await db.delete(benchReviews).where(inArray(benchReviews.reviewerId, made));
+  await db.delete(invitations).where(like(invitations.email, accessAddresses));
+  await db.delete(users).where(like(users.email, accessAddresses));
+  await db.delete(cohorts).where(eq(cohorts.id, world.spareCohort));
+  await db.delete(schools).where(eq(schools.id, world.otherSchoolId));
 }

@@ -1,8 +1,7 @@
-import { randomUUID } from "node:crypto";
 import { getCourse } from "@/lessons";
 import { findBenchExercise } from "@/lib/bench/exercises";
 import { statedRun } from "../../support/bench-run";
-import { benchExercise, personPassword, reviewedExercise, type AccessWorld, type Member, type Persona } from "./access-world";
+import { accessAddress, benchExercise, personPassword, reviewedExercise, type AccessWorld, type Member, type Persona } from "./access-world";
 
 // How every server action is called with input it accepts: the page its form lives on, the
 // arguments bound in front of (previous state, form data), and the form fields. Fresh records are
@@ -37,10 +36,6 @@ export type ActionForm = {
 
 export const idleState = { status: "idle" } as const;
 const actionPassword = "a fresh matrix password 2026";
-
-function uniqueAddress(label: string): string {
-  return `${label}.${randomUUID().slice(0, 8)}@access.example`;
-}
 
 function rubricScores(): Record<string, string> {
   const { rubric } = findBenchExercise(reviewedExercise)!.exercise;
@@ -109,7 +104,7 @@ export const actionForms: Record<string, ActionForm> = {
     allowed: "learnerA",
     path: () => "/reset-password",
     // An address without an account: the answer is the same, and no e-mail goes out.
-    fields: () => ({ email: uniqueAddress("nobody") }),
+    fields: () => ({ email: accessAddress("nobody") }),
     guarded: ["email"],
   },
   "app/(auth)/reset-password/[token]/actions.ts#completePasswordResetAction": {
@@ -133,7 +128,7 @@ export const actionForms: Record<string, ActionForm> = {
   "app/(admin)/admin/actions.ts#invitePerson": {
     allowed: "admin",
     path: () => "/admin",
-    fields: (world) => ({ email: uniqueAddress("invitee"), role: "learner", cohortId: world.cohortA }),
+    fields: (world) => ({ email: accessAddress("invitee"), role: "learner", cohortId: world.cohortA }),
     guarded: ["email", "role"],
   },
   "app/(admin)/admin/cohorts/actions.ts#saveCohortAction": {
@@ -151,7 +146,7 @@ export const actionForms: Record<string, ActionForm> = {
   "app/(admin)/admin/cohorts/[cohortId]/actions.ts#enrolLearnerAction": {
     allowed: "admin",
     path: (world) => `/admin/cohorts/${world.spareCohort}`,
-    fields: (world) => ({ cohortId: world.spareCohort, name: "Ivo Enrolling", email: uniqueAddress("enrolee") }),
+    fields: (world) => ({ cohortId: world.spareCohort, name: "Ivo Enrolling", email: accessAddress("enrolee") }),
     guarded: ["cohortId", "email"],
   },
   "app/(admin)/admin/cohorts/[cohortId]/actions.ts#resendWaitingAction": {
@@ -167,7 +162,7 @@ export const actionForms: Record<string, ActionForm> = {
       intent: "import",
       cohortId: world.spareCohort,
       expectedValid: "1",
-      file: new File([`name,email\nOla Importing,${uniqueAddress("imported")}\n`], "roster.csv", { type: "text/csv" }),
+      file: new File([`name,email\nOla Importing,${accessAddress("imported")}\n`], "roster.csv", { type: "text/csv" }),
     }),
     guarded: ["intent", "cohortId", "file"],
   },
