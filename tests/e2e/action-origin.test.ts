@@ -3,30 +3,22 @@
  * the action's header and a valid body, sent as a persona allowed to run it, but with an Origin
  * that is not the app's. Next aborts such a call with a 500; proxy.ts answers 403 before it.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { expectNoInternals } from "../support/hostile-input";
 import { actionForms, planActionCall, type ActionForm } from "./support/action-forms";
-import { buildAccessWorld, removeAccessWorld, type AccessWorld } from "./support/access-world";
-import { readBuiltActions, type BuiltAction } from "./support/app-surface";
+import { setUpAccessWorld, type AccessWorld } from "./support/access-world";
+import { builtActionId } from "./support/app-surface";
 import { baseUrl } from "./support/browser";
 import { changedTables, readDatabaseState } from "./support/database-state";
 import { callAction } from "./support/server-actions";
 
 let world: AccessWorld;
-let builtActions: Map<string, BuiltAction>;
-
-beforeAll(async () => {
-  builtActions = readBuiltActions();
-  world = await buildAccessWorld();
-});
-afterAll(async () => {
-  if (world) await removeAccessWorld(world);
-});
+setUpAccessWorld((built) => (world = built));
 
 async function sendFrom(origin: string, key: string, form: ActionForm) {
   const plan = await planActionCall(form, world, form.allowed, world.people[form.allowed].cookie);
   const before = await readDatabaseState();
-  const reply = await callAction({ ...plan, actionId: builtActions.get(key)!.id, origin });
+  const reply = await callAction({ ...plan, actionId: builtActionId(key), origin });
   return { reply, changed: changedTables(before, await readDatabaseState()) };
 }
 
@@ -46,7 +38,7 @@ describe("server actions sent from another site", () => {
     const [key, form] = Object.entries(actionForms).find(([, candidate]) => candidate.allowed === "admin")!;
     const fields = await form.fields!(world, "admin");
     const body = new FormData();
-    body.append(`$ACTION_ID_${builtActions.get(key)!.id}`, "");
+    body.append(`$ACTION_ID_${builtActionId(key)}`, "");
     for (const [name, value] of Object.entries(fields)) body.append(name, value);
     const before = await readDatabaseState();
     const response = await fetch(`${baseUrl}${form.path(world)}`, {

@@ -6,15 +6,16 @@
  * arguments encoded by React); a refused call must leave the database exactly as it was.
  */
 import { randomUUID } from "node:crypto";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { protectedRoutes } from "@/lib/auth/route-access";
+import { describe, expect, it } from "vitest";
 import { homePathFor } from "@/lib/auth/permissions";
+import { protectedRoutes } from "@/lib/auth/route-access";
+import { uniqueAddress } from "../integration/support/people";
 import { actionForms, planActionCall } from "./support/action-forms";
-import { benchExercise, buildAccessWorld, cookieOf, gradedLab, personas, removeAccessWorld, type AccessWorld, type Persona } from "./support/access-world";
-import { discoverPages, discoverRouteHandlers, discoverServerActions, readBuiltActions, type BuiltAction } from "./support/app-surface";
+import { benchExercise, cookieOf, gradedLab, personas, setUpAccessWorld, type AccessWorld, type Persona } from "./support/access-world";
+import { builtActionId, discoverPages, discoverRouteHandlers, discoverServerActions, readBuiltActions } from "./support/app-surface";
 import { baseUrl } from "./support/browser";
 import { changedTables, readDatabaseState } from "./support/database-state";
-import { callAction, type ActionReply } from "./support/server-actions";
+import { callAction, isRefusalState, type ActionReply } from "./support/server-actions";
 
 // Pages: 200, "sign-in" (307 to /sign-in, with the way back for protected pages), "home" (307 to
 // the persona's own start page), 403 (the app's forbidden page) or 404.
@@ -132,15 +133,7 @@ const homeOf: Record<Persona, string | null> = {
 };
 
 let world: AccessWorld;
-let builtActions: Map<string, BuiltAction>;
-
-beforeAll(async () => {
-  builtActions = readBuiltActions();
-  world = await buildAccessWorld();
-});
-afterAll(async () => {
-  if (world) await removeAccessWorld(world);
-});
+setUpAccessWorld((built) => (world = built));
 
 async function pageOutcome(persona: Persona, path: string, protectedPage: boolean): Promise<PageOutcome | string> {
   const cookie = cookieOf(world, persona);
@@ -156,7 +149,7 @@ async function pageOutcome(persona: Persona, path: string, protectedPage: boolea
   return response.status as PageOutcome;
 }
 
-/** The outcome of one action call, and the tables it changed. */
+/** What one action call came to, in the table's words (or a description of anything else). */
 function actionOutcome(reply: ActionReply): ActionOutcome | string {
   if (reply.redirect) {
     const target = new URL(reply.redirect, baseUrl);
@@ -164,9 +157,7 @@ function actionOutcome(reply: ActionReply): ActionOutcome | string {
   }
   if (reply.status === 403) return 403;
   if (reply.status !== 200 || reply.threw) return `${reply.status}${reply.threw ? " (threw)" : ""}`;
-  const result = reply.result as { status?: string; ok?: boolean } | undefined;
-  if (result?.status === "error" || result?.status === "problem" || result?.ok === false) return "refused";
-  return "accepted";
+  return isRefusalState(reply.result) ? "refused" : "accepted";
 }
 
 describe("the authorization matrix", () => {
@@ -175,7 +166,8 @@ describe("the authorization matrix", () => {
     expect(Object.keys(handlerTable).sort()).toEqual(discoverRouteHandlers());
     expect(Object.keys(actionTable).sort()).toEqual(discoverServerActions());
     expect(Object.keys(actionForms).sort()).toEqual(discoverServerActions());
-    for (const key of discoverServerActions()) expect(builtActions.has(key), `${key} is missing from the build's action manifest`).toBe(true);
+    const built = readBuiltActions();
+    for (const key of discoverServerActions()) expect(built.has(key), `${key} is missing from the build's action manifest`).toBe(true);
   });
 
   it("lists every protected page as protected in the route table, and no public page", () => {
@@ -231,7 +223,8 @@ describe("the authorization matrix", () => {
       for (const [index, persona] of personas.entries()) {
         const plan = await planActionCall(form, world, persona, cookieOf(world, persona));
         const before = await readDatabaseState();
-        const reply = await callAction({ ...plan, actionId: builtActions.get(key)!.id, headers: { "x-forwarded-for": uniqueClientAddress() } });
+        // Each call from its own client address, so the matrix's sign-ins never trip the sign-in throttle.
+        const reply = await callAction({ ...plan, actionId: builtActionId(key), headers: { "x-forwarded-for": uniqueAddress() } });
         const outcome = actionOutcome(reply);
         const changed = changedTables(before, await readDatabaseState());
         const wroteOnRefusal = outcome !== "accepted" && changed.length > 0 ? ` but wrote to ${changed.join(", ")}` : "";
@@ -242,9 +235,3 @@ describe("the authorization matrix", () => {
     expect(seen).toEqual(expected);
   });
 });
-
-/** Each sign-in from its own documentation address (RFC 3849), so the matrix never trips the sign-in throttle. */
-function uniqueClientAddress(): string {
-  const hex = randomUUID().replaceAll("-", "");
-  return `2001:db8::${hex.slice(0, 4)}:${hex.slice(4, 8)}`;
-}

@@ -1,6 +1,7 @@
 import { randomUUID } from "node:crypto";
 import { and, eq, inArray, like, or } from "drizzle-orm";
 import { genUploader } from "uploadthing/client";
+import { afterAll, beforeAll } from "vitest";
 import { db } from "@/db/client";
 import { demoCohorts, demoSchool } from "@/db/demo-data";
 import { markLessonsCompleted } from "@/db/queries/progress";
@@ -153,7 +154,7 @@ async function uploadPhoto(learner: Person, submissionId: string): Promise<strin
   }
 }
 
-export async function buildAccessWorld(): Promise<AccessWorld> {
+async function buildAccessWorld(): Promise<AccessWorld> {
   const [home] = await db.select({ id: schools.id }).from(schools).where(eq(schools.slug, demoSchool.slug));
   if (!home) throw new Error("The demo school is missing: the seed must run before the browser tests.");
   const schoolId = home.id;
@@ -297,7 +298,7 @@ export function cookieOf(world: AccessWorld, persona: Persona): string {
  * Deletes everything the world made and every account and invitation the accepted actions made
  * (all at access.example): certificates and reviews first, as they keep their people.
  */
-export async function removeAccessWorld(world: AccessWorld): Promise<void> {
+async function removeAccessWorld(world: AccessWorld): Promise<void> {
   const made = db.select({ id: users.id }).from(users).where(like(users.email, accessAddresses));
   await db.delete(certificates).where(or(inArray(certificates.userId, made), eq(certificates.schoolId, world.otherSchoolId)));
   await db.delete(benchReviews).where(inArray(benchReviews.reviewerId, made));
@@ -305,4 +306,16 @@ export async function removeAccessWorld(world: AccessWorld): Promise<void> {
   await db.delete(users).where(like(users.email, accessAddresses));
   await db.delete(cohorts).where(eq(cohorts.id, world.spareCohort));
   await db.delete(schools).where(eq(schools.id, world.otherSchoolId));
+}
+
+/** The world for one test file: built before its tests, handed to `use`, removed after them. */
+export function setUpAccessWorld(use: (world: AccessWorld) => void): void {
+  let built: AccessWorld | undefined;
+  beforeAll(async () => {
+    built = await buildAccessWorld();
+    use(built);
+  });
+  afterAll(async () => {
+    if (built) await removeAccessWorld(built);
+  });
 }

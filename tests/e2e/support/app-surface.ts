@@ -80,3 +80,12 @@ export function readBuiltActions(): Map<string, BuiltAction> {
   }
   return actions;
 }
+
+let builtActions: Map<string, BuiltAction> | undefined;
+
+/** The id the build gave the action "module#export". */
+export function builtActionId(key: string): string {
+  const action = (builtActions ??= readBuiltActions()).get(key);
+  if (!action) throw new Error(`${key} is not in the build's action manifest: rebuild the app.`);
+  return action.id;
+}

@@ -55,6 +55,15 @@ export async function callAction(call: ActionCall): Promise<ActionReply> {
 }
 
 /**
+ * The app's actions answer a refusal with a state the form shows: `{ status: "error" }` (form
+ * states), `{ status: "problem" }` (the roster import) or `{ ok: false }` (the bench uploader's).
+ */
+export function isRefusalState(result: unknown): result is { message?: unknown } {
+  const state = result as { status?: unknown; ok?: unknown } | null | undefined;
+  return state?.status === "error" || state?.status === "problem" || state?.ok === false;
+}
+
+/**
  * The return value out of a React Flight response: row 0 is `{"a": "$@<row>", …}` and that row
  * holds the value, or `E{…}` when the action threw. Long strings arrive as separate text rows
  * (`<row>:T<hex length>,<text>`) referenced as "$<row>"; those are resolved, nothing else is.
