@@ -42,6 +42,11 @@ function rubricScores(): Record<string, string> {
   return Object.fromEntries(rubric.map((criterion) => [`score-${criterion.id}`, String(criterion.points)]));
 }
 
+/** A second session of the persona, for actions that end the session they are sent with (signing in or out). */
+function throwawaySession(world: AccessWorld, persona: Persona): Promise<string> {
+  return persona === "anonymous" ? Promise.resolve("") : world.cookieFor(world.people[persona].id);
+}
+
 /** Puts the persona's own bench work back to a draft holding one photo, when the persona has bench work. */
 async function draftWithPhoto(world: AccessWorld, persona: Persona): Promise<string[]> {
   const learner = persona === "learnerA" || persona === "learnerB" ? world.people[persona] : world.people.learnerA;
@@ -92,13 +97,14 @@ export const actionForms: Record<string, ActionForm> = {
     path: () => "/sign-in",
     fields: async (world) => ({ email: (await world.createLearner()).email, password: personPassword }),
     guarded: ["email", "password"],
+    session: throwawaySession,
     bookkeeping: ["sign_in_attempts"],
   },
   "app/(auth)/sign-out/actions.ts#signOut": {
     allowed: "learnerA",
     path: () => "/sign-out",
     bound: () => [],
-    session: (world, persona) => (persona === "anonymous" ? Promise.resolve("") : world.cookieFor(world.people[persona].id)),
+    session: throwawaySession,
   },
   "app/(auth)/reset-password/actions.ts#requestPasswordResetAction": {
     allowed: "learnerA",
@@ -112,12 +118,14 @@ export const actionForms: Record<string, ActionForm> = {
     path: (world) => `/reset-password/${world.resetToken}`,
     fields: async (world) => ({ token: await world.createResetToken(), password: actionPassword, confirmPassword: actionPassword }),
     guarded: ["token"],
+    session: throwawaySession,
   },
   "app/(auth)/invitations/[token]/actions.ts#acceptInvitationAction": {
     allowed: "learnerA",
     path: (world) => `/invitations/${world.invitationToken}`,
     fields: async (world) => ({ token: await world.createInvitation(), name: "Wren Accepting", password: actionPassword, confirmPassword: actionPassword }),
     guarded: ["token"],
+    session: throwawaySession,
   },
   "app/(admin)/certificates/actions.ts#revokeCertificateAction": {
     allowed: "admin",
