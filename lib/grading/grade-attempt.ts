@@ -1,4 +1,4 @@
-import { labVariant, scoreAttempt, type Lab, type LabChoices } from "@/lessons";
+import { labVariant, scoreAttempt, type Lab, type LabChoices, type LabVariant } from "@/lessons";
 import { gradeQuestions, type GradedQuestion } from "./grade-questions";
 import { gradeRuns, type GradedRun } from "./grade-runs";
 import { invalidInput } from "./input-error";
@@ -29,16 +29,25 @@ export type AttemptGrade = GradedWork & {
   passed: boolean;
 };
 
-/**
- * Validates and simulates on the server; the heavy half, run before the attempt is numbered.
- * Throws one 422 naming every bad choice and unreadable answer together.
- */
-export function gradeWork(request: GradingRequest): GradedWork {
+/** Work whose choices and answers have been checked, and whose runs are still to simulate. */
+export type CheckedWork = Omit<GradedWork, "runs"> & { variant: LabVariant };
+
+/** The cheap half of grading: throws one 422 naming every bad choice and unreadable answer together. */
+export function checkWork(request: GradingRequest): CheckedWork {
   const variant = labVariant(request.lab, request.seed);
   const { choices, issues: choiceIssues } = parseLabChoices(request.lab, variant, request.choices);
   const { questions, issues: answerIssues } = gradeQuestions(request.lab, request.answers ?? {});
   if (choiceIssues.length + answerIssues.length > 0) throw invalidInput([...choiceIssues, ...answerIssues]);
-  return { seed: request.seed, choices, runs: gradeRuns(request.lab, variant, choices), questions };
+  return { seed: request.seed, choices, questions, variant };
+}
+
+/**
+ * Validates and simulates on the calling thread; the heavy half, run before the attempt is
+ * numbered. The server grades through gradeWorkOffThread instead.
+ */
+export function gradeWork(request: GradingRequest): GradedWork {
+  const { variant, ...checked } = checkWork(request);
+  return { ...checked, runs: gradeRuns(request.lab, variant, checked.choices) };
 }
 
 /** The score of graded work as attempt number `attemptNumber` (counted from 1; later attempts carry a penalty). */

@@ -170,6 +170,18 @@ describe("POST /api/labs/[labSlug]/attempts", () => {
     expect(await rowsOf(learner.id)).toHaveLength(1);
   });
 
+  it("stores one row for eight resends of one key arriving while their grading queues for a thread", async () => {
+    const learner = await signedIn("learner", cohortId);
+    const body = { choices: failing, idempotencyKey: randomUUID() };
+    const results = await Promise.all(Array.from({ length: 8 }, () => submit(learner, body)));
+    expect(results.map((r) => r.status).sort()).toEqual([200, 200, 200, 200, 200, 200, 200, 201]);
+    expect(new Set(results.map((r) => r.json.attempt.id)).size).toBe(1);
+    expect(results.filter((r) => r.json.replayed)).toHaveLength(7);
+    const rows = await rowsOf(learner.id);
+    expect(rows).toHaveLength(1);
+    expect(rows[0].passed).toBe(false);
+  });
+
   it("numbers simultaneous submissions 1, 2, 3 without a gap or a clash", async () => {
     const learner = await signedIn("learner", cohortId);
     const results = await Promise.all([passing, failing, passing].map((choices) => submit(learner, { choices, idempotencyKey: randomUUID() })));

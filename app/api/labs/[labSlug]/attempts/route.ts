@@ -4,7 +4,8 @@ import { listLabAttemptsByLearner, recordLabAttempt } from "@/db/queries/attempt
 import { findLearnerCohortId } from "@/db/queries/cohorts";
 import { getCourse } from "@/lessons";
 import { checkCertificateAfterCourseWork } from "@/lib/certificates";
-import { gradeWork, outcomeOf, scoreWork, toAttemptView, variantSeedFor, verdictLines } from "@/lib/grading";
+import { outcomeOf, scoreWork, toAttemptView, variantSeedFor, verdictLines } from "@/lib/grading";
+import { gradeWorkOffThread } from "@/lib/grading/grade-off-thread";
 import { invalidInput, issuesOf } from "@/lib/grading/input-error";
 import { AppError } from "@/lib/http/errors";
 import { errorResponse } from "@/lib/http/respond";
@@ -46,7 +47,7 @@ export async function POST(request: Request, context: Context): Promise<NextResp
     if (!body.success) throw invalidInput(issuesOf(body.error));
     const { user } = learner;
     const seed = variantSeedFor(user.id, lab.slug);
-    const work = gradeWork({ lab, seed, choices: body.data.choices, answers: body.data.answers });
+    const work = await gradeWorkOffThread({ lab, seed, choices: body.data.choices, answers: body.data.answers });
 
     const recorded = await recordLabAttempt({
       userId: user.id,
