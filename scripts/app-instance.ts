@@ -21,7 +21,8 @@ export type AppInstance = {
   stopDatabase(): Promise<void>;
   startDatabase(): Promise<void>;
   stopPart(part: InstancePart): Promise<void>;
-  startPart(part: InstancePart): Promise<void>;
+  /** `appEnv`, for the app only: extra environment for this start instead of the options' one. */
+  startPart(part: InstancePart, appEnv?: Record<string, string>): Promise<void>;
   /** Stops every process of the instance, its database cluster included. */
   stop(): Promise<void>;
 };
@@ -59,9 +60,9 @@ export async function startAppInstance(options: AppInstanceOptions): Promise<App
   const postgres = (command: "up" | "stop") =>
     run("bash", [path.join(root, "scripts/postgres.sh"), command], { cwd: root, env: processEnv }).then(() => undefined);
 
-  async function startPart(part: InstancePart): Promise<void> {
+  async function startPart(part: InstancePart, appEnv = options.appEnv): Promise<void> {
     const { args, port } = partCommands[part];
-    const partEnv: NodeJS.ProcessEnv = part === "app" ? { ...processEnv, NODE_ENV: "production", ...options.appEnv } : processEnv;
+    const partEnv: NodeJS.ProcessEnv = part === "app" ? { ...processEnv, NODE_ENV: "production", ...appEnv } : processEnv;
     const fullArgs = part === "app" ? [...args, "-p", env.APP_PORT] : args;
     const log = openSync(path.join(dataDir, `instance-${name}-${part}.log`), "a");
     // Own process group, so stopping the part also stops whatever it spawned.

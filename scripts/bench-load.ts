@@ -1,0 +1,193 @@
+/**
+ * Load benchmark: the production build on a private instance (scripts/app-instance.ts: own
+ * PostgreSQL cluster, fresh demo-seeded database), driven over 127.0.0.1 by autocannon in a child
+ * process (scripts/bench-load/driver.ts) so that the traffic's own CPU never runs on this
+ * process's event loop, which only sets up, counts and reports.
+ *
+ * 1. Mix: LOAD_LEARNERS learners (default 200), one connection each, for LOAD_SECONDS (default 60):
+ *    each submits a lab attempt (passing and failing in turn, every 4th a resend of the previous
+ *    one with its idempotency key) and loads its workbench, again and again. LOAD_RATE caps each
+ *    learner's requests per second (unset: the next request goes as soon as the last is answered).
+ * 2. Grading burst: a few learners only load their workbench, first alone, then while every other
+ *    learner submits as fast as answered; LOAD_BURST_SECONDS (default 15) each. Done once with
+ *    the grading threads and once, after a restart, grading on the request thread
+ *    (GRADING_THREADS=0): the reference run whose ratios show what the threads give.
+ * 3. Counts the stored attempts and compares them with the first-time submissions answered 2xx.
+ *
+ * Targets (hardening issue, point 3): no 5xx, p95 under 300 ms for each kind of request in the
+ * mix, stored attempts = first-time 2xx answers, resends stored once, workbench p95 under 300 ms
+ * during the burst. Printed as met or not; the figures also go to .data/bench-load.json.
+ * Nothing here fails a build.
+ *
+ * Run: npm run bench:load   (LOAD_SECONDS=10 for a quick run; LOAD_PORT_BASE moves the instance's ports)
+ */
+import { fork } from "node:child_process";
+import { writeFileSync } from "node:fs";
+import { availableParallelism, loadavg } from "node:os";
+import path from "node:path";
+import { startAppInstance } from "./app-instance";
+import type { BenchLearner, DriverReply, DriverRequest, KindFigures, PhaseFigures, RequestKind } from "./bench-load/protocol";
+
+const TARGET_P95_MS = 300;
+const RETRY_EVERY = 4;
+const PROBE_LEARNERS = 4;
+const WARM_UP_SECONDS = 5;
+
+function envNumber(name: string, fallback: number): number {
+  const value = process.env[name];
+  if (value === undefined || value === "") return fallback;
+  const number = Number(value);
+  if (!Number.isFinite(number) || number < 0) throw new Error(`${name} must be a non-negative number, not "${value}".`);
+  return number;
+}
+
+const settings = {
+  seconds: envNumber("LOAD_SECONDS", 60),
+  learners: envNumber("LOAD_LEARNERS", 200),
+  rate: envNumber("LOAD_RATE", 0),
+  burstSeconds: envNumber("LOAD_BURST_SECONDS", 15),
+  portBase: envNumber("LOAD_PORT_BASE", 58000),
+};
+
+/** The driver child: one phase at a time, answered by its figures. */
+function startDriver() {
+  const child = fork(path.join(import.meta.dirname, "bench-load/driver.ts"), [], { execArgv: ["--import", "tsx"], stdio: "inherit" });
+  return {
+    run(request: DriverRequest): Promise<PhaseFigures> {
+      return new Promise((resolve, reject) => {
+        const onExit = (code: number | null) => reject(new Error(`The load driver exited (code ${code}) during a phase.`));
+        child.once("exit", onExit);
+        child.once("message", (reply: DriverReply) => {
+          child.off("exit", onExit);
+          if ("error" in reply) reject(new Error(`The load driver failed: ${reply.error}`));
+          else resolve(reply.figures);
+        });
+        child.send(request);
+      });
+    },
+    stop: () => child.kill(),
+  };
+}
+
+const ms = (value: number | null) => (value === null ? "—" : `${Math.round(value)} ms`);
+
+function kindLines(title: string, figures: PhaseFigures): string[] {
+  const lines = [`${title}: ${figures.throughput.toFixed(1)} answers/s over ${figures.seconds} s`];
+  for (const [kind, k] of Object.entries(figures.kinds) as [RequestKind, KindFigures][]) {
+    const statuses = Object.entries(k.statuses)
+      .map(([status, count]) => `${status}×${count}`)
+      .join(" ");
+    lines.push(`  ${kind.padEnd(7)} ${String(k.count).padStart(6)}  p50 ${ms(k.p50).padStart(8)}  p95 ${ms(k.p95).padStart(8)}  p99 ${ms(k.p99).padStart(8)}  ${statuses}`);
+  }
+  return lines;
+}
+
+function count5xx(figures: PhaseFigures): number {
+  return Object.values(figures.kinds).reduce(
+    (sum, k) => sum + Object.entries(k!.statuses).reduce((n, [status, c]) => n + (Number(status) >= 500 ? c : 0), 0),
+    0,
+  );
+}
+
+function nonSuccess(figures: PhaseFigures): Record<string, number> {
+  const breakdown: Record<string, number> = {};
+  for (const [kind, k] of Object.entries(figures.kinds)) {
+    for (const [status, c] of Object.entries(k!.statuses)) if (Number(status) >= 300) breakdown[`${kind} ${status}`] = c;
+  }
+  return breakdown;
+}
+
+const yes = (met: boolean) => (met ? "yes" : "NO");
+
+async function main(): Promise<void> {
+  const load = loadavg()[0];
+  console.log(`Load benchmark: ${settings.learners} learners, ${settings.seconds} s mix, ${settings.burstSeconds} s burst phases; ${availableParallelism()} cores, load average ${load.toFixed(2)}`);
+  console.log("Starting the private instance (build if stale, fresh database)…");
+  const instance = await startAppInstance({ name: "load", portBase: settings.portBase, build: true, appEnv: {} });
+  const driver = startDriver();
+  try {
+    Object.assign(process.env, instance.env);
+    // Imported only now: the app's modules read DATABASE_URL and APP_URL of the instance on first use.
+    const { createBenchLearners, countBenchAttempts } = await import("./bench-load/learners");
+    const { gradingThreadCount } = await import("../lib/grading/grading-pool");
+    const learners = await createBenchLearners(settings.learners);
+    const probe = learners.slice(0, PROBE_LEARNERS);
+    const submitters = learners.slice(PROBE_LEARNERS);
+    const baseUrl = instance.baseUrl;
+    const phases: Record<string, PhaseFigures> = {};
+    const run = async (name: string, request: Omit<DriverRequest, "baseUrl" | "retryEvery">) => {
+      console.log(`  ${name}…`);
+      phases[name] = await driver.run({ baseUrl, retryEvery: RETRY_EVERY, ...request });
+      return phases[name];
+    };
+    const rate = settings.rate > 0 ? { connectionRate: settings.rate } : {};
+    const burstPair = async (label: string, warmUp: boolean) => {
+      if (warmUp) await run(`${label}: warm-up`, { learners, seconds: WARM_UP_SECONDS, mode: "mix" });
+      const alone = await run(`${label}: workbench alone`, { learners: probe, seconds: settings.burstSeconds, mode: "pages" });
+      const burst = await run(`${label}: workbench during burst`, { learners: submitters, seconds: settings.burstSeconds, mode: "submits", probe });
+      return { alone: alone.kinds.page!.p95!, burst: burst.kinds.page!.p95!, submitsPerSecond: burst.kinds.submit!.count / burst.seconds };
+    };
+
+    console.log("Phases:");
+    await run("warm-up", { learners, seconds: WARM_UP_SECONDS, mode: "mix", ...rate });
+    const mix = await run("mix", { learners, seconds: settings.seconds, mode: "mix", ...rate });
+    const threads = gradingThreadCount();
+    const pooled = await burstPair(`grading threads (${threads})`, false);
+    await instance.stopPart("app");
+    await instance.startPart("app", { GRADING_THREADS: "0" });
+    const inline = await burstPair("request thread (reference)", true);
+
+    const stored = await countBenchAttempts();
+    const expected = Object.values(phases).reduce((sum, p) => sum + p.firstTimeStored, 0);
+    const retries = mix.kinds.retry;
+    const allPhases = Object.values(phases);
+    const diverged = allPhases.reduce((sum, p) => sum + p.retriesDiverged, 0);
+    const fiveXX = allPhases.reduce((sum, p) => sum + count5xx(p), 0);
+    const mixP95s = Object.values(mix.kinds).map((k) => k!.p95 ?? Infinity);
+    const targets = {
+      no5xx: fiveXX === 0,
+      mixP95Under300: mixP95s.every((p) => p < TARGET_P95_MS),
+      storedEqualsFirstTime2xx: stored === expected,
+      retriesStoredOnce: diverged === 0 && (retries?.statuses["200"] ?? 0) === mix.retriesReplayed,
+      workbenchP95DuringBurstUnder300: pooled.burst < TARGET_P95_MS,
+    };
+
+    const report = [
+      "",
+      ...kindLines(`Mix (${settings.learners} learners${settings.rate ? `, at most ${settings.rate} request/s each` : ", each as fast as answered"})`, mix),
+      `  non-2xx: ${JSON.stringify(nonSuccess(mix))}; 5xx in all phases: ${fiveXX}`,
+      `  resends: ${retries?.count ?? 0}, replayed with the stored attempt: ${mix.retriesReplayed}, answered with another attempt: ${diverged}`,
+      `  first-time submissions unanswered at the window's end or timed out: ${mix.unanswered}, settled by resending their key: ${mix.settledByRetry}`,
+      "",
+      `Stored attempts ${stored}, first-time 2xx answers in all phases ${expected}: ${stored === expected ? "equal" : "NOT equal"}`,
+      "",
+      "Workbench p95, alone and during a grading burst (submissions/s during the burst):",
+      `  grading threads (${threads}):     alone ${ms(pooled.alone)}, burst ${ms(pooled.burst)} (×${(pooled.burst / pooled.alone).toFixed(1)}), ${pooled.submitsPerSecond.toFixed(1)} submissions/s`,
+      `  request thread (reference): alone ${ms(inline.alone)}, burst ${ms(inline.burst)} (×${(inline.burst / inline.alone).toFixed(1)}), ${inline.submitsPerSecond.toFixed(1)} submissions/s`,
+      `  during the burst, request thread / grading threads: ×${(inline.burst / pooled.burst).toFixed(1)}`,
+      "",
+      "Targets:",
+      `  zero 5xx:                              ${yes(targets.no5xx)}`,
+      `  p95 under ${TARGET_P95_MS} ms, each kind in the mix:  ${yes(targets.mixP95Under300)} (${Object.entries(mix.kinds).map(([kind, k]) => `${kind} ${ms(k!.p95)}`).join(", ")})`,
+      `  stored attempts = first-time 2xx:      ${yes(targets.storedEqualsFirstTime2xx)}`,
+      `  resends stored once:                   ${yes(targets.retriesStoredOnce)}`,
+      `  workbench p95 under ${TARGET_P95_MS} ms in a burst: ${yes(targets.workbenchP95DuringBurstUnder300)}`,
+    ];
+    console.log(report.join("\n"));
+    const file = path.join(import.meta.dirname, "..", ".data", "bench-load.json");
+    const json = { settings, machine: { cores: availableParallelism(), loadAverageAtStart: load }, gradingThreads: threads, phases, stored, firstTime2xx: expected, burst: { pooled, inline }, targets };
+    writeFileSync(file, `${JSON.stringify(json, null, 2)}\n`);
+    console.log(`\nFigures written to ${path.relative(process.cwd(), file)}`);
+  } finally {
+    driver.stop();
+    await instance.stop();
+  }
+}
+
+main().then(
+  () => process.exit(0),
+  (error: unknown) => {
+    console.error(error);
+    process.exit(1);
+  },
+);

@@ -1,0 +1,42 @@
+// What the load benchmark's orchestrator (scripts/bench-load.ts) and its traffic driver
+// (driver.ts, a child process) say to each other.
+
+/** A bench learner with a session, the lab they work on, and choices that pass and fail it. */
+export type BenchLearner = { cookie: string; labSlug: string; passing: unknown; failing: unknown };
+
+export type RequestKind = "submit" | "retry" | "page";
+
+export type DriverRequest = {
+  baseUrl: string;
+  seconds: number;
+  /** One connection per learner. */
+  learners: BenchLearner[];
+  mode: "mix" | "pages" | "submits";
+  /** Every n-th submission of a learner resends the previous one with the same key (0: never). */
+  retryEvery: number;
+  /** Requests per second per learner; unset, each learner sends its next request as soon as the last is answered. */
+  connectionRate?: number;
+  /** Learners who only load their workbench alongside, on connections of their own. */
+  probe?: BenchLearner[];
+};
+
+export type KindFigures = { count: number; statuses: Record<string, number>; p50: number | null; p95: number | null; p99: number | null };
+
+export type PhaseFigures = {
+  seconds: number;
+  /** Answered requests per second. */
+  throughput: number;
+  kinds: Partial<Record<RequestKind, KindFigures>>;
+  /** First-time submissions answered 2xx, in the window or when resent after it. */
+  firstTimeStored: number;
+  /** Resends answered 200 with the attempt their first sending stored. */
+  retriesReplayed: number;
+  /** Resends answered 2xx with another attempt (must stay 0). */
+  retriesDiverged: number;
+  /** First-time submissions without an answer in the window (cut off at its end, or timed out). */
+  unanswered: number;
+  settledByRetry: number;
+  unsettled: number;
+};
+
+export type DriverReply = { figures: PhaseFigures } | { error: string };
