@@ -4,13 +4,15 @@
  * process (scripts/bench-load/driver.ts) so that the traffic's own CPU never runs on this
  * process's event loop, which only sets up, counts and reports.
  *
- * 1. Mix: LOAD_LEARNERS learners (default 200), one connection each, for LOAD_SECONDS (default 60):
- *    each submits a lab attempt (passing and failing in turn, every 4th a resend of the previous
- *    one with its idempotency key) and loads its workbench, again and again. LOAD_RATE caps each
- *    learner's requests per second (unset: the next request goes as soon as the last is answered).
- * 2. Grading burst: a few learners only load their workbench, first alone, then while every other
- *    learner submits as fast as answered; LOAD_BURST_SECONDS (default 15) each. Done once with
- *    the grading threads and once, after a restart, grading on the request thread
+ * 1. Mix: LOAD_LEARNERS learners (default 200) for LOAD_SECONDS (default 60): each submits a lab
+ *    attempt (passing and failing in turn, every 3rd a resend of the previous one with its
+ *    idempotency key) and loads its workbench, again and again. LOAD_RATE (default 20) is the
+ *    requests per second of all learners together, i.e. each learner acts every 10 s: a learner
+ *    reads the result and changes the bench between two submissions. LOAD_RATE=0 gives each
+ *    learner a connection sending as soon as answered, which measures capacity, not latency.
+ * 2. Grading burst: a few learners only load their workbench, first alone, then while the others
+ *    submit LOAD_BURST_RATE (default 40) attempts a second; LOAD_BURST_SECONDS (default 15) each.
+ *    Done once with the grading threads and once, after a restart, grading on the request thread
  *    (GRADING_THREADS=0): the reference run whose ratios show what the threads give.
  * 3. Counts the stored attempts and compares them with the first-time submissions answered 2xx.
  *
@@ -29,7 +31,7 @@ import { startAppInstance } from "./app-instance";
 import type { BenchLearner, DriverReply, DriverRequest, KindFigures, PhaseFigures, RequestKind } from "./bench-load/protocol";
 
 const TARGET_P95_MS = 300;
-const RETRY_EVERY = 4;
+const RETRY_EVERY = 3;
 const PROBE_LEARNERS = 4;
 const WARM_UP_SECONDS = 5;
 
@@ -44,7 +46,8 @@ function envNumber(name: string, fallback: number): number {
 const settings = {
   seconds: envNumber("LOAD_SECONDS", 60),
   learners: envNumber("LOAD_LEARNERS", 200),
-  rate: envNumber("LOAD_RATE", 0),
+  rate: envNumber("LOAD_RATE", 20),
+  burstRate: envNumber("LOAD_BURST_RATE", 40),
   burstSeconds: envNumber("LOAD_BURST_SECONDS", 15),
   portBase: envNumber("LOAD_PORT_BASE", 58000),
 };
@@ -70,6 +73,7 @@ function startDriver() {
 }
 
 const ms = (value: number | null) => (value === null ? "—" : `${Math.round(value)} ms`);
+const ratio = (a: number | null, b: number | null) => (a === null || b === null ? "—" : `×${(a / b).toFixed(1)}`);
 
 function kindLines(title: string, figures: PhaseFigures): string[] {
   const lines = [`${title}: ${figures.throughput.toFixed(1)} answers/s over ${figures.seconds} s`];
@@ -99,6 +103,11 @@ function nonSuccess(figures: PhaseFigures): Record<string, number> {
 
 const yes = (met: boolean) => (met ? "yes" : "NO");
 
+function paceOf(requestsPerSecond: number): string {
+  if (requestsPerSecond === 0) return `${settings.learners} learners, each sending as soon as answered`;
+  return `${settings.learners} learners, ${requestsPerSecond} requests/s in all: one every ${(settings.learners / requestsPerSecond).toFixed(1)} s per learner`;
+}
+
 async function main(): Promise<void> {
   const load = loadavg()[0];
   console.log(`Load benchmark: ${settings.learners} learners, ${settings.seconds} s mix, ${settings.burstSeconds} s burst phases; ${availableParallelism()} cores, load average ${load.toFixed(2)}`);
@@ -108,7 +117,7 @@ async function main(): Promise<void> {
   try {
     Object.assign(process.env, instance.env);
     // Imported only now: the app's modules read DATABASE_URL and APP_URL of the instance on first use.
-    const { createBenchLearners, countBenchAttempts } = await import("./bench-load/learners");
+    const { createBenchLearners, countBenchAttempts, closeBenchDatabase } = await import("./bench-load/learners");
     const { gradingThreadCount } = await import("../lib/grading/grading-pool");
     const learners = await createBenchLearners(settings.learners);
     const probe = learners.slice(0, PROBE_LEARNERS);
@@ -116,16 +125,17 @@ async function main(): Promise<void> {
     const baseUrl = instance.baseUrl;
     const phases: Record<string, PhaseFigures> = {};
     const run = async (name: string, request: Omit<DriverRequest, "baseUrl" | "retryEvery">) => {
-      console.log(`  ${name}…`);
       phases[name] = await driver.run({ baseUrl, retryEvery: RETRY_EVERY, ...request });
+      console.log(kindLines(name, phases[name]).join("\n"));
       return phases[name];
     };
-    const rate = settings.rate > 0 ? { connectionRate: settings.rate } : {};
+    const rate = settings.rate > 0 ? { requestsPerSecond: settings.rate } : {};
+    const burstRate = settings.burstRate > 0 ? { requestsPerSecond: settings.burstRate } : {};
     const burstPair = async (label: string, warmUp: boolean) => {
-      if (warmUp) await run(`${label}: warm-up`, { learners, seconds: WARM_UP_SECONDS, mode: "mix" });
+      if (warmUp) await run(`${label}: warm-up`, { learners, seconds: WARM_UP_SECONDS, mode: "mix", ...rate });
       const alone = await run(`${label}: workbench alone`, { learners: probe, seconds: settings.burstSeconds, mode: "pages" });
-      const burst = await run(`${label}: workbench during burst`, { learners: submitters, seconds: settings.burstSeconds, mode: "submits", probe });
-      return { alone: alone.kinds.page!.p95!, burst: burst.kinds.page!.p95!, submitsPerSecond: burst.kinds.submit!.count / burst.seconds };
+      const burst = await run(`${label}: workbench during burst`, { learners: submitters, seconds: settings.burstSeconds, mode: "submits", probe, ...burstRate });
+      return { alone: alone.kinds.page?.p95 ?? null, burst: burst.kinds.page?.p95 ?? null, submitsPerSecond: (burst.kinds.submit?.count ?? 0) / burst.seconds };
     };
 
     console.log("Phases:");
@@ -138,6 +148,7 @@ async function main(): Promise<void> {
     const inline = await burstPair("request thread (reference)", true);
 
     const stored = await countBenchAttempts();
+    await closeBenchDatabase();
     const expected = Object.values(phases).reduce((sum, p) => sum + p.firstTimeStored, 0);
     const retries = mix.kinds.retry;
     const allPhases = Object.values(phases);
@@ -149,22 +160,22 @@ async function main(): Promise<void> {
       mixP95Under300: mixP95s.every((p) => p < TARGET_P95_MS),
       storedEqualsFirstTime2xx: stored === expected,
       retriesStoredOnce: diverged === 0 && (retries?.statuses["200"] ?? 0) === mix.retriesReplayed,
-      workbenchP95DuringBurstUnder300: pooled.burst < TARGET_P95_MS,
+      workbenchP95DuringBurstUnder300: pooled.burst !== null && pooled.burst < TARGET_P95_MS,
     };
 
     const report = [
       "",
-      ...kindLines(`Mix (${settings.learners} learners${settings.rate ? `, at most ${settings.rate} request/s each` : ", each as fast as answered"})`, mix),
+      ...kindLines(`Mix (${paceOf(settings.rate)})`, mix),
       `  non-2xx: ${JSON.stringify(nonSuccess(mix))}; 5xx in all phases: ${fiveXX}`,
       `  resends: ${retries?.count ?? 0}, replayed with the stored attempt: ${mix.retriesReplayed}, answered with another attempt: ${diverged}`,
       `  first-time submissions unanswered at the window's end or timed out: ${mix.unanswered}, settled by resending their key: ${mix.settledByRetry}`,
       "",
       `Stored attempts ${stored}, first-time 2xx answers in all phases ${expected}: ${stored === expected ? "equal" : "NOT equal"}`,
       "",
-      "Workbench p95, alone and during a grading burst (submissions/s during the burst):",
-      `  grading threads (${threads}):     alone ${ms(pooled.alone)}, burst ${ms(pooled.burst)} (×${(pooled.burst / pooled.alone).toFixed(1)}), ${pooled.submitsPerSecond.toFixed(1)} submissions/s`,
-      `  request thread (reference): alone ${ms(inline.alone)}, burst ${ms(inline.burst)} (×${(inline.burst / inline.alone).toFixed(1)}), ${inline.submitsPerSecond.toFixed(1)} submissions/s`,
-      `  during the burst, request thread / grading threads: ×${(inline.burst / pooled.burst).toFixed(1)}`,
+      `Workbench p95, alone and during a grading burst (${paceOf(settings.burstRate).replace("requests", "submissions")}):`,
+      `  grading threads (${threads}):     alone ${ms(pooled.alone)}, burst ${ms(pooled.burst)} (${ratio(pooled.burst, pooled.alone)}), ${pooled.submitsPerSecond.toFixed(1)} submissions/s`,
+      `  request thread (reference): alone ${ms(inline.alone)}, burst ${ms(inline.burst)} (${ratio(inline.burst, inline.alone)}), ${inline.submitsPerSecond.toFixed(1)} submissions/s`,
+      `  during the burst, request thread / grading threads: ${ratio(inline.burst, pooled.burst)}`,
       "",
       "Targets:",
       `  zero 5xx:                              ${yes(targets.no5xx)}`,

@@ -62,83 +62,90 @@ function percentile(sorted: number[], p: number): number | null {
 
 const isSuccess = (status: number) => status >= 200 && status < 300;
 
-type SubmissionState = { count: number; last: { body: string; attemptId: string } | null; inFlight: { body: string; retry: boolean } | null };
+/** `offset` staggers the resends, so that some learners resend as early as their second submission. */
+type LearnerState = { learner: BenchLearner; offset: number; turns: number; submissions: number; last: { body: string; attemptId: string } | null };
+type Sent = { learnerState: LearnerState; kind: RequestKind; body?: string };
 
 /**
- * One virtual learner on one connection: submits an attempt (passing and failing choices in turn,
- * every `retryEvery`-th submission a resend of the previous one with its key), then loads the
- * workbench, and again; or, by `mode`, only loads the workbench or only submits.
+ * The requests of one connection, shared in turn by its learners. Each learner submits an attempt
+ * (passing and failing choices in turn, every `retryEvery`-th submission a resend of the previous
+ * one with its key, as a browser resends after a lost answer) and loads its workbench, again and again; or, by `mode`, only one of the two.
  */
-function learnerRequests(learner: BenchLearner, recorder: PhaseRecorder, client: Client, mode: "mix" | "pages" | "submits", retryEvery: number): Request[] {
-  const headers = { cookie: learner.cookie };
-  const state: SubmissionState = { count: 0, last: null, inFlight: null };
-  let answering: RequestKind = "page";
+function connectionRequests(learners: BenchLearner[], recorder: PhaseRecorder, client: Client, mode: DriverRequest["mode"], retryEvery: number): Request[] {
+  const states: LearnerState[] = learners.map((learner, i) => ({ learner, offset: i % Math.max(1, retryEvery), turns: 0, submissions: 0, last: null }));
+  let turn = 0;
+  let inFlight: Sent | null = null;
+  let answered: RequestKind = "page";
 
-  const submit: Request = {
-    method: "POST",
-    path: `/api/labs/${learner.labSlug}/attempts`,
-    headers: { ...headers, "content-type": "application/json" },
-    setupRequest(request) {
-      if (state.inFlight && !state.inFlight.retry) recorder.unanswered.push({ learner, body: state.inFlight.body });
-      state.count += 1;
-      const retry = retryEvery > 0 && state.count % retryEvery === 0 && state.last !== null;
-      const body = retry
-        ? state.last!.body
-        : JSON.stringify({ choices: state.count % 2 ? learner.passing : learner.failing, idempotencyKey: randomUUID() });
-      state.inFlight = { body, retry };
-      return { ...request, body };
+  const nextSubmission = (state: LearnerState): Sent => {
+    state.submissions += 1;
+    if (retryEvery > 0 && (state.submissions + state.offset) % retryEvery === 0 && state.last) return { learnerState: state, kind: "retry", body: state.last.body };
+    const { passing, failing, answers } = state.learner;
+    const choices = state.submissions % 2 ? passing : failing;
+    return { learnerState: state, kind: "submit", body: JSON.stringify({ choices, answers, idempotencyKey: randomUUID() }) };
+  };
+  const loseInFlight = () => {
+    if (inFlight?.kind === "submit") recorder.unanswered.push({ learner: inFlight.learnerState.learner, body: inFlight.body! });
+    inFlight = null;
+  };
+
+  const request: Request = {
+    path: "/",
+    setupRequest(base): Request {
+      loseInFlight();
+      const state = states[turn++ % states.length];
+      const submits = mode === "submits" || (mode === "mix" && state.turns++ % 2 === 0);
+      inFlight = submits ? nextSubmission(state) : { learnerState: state, kind: "page" };
+      const { cookie, labSlug } = state.learner;
+      if (inFlight.body === undefined) return { ...base, method: "GET", path: `/labs/${labSlug}`, headers: { cookie } };
+      return { ...base, method: "POST", path: `/api/labs/${labSlug}/attempts`, headers: { cookie, "content-type": "application/json" }, body: inFlight.body };
     },
     onResponse(status, body) {
-      const sent = state.inFlight!;
-      state.inFlight = null;
-      answering = sent.retry ? "retry" : "submit";
-      recorder.record(answering, status);
-      if (!isSuccess(status)) return;
+      const sent = inFlight!;
+      inFlight = null;
+      answered = sent.kind;
+      recorder.record(sent.kind, status);
+      if (sent.kind === "page" || !isSuccess(status)) return;
       const attemptId = (JSON.parse(body) as { attempt: { id: string } }).attempt.id;
-      if (!sent.retry) {
+      const state = sent.learnerState;
+      if (sent.kind === "submit") {
         recorder.firstTimeStored += 1;
-        state.last = { body: sent.body, attemptId };
+        state.last = { body: sent.body!, attemptId };
       } else if (attemptId === state.last?.attemptId && status === 200) recorder.retriesReplayed += 1;
       else recorder.retriesDiverged += 1;
     },
   };
-  const page: Request = {
-    method: "GET",
-    path: `/labs/${learner.labSlug}`,
-    headers,
-    onResponse(status) {
-      answering = "page";
-      recorder.record("page", status);
-    },
-  };
-  // autocannon reports each response's time after its onResponse, so `answering` names its kind.
-  client.on("response", (_status, _bytes, durationMs) => recorder.addLatency(answering, durationMs));
-  client.on("done", () => {
-    if (state.inFlight && !state.inFlight.retry) recorder.unanswered.push({ learner, body: state.inFlight.body });
-    state.inFlight = null;
-  });
-  return mode === "mix" ? [submit, page] : mode === "pages" ? [page] : [submit];
+  // autocannon reports each response's time right after its onResponse, so `answered` names its kind.
+  client.on("response", (_status, _bytes, durationMs) => recorder.addLatency(answered, durationMs));
+  client.on("done", loseInFlight);
+  return [request];
 }
 
+/**
+ * One connection per learner, each sending its next request as soon as the last is answered; or,
+ * with `requestsPerSecond`, that many connections at one request a second each (autocannon's
+ * smallest pace), the learners taking turns on them.
+ */
 async function load(params: {
   baseUrl: string;
   learners: BenchLearner[];
   seconds: number;
-  mode: "mix" | "pages" | "submits";
+  mode: DriverRequest["mode"];
   recorder: PhaseRecorder;
   retryEvery: number;
-  connectionRate?: number;
+  requestsPerSecond?: number;
 }): Promise<void> {
+  const connections = Math.min(params.learners.length, params.requestsPerSecond || params.learners.length);
+  const shares = Array.from({ length: connections }, (_, c) => params.learners.filter((_, i) => i % connections === c));
   let next = 0;
   await autocannon({
     url: params.baseUrl,
-    connections: params.learners.length,
+    connections,
     duration: params.seconds,
     timeout: TIMEOUT_SECONDS,
-    ...(params.connectionRate ? { connectionRate: params.connectionRate } : {}),
+    ...(params.requestsPerSecond ? { connectionRate: 1 } : {}),
     setupClient(client) {
-      const learner = params.learners[next++ % params.learners.length];
-      client.setRequests(learnerRequests(learner, params.recorder, client, params.mode, params.retryEvery));
+      client.setRequests(connectionRequests(shares[next++], params.recorder, client, params.mode, params.retryEvery));
     },
   });
 }
@@ -168,7 +175,7 @@ async function settleUnanswered(baseUrl: string, recorder: PhaseRecorder): Promi
 async function runPhase(request: DriverRequest): Promise<PhaseFigures> {
   const recorder = new PhaseRecorder();
   const common = { baseUrl: request.baseUrl, recorder, retryEvery: request.retryEvery };
-  const runs = [load({ ...common, learners: request.learners, seconds: request.seconds, mode: request.mode, connectionRate: request.connectionRate })];
+  const runs = [load({ ...common, learners: request.learners, seconds: request.seconds, mode: request.mode, requestsPerSecond: request.requestsPerSecond })];
   if (request.probe) {
     runs.push(load({ ...common, learners: request.probe, seconds: request.seconds, mode: "pages" }));
   }

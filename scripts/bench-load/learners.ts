@@ -6,11 +6,14 @@
  * Needs process.env to hold the instance's environment before it is imported.
  */
 import { and, eq, inArray, like } from "drizzle-orm";
+import type { Pool } from "pg";
 import { db } from "@/db/client";
+import type { Database } from "@/db/connection";
 import { demoCohorts, demoSchool } from "@/db/demo-data";
 import { markLessonsCompleted } from "@/db/queries/progress";
 import { cohortMemberships, cohorts, labAttempts, schools, users } from "@/db/schema";
 import { getCourse, type Lab } from "@/lessons";
+import { formatInUnit } from "@/lib/answers";
 import { hashPassword } from "@/lib/auth/password";
 import { createSession } from "@/lib/auth/session-store";
 import type { BenchLearner } from "./protocol";
@@ -54,9 +57,16 @@ export async function createBenchLearners(count: number): Promise<BenchLearner[]
   );
 }
 
-/** The lab's own reference solution and its first catalogued mistake: valid for every learner's variant. */
+/** The lab's own reference solution and its first catalogued mistake (valid for every learner's variant), and right answers. */
 function labWork(lab: Lab): Omit<BenchLearner, "cookie"> {
-  return { labSlug: lab.slug, passing: lab.reference.solution, failing: lab.reference.mistakes[0].choices };
+  const answers = Object.fromEntries(lab.questions.map((q) => [q.id, formatInUnit(q.answer.value, q.answer.unit)]));
+  return { labSlug: lab.slug, passing: lab.reference.solution, failing: lab.reference.mistakes[0].choices, answers };
+}
+
+/** Lets the instance's database stop without this process's idle connections erroring. */
+export async function closeBenchDatabase(): Promise<void> {
+  // db/client keeps its pool to itself; its proxy still hands out drizzle's own $client, the pg Pool.
+  await (db as Database & { $client: Pool }).$client.end();
 }
 
 /** Attempts stored for the bench learners, all labs together. */

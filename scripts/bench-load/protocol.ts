@@ -1,21 +1,20 @@
 // What the load benchmark's orchestrator (scripts/bench-load.ts) and its traffic driver
 // (driver.ts, a child process) say to each other.
 
-/** A bench learner with a session, the lab they work on, and choices that pass and fail it. */
-export type BenchLearner = { cookie: string; labSlug: string; passing: unknown; failing: unknown };
+/** A bench learner with a session, the lab they work on, choices that pass and fail it, and the answers to its questions. */
+export type BenchLearner = { cookie: string; labSlug: string; passing: unknown; failing: unknown; answers: Record<string, string> };
 
 export type RequestKind = "submit" | "retry" | "page";
 
 export type DriverRequest = {
   baseUrl: string;
   seconds: number;
-  /** One connection per learner. */
   learners: BenchLearner[];
   mode: "mix" | "pages" | "submits";
   /** Every n-th submission of a learner resends the previous one with the same key (0: never). */
   retryEvery: number;
-  /** Requests per second per learner; unset, each learner sends its next request as soon as the last is answered. */
-  connectionRate?: number;
+  /** Requests per second offered, the learners taking turns; unset, each learner has a connection and sends its next request as soon as the last is answered. */
+  requestsPerSecond?: number;
   /** Learners who only load their workbench alongside, on connections of their own. */
   probe?: BenchLearner[];
 };
