@@ -12,8 +12,8 @@
  *    learner a connection sending as soon as answered, which measures capacity, not latency.
  * 2. Grading burst: a few learners only load their workbench, first alone, then while the others
  *    submit LOAD_BURST_RATE (default 40) attempts a second; LOAD_BURST_SECONDS (default 15) each.
- *    Done once with the grading threads and once, after a restart, grading on the request thread
- *    (GRADING_THREADS=0): the reference run whose ratios show what the threads give.
+ *    LOAD_BURST_ROUNDS (default 2) rounds, each once with the grading threads and once grading on
+ *    the request thread (GRADING_THREADS=0): the reference whose ratios show what the threads give.
  * 3. Counts the stored attempts and compares them with the first-time submissions answered 2xx.
  *
  * Targets (hardening issue, point 3): no 5xx, p95 under 300 ms for each kind of request in the
@@ -32,7 +32,7 @@ import type { BenchLearner, DriverReply, DriverRequest, KindFigures, PhaseFigure
 
 const TARGET_P95_MS = 300;
 const RETRY_EVERY = 3;
-const PROBE_LEARNERS = 4;
+const PROBE_LEARNERS = 2;
 const WARM_UP_SECONDS = 5;
 
 function envNumber(name: string, fallback: number): number {
@@ -49,6 +49,7 @@ const settings = {
   rate: envNumber("LOAD_RATE", 20),
   burstRate: envNumber("LOAD_BURST_RATE", 40),
   burstSeconds: envNumber("LOAD_BURST_SECONDS", 15),
+  burstRounds: Math.max(1, envNumber("LOAD_BURST_ROUNDS", 2)),
   portBase: envNumber("LOAD_PORT_BASE", 58000),
 };
 
@@ -101,6 +102,13 @@ function nonSuccess(figures: PhaseFigures): Record<string, number> {
   return breakdown;
 }
 
+type BurstFigures = { alone: number | null; burst: number | null; submitsPerSecond: number };
+
+function meanOf(rounds: BurstFigures[]): BurstFigures {
+  const mean = (values: (number | null)[]) => (values.includes(null) ? null : (values as number[]).reduce((a, b) => a + b, 0) / values.length);
+  return { alone: mean(rounds.map((r) => r.alone)), burst: mean(rounds.map((r) => r.burst)), submitsPerSecond: mean(rounds.map((r) => r.submitsPerSecond))! };
+}
+
 const yes = (met: boolean) => (met ? "yes" : "NO");
 
 function paceOf(requestsPerSecond: number): string {
@@ -131,8 +139,12 @@ async function main(): Promise<void> {
     };
     const rate = settings.rate > 0 ? { requestsPerSecond: settings.rate } : {};
     const burstRate = settings.burstRate > 0 ? { requestsPerSecond: settings.burstRate } : {};
-    const burstPair = async (label: string, warmUp: boolean) => {
-      if (warmUp) await run(`${label}: warm-up`, { learners, seconds: WARM_UP_SECONDS, mode: "mix", ...rate });
+    // The two ways of grading take turns, each on a freshly started server, so that the other
+    // work on the machine weighs on both alike.
+    const burstRound = async (label: string, appEnv: Record<string, string>): Promise<BurstFigures> => {
+      await instance.stopPart("app");
+      await instance.startPart("app", appEnv);
+      await run(`${label}: warm-up`, { learners, seconds: WARM_UP_SECONDS, mode: "mix", ...rate });
       const alone = await run(`${label}: workbench alone`, { learners: probe, seconds: settings.burstSeconds, mode: "pages" });
       const burst = await run(`${label}: workbench during burst`, { learners: submitters, seconds: settings.burstSeconds, mode: "submits", probe, ...burstRate });
       return { alone: alone.kinds.page?.p95 ?? null, burst: burst.kinds.page?.p95 ?? null, submitsPerSecond: (burst.kinds.submit?.count ?? 0) / burst.seconds };
@@ -142,10 +154,14 @@ async function main(): Promise<void> {
     await run("warm-up", { learners, seconds: WARM_UP_SECONDS, mode: "mix", ...rate });
     const mix = await run("mix", { learners, seconds: settings.seconds, mode: "mix", ...rate });
     const threads = gradingThreadCount();
-    const pooled = await burstPair(`grading threads (${threads})`, false);
-    await instance.stopPart("app");
-    await instance.startPart("app", { GRADING_THREADS: "0" });
-    const inline = await burstPair("request thread (reference)", true);
+    const pooledRounds: BurstFigures[] = [];
+    const inlineRounds: BurstFigures[] = [];
+    for (let round = 1; round <= settings.burstRounds; round++) {
+      pooledRounds.push(await burstRound(`round ${round}, grading threads (${threads})`, {}));
+      inlineRounds.push(await burstRound(`round ${round}, request thread (reference)`, { GRADING_THREADS: "0" }));
+    }
+    const pooled = meanOf(pooledRounds);
+    const inline = meanOf(inlineRounds);
 
     const stored = await countBenchAttempts();
     await closeBenchDatabase();
@@ -172,7 +188,7 @@ async function main(): Promise<void> {
       "",
       `Stored attempts ${stored}, first-time 2xx answers in all phases ${expected}: ${stored === expected ? "equal" : "NOT equal"}`,
       "",
-      `Workbench p95, alone and during a grading burst (${paceOf(settings.burstRate).replace("requests", "submissions")}):`,
+      `Workbench p95 (mean of ${settings.burstRounds} rounds), alone and during a grading burst (${paceOf(settings.burstRate).replace("requests", "submissions")}):`,
       `  grading threads (${threads}):     alone ${ms(pooled.alone)}, burst ${ms(pooled.burst)} (${ratio(pooled.burst, pooled.alone)}), ${pooled.submitsPerSecond.toFixed(1)} submissions/s`,
       `  request thread (reference): alone ${ms(inline.alone)}, burst ${ms(inline.burst)} (${ratio(inline.burst, inline.alone)}), ${inline.submitsPerSecond.toFixed(1)} submissions/s`,
       `  during the burst, request thread / grading threads: ${ratio(inline.burst, pooled.burst)}`,
@@ -186,7 +202,7 @@ async function main(): Promise<void> {
     ];
     console.log(report.join("\n"));
     const file = path.join(import.meta.dirname, "..", ".data", "bench-load.json");
-    const json = { settings, machine: { cores: availableParallelism(), loadAverageAtStart: load }, gradingThreads: threads, phases, stored, firstTime2xx: expected, burst: { pooled, inline }, targets };
+    const json = { settings, machine: { cores: availableParallelism(), loadAverageAtStart: load }, gradingThreads: threads, phases, stored, firstTime2xx: expected, burst: { pooled, inline, pooledRounds, inlineRounds }, targets };
     writeFileSync(file, `${JSON.stringify(json, null, 2)}\n`);
     console.log(`\nFigures written to ${path.relative(process.cwd(), file)}`);
   } finally {

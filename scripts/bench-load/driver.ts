@@ -72,7 +72,8 @@ type Sent = { learnerState: LearnerState; kind: RequestKind; body?: string };
  * one with its key, as a browser resends after a lost answer) and loads its workbench, again and again; or, by `mode`, only one of the two.
  */
 function connectionRequests(learners: BenchLearner[], recorder: PhaseRecorder, client: Client, mode: DriverRequest["mode"], retryEvery: number): Request[] {
-  const states: LearnerState[] = learners.map((learner, i) => ({ learner, offset: i % Math.max(1, retryEvery), turns: 0, submissions: 0, last: null }));
+  // Half the learners start by loading their workbench, so that even a short window sees both kinds.
+  const states: LearnerState[] = learners.map((learner, i) => ({ learner, offset: i % Math.max(1, retryEvery), turns: i % 2, submissions: 0, last: null }));
   let turn = 0;
   let inFlight: Sent | null = null;
   let answered: RequestKind = "page";
