@@ -132,9 +132,12 @@ async function main(): Promise<void> {
     const submitters = learners.slice(PROBE_LEARNERS);
     const baseUrl = instance.baseUrl;
     const phases: Record<string, PhaseFigures> = {};
+    // Other work on the machine takes CPU from the server: each phase's load average says how much.
+    const loadAverages: Record<string, number> = {};
     const run = async (name: string, request: Omit<DriverRequest, "baseUrl" | "retryEvery">) => {
       phases[name] = await driver.run({ baseUrl, retryEvery: RETRY_EVERY, ...request });
-      console.log(kindLines(name, phases[name]).join("\n"));
+      loadAverages[name] = loadavg()[0];
+      console.log(kindLines(`${name} (load average after it ${loadAverages[name].toFixed(1)})`, phases[name]).join("\n"));
       return phases[name];
     };
     const rate = settings.rate > 0 ? { requestsPerSecond: settings.rate } : {};
@@ -181,7 +184,7 @@ async function main(): Promise<void> {
 
     const report = [
       "",
-      ...kindLines(`Mix (${paceOf(settings.rate)})`, mix),
+      ...kindLines(`Mix (${paceOf(settings.rate)}; load average ${load.toFixed(1)} before, ${loadAverages.mix.toFixed(1)} after)`, mix),
       `  non-2xx: ${JSON.stringify(nonSuccess(mix))}; 5xx in all phases: ${fiveXX}`,
       `  resends: ${retries?.count ?? 0}, replayed with the stored attempt: ${mix.retriesReplayed}, answered with another attempt: ${diverged}`,
       `  first-time submissions unanswered at the window's end or timed out: ${mix.unanswered}, settled by resending their key: ${mix.settledByRetry}`,
@@ -202,7 +205,7 @@ async function main(): Promise<void> {
     ];
     console.log(report.join("\n"));
     const file = path.join(import.meta.dirname, "..", ".data", "bench-load.json");
-    const json = { settings, machine: { cores: availableParallelism(), loadAverageAtStart: load }, gradingThreads: threads, phases, stored, firstTime2xx: expected, burst: { pooled, inline, pooledRounds, inlineRounds }, targets };
+    const json = { settings, machine: { cores: availableParallelism(), loadAverageAtStart: load, loadAverageAfterPhase: loadAverages }, gradingThreads: threads, phases, stored, firstTime2xx: expected, burst: { pooled, inline, pooledRounds, inlineRounds }, targets };
     writeFileSync(file, `${JSON.stringify(json, null, 2)}\n`);
     console.log(`\nFigures written to ${path.relative(process.cwd(), file)}`);
   } finally {
