@@ -142,19 +142,22 @@ async function main(): Promise<void> {
     };
     const rate = settings.rate > 0 ? { requestsPerSecond: settings.rate } : {};
     const burstRate = settings.burstRate > 0 ? { requestsPerSecond: settings.burstRate } : {};
+    // A fresh server loads each route's code on its first request: a few learners, one request at a
+    // time, load it without leaving a queue behind for the measured phase.
+    const warmUp = { learners: probe, seconds: WARM_UP_SECONDS, mode: "mix" } as const;
     // The two ways of grading take turns, each on a freshly started server, so that the other
     // work on the machine weighs on both alike.
     const burstRound = async (label: string, appEnv: Record<string, string>): Promise<BurstFigures> => {
       await instance.stopPart("app");
       await instance.startPart("app", appEnv);
-      await run(`${label}: warm-up`, { learners, seconds: WARM_UP_SECONDS, mode: "mix", ...rate });
+      await run(`${label}: warm-up`, warmUp);
       const alone = await run(`${label}: workbench alone`, { learners: probe, seconds: settings.burstSeconds, mode: "pages" });
       const burst = await run(`${label}: workbench during burst`, { learners: submitters, seconds: settings.burstSeconds, mode: "submits", probe, ...burstRate });
       return { alone: alone.kinds.page?.p95 ?? null, burst: burst.kinds.page?.p95 ?? null, submitsPerSecond: (burst.kinds.submit?.count ?? 0) / burst.seconds };
     };
 
     console.log("Phases:");
-    await run("warm-up", { learners, seconds: WARM_UP_SECONDS, mode: "mix", ...rate });
+    await run("warm-up", warmUp);
     const mix = await run("mix", { learners, seconds: settings.seconds, mode: "mix", ...rate });
     const threads = gradingThreadCount();
     const pooledRounds: BurstFigures[] = [];
