@@ -125,7 +125,9 @@ function connectionRequests(learners: BenchLearner[], recorder: PhaseRecorder, c
 /**
  * One connection per learner, each sending its next request as soon as the last is answered; or,
  * with `requestsPerSecond`, that many connections at one request a second each (autocannon's
- * smallest pace), the learners taking turns on them.
+ * smallest pace), the learners taking turns on them. autocannon paces all connections of one run
+ * on the same second ticks, which would send every second's requests at one instant; one run per
+ * paced connection, started a fraction of a second after the last, spreads them over the second.
  */
 async function load(params: {
   baseUrl: string;
@@ -136,19 +138,31 @@ async function load(params: {
   retryEvery: number;
   requestsPerSecond?: number;
 }): Promise<void> {
-  const connections = Math.min(params.learners.length, params.requestsPerSecond || params.learners.length);
+  const run = (learners: BenchLearner[][], paced: boolean) => {
+    let next = 0;
+    return autocannon({
+      url: params.baseUrl,
+      connections: learners.length,
+      duration: params.seconds,
+      timeout: TIMEOUT_SECONDS,
+      ...(paced ? { connectionRate: 1 } : {}),
+      setupClient(client) {
+        client.setRequests(connectionRequests(learners[next++], params.recorder, client, params.mode, params.retryEvery));
+      },
+    });
+  };
+  if (!params.requestsPerSecond) {
+    await run(params.learners.map((learner) => [learner]), false);
+    return;
+  }
+  const connections = Math.min(params.learners.length, params.requestsPerSecond);
   const shares = Array.from({ length: connections }, (_, c) => params.learners.filter((_, i) => i % connections === c));
-  let next = 0;
-  await autocannon({
-    url: params.baseUrl,
-    connections,
-    duration: params.seconds,
-    timeout: TIMEOUT_SECONDS,
-    ...(params.requestsPerSecond ? { connectionRate: 1 } : {}),
-    setupClient(client) {
-      client.setRequests(connectionRequests(shares[next++], params.recorder, client, params.mode, params.retryEvery));
-    },
-  });
+  await Promise.all(
+    shares.map(async (share, c) => {
+      await new Promise((resolve) => setTimeout(resolve, (c * 1000) / connections));
+      await run([share], true);
+    }),
+  );
 }
 
 /**
