@@ -104,13 +104,27 @@ const hostileValue: fc.Arbitrary<unknown> = fc.oneof(
   fc.constantFrom(null, true, 0, -1, 1e308, -0, "", [], {}),
 );
 
+// Values that can never be a resistance in ohms or a set of typed answers, so a body built around
+// a valid part stays invalid: a random number could be a fine resistor, and {} fine answers.
+const notAResistance = fc.oneof(
+  hostileValue.filter((value) => typeof value !== "number"),
+  fc.constantFrom(-1, -47, 1e308),
+);
+const notAnswers = hostileValue.filter(
+  (value) =>
+    value === null ||
+    typeof value !== "object" ||
+    Array.isArray(value) ||
+    Object.values(value).some((answer) => typeof answer !== "string" || answer.length > 200),
+);
+
 // Bodies shaped like a submission with one part wrong, so the checks behind the first one are reached too.
 const attemptBody: fc.Arbitrary<unknown> = fc.oneof(
   hostileValue,
   fc.record({ choices: hostileValue, idempotencyKey: fc.oneof(fc.uuid(), hostileValue) }),
   fc.record({ choices: fc.dictionary(fc.oneof(fc.string(), pollutingKey), hostileValue), idempotencyKey: fc.uuid() }),
-  fc.record({ choices: fc.record({ main: fc.record({ seriesResistance: hostileValue }) }), idempotencyKey: fc.uuid() }),
-  fc.record({ choices: fc.record({ main: fc.record({ seriesResistance: fc.constant(150) }) }), idempotencyKey: fc.uuid(), answers: hostileValue }),
+  fc.record({ choices: fc.record({ main: fc.record({ seriesResistance: notAResistance }) }), idempotencyKey: fc.uuid() }),
+  fc.record({ choices: fc.record({ main: fc.record({ seriesResistance: fc.constant(150) }) }), idempotencyKey: fc.uuid(), answers: notAnswers }),
   fc.record({ choices: fc.constant({ main: { seriesResistance: 150 } }), idempotencyKey: fc.uuid(), [`extra`]: hostileValue }),
 );
 
