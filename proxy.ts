@@ -1,4 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { isDatabaseReachable } from "@/lib/outage/database-probe";
+import { unavailablePageResponse } from "@/lib/outage/unavailable-page";
 
 // Sets the per-request Content-Security-Policy (and HSTS) on every page, and refuses form posts
 // from other sites. The headers that never change per request (referrer, nosniff, framing,
@@ -80,13 +82,25 @@ function refusal(status: number, message: string): NextResponse {
   return new NextResponse(message, { status, headers: { "content-type": "text/plain; charset=utf-8", "cache-control": "no-store" } });
 }
 
-export function proxy(request: NextRequest) {
+function withTransportSecurity<T extends Response>(response: T): T {
+  if (isProduction && servedOverHttps) {
+    response.headers.set("strict-transport-security", "max-age=63072000; includeSubDomains");
+  }
+  return response;
+}
+
+export async function proxy(request: NextRequest) {
   if (isCrossSitePost(request)) {
     return refusal(403, "This form was sent from another site, so it was not accepted. Open the page on this site and send it again.");
   }
   if (isOversizedPost(request)) {
     return refusal(413, "This form is larger than 1 MB, so it was not accepted. Shorten what you typed or attach a smaller file.");
   }
+  // Pages read the session and their records from the database, and a page cannot set its status
+  // once it has failed, so an outage is answered here. Server actions go on: their forms keep what
+  // was typed and say why.
+  if (!request.headers.has("next-action") && !(await isDatabaseReachable())) return withTransportSecurity(unavailablePageResponse());
+
   const policy = contentSecurityPolicy(createNonce());
   // Next takes the nonce for its own inline scripts from the policy on the request.
   const requestHeaders = new Headers(request.headers);
@@ -94,10 +108,7 @@ export function proxy(request: NextRequest) {
 
   const response = NextResponse.next({ request: { headers: requestHeaders } });
   response.headers.set("content-security-policy", policy);
-  if (isProduction && servedOverHttps) {
-    response.headers.set("strict-transport-security", "max-age=63072000; includeSubDomains");
-  }
-  return response;
+  return withTransportSecurity(response);
 }
 
 export const config = {

@@ -6,8 +6,12 @@ import { createDatabase, createPool, type Database } from "./connection";
 // instance is parked on globalThis to stop each reload from opening a new pool.
 const globalForDb = globalThis as { edgewiseDb?: Database };
 
+// No page or route needs a statement longer than this (the largest, a 10,000-row roster import,
+// writes in batches of 1,000); past it the request fails instead of holding a connection.
+const requestStatementLimits = { statementTimeoutMs: 15_000 };
+
 function openDatabase(): Database {
-  globalForDb.edgewiseDb ??= createDatabase(createPool(readDatabaseEnv().DATABASE_URL));
+  globalForDb.edgewiseDb ??= createDatabase(createPool(readDatabaseEnv().DATABASE_URL, undefined, requestStatementLimits));
   return globalForDb.edgewiseDb;
 }
 

@@ -30,13 +30,26 @@ export class AppError extends Error {
 
 export type ErrorBody = { error: { code: ErrorCode; message: string; fieldErrors?: Record<string, string[]> } };
 
-// Connection refused, database missing or shutting down, too many clients, connection lost.
-const unavailableCodes = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "3D000", "57P01", "57P03", "53300", "08001", "08006"]);
+// Connection refused, database missing or shutting down, too many clients, connection lost, a
+// statement cancelled by its timeout.
+const unavailableCodes = new Set([
+  "ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "3D000", "57P01", "57P02", "57P03", "53300", "08001", "08006", "57014",
+]);
+// The PostgreSQL client raises these without a code: no connection within its timeout, no free
+// connection in the pool in time, the server gone mid-query, no answer to a query in time.
+const unavailableMessages = new Set([
+  "timeout expired",
+  "timeout exceeded when trying to connect",
+  "Connection terminated due to connection timeout",
+  "Connection terminated unexpectedly",
+  "Query read timeout",
+]);
 
-function isServiceOutage(error: unknown): boolean {
+export function isServiceOutage(error: unknown): boolean {
   for (let current = error, depth = 0; current instanceof Error && depth < 4; current = current.cause, depth += 1) {
     const code = (current as { code?: unknown }).code;
     if (typeof code === "string" && unavailableCodes.has(code)) return true;
+    if (unavailableMessages.has(current.message)) return true;
   }
   return false;
 }

@@ -5,3 +5,12 @@ export function errorResponse(error: unknown): NextResponse {
   const { status, body } = describeError(error);
   return NextResponse.json(body, { status });
 }
+
+/** Runs a route handler's work and answers whatever it throws (a database outage, say) as a JSON error. */
+export async function respondSafely(work: () => Promise<Response>): Promise<Response> {
+  try {
+    return await work();
+  } catch (error) {
+    return errorResponse(error);
+  }
+}
