@@ -29,6 +29,12 @@ const mailSinkEnvSchema = z.object({
   MAIL_SINK_URL: z.preprocess((value) => (value === "" ? undefined : value), z.url().optional()),
 });
 
+// How soon an invitation e-mail that did not go out is tried again; each failed try doubles the
+// wait, up to 30 times this.
+const mailRetryEnvSchema = z.object({
+  INVITATION_MAIL_RETRY_SECONDS: z.coerce.number().positive().max(3_600).default(60),
+});
+
 export type DatabaseEnv = z.infer<typeof databaseEnvSchema>;
 export type AppEnv = z.infer<typeof appEnvSchema>;
 export type MailEnv = z.infer<typeof mailEnvSchema>;
@@ -59,3 +65,4 @@ export const readAppEnv = once(() => {
 });
 export const readMailEnv = once(() => readEnv(mailEnvSchema));
 export const readMailSinkUrl = once(() => readEnv(mailSinkEnvSchema).MAIL_SINK_URL?.replace(/\/+$/, ""));
+export const readMailRetryEnv = once(() => readEnv(mailRetryEnvSchema));

@@ -2,6 +2,7 @@ import { and, count, desc, eq, gt, inArray, isNull, ne, sql } from "drizzle-orm"
 import { db } from "../client";
 import type { Transaction } from "../connection";
 import { cohortMemberships, cohorts, invitations, sessions, users, type Invitation, type Role } from "../schema";
+import { awaitingFirstSend } from "./invitation-mail";
 import { unsetPasswordHash } from "./users";
 
 // Learners in cohorts as the school admin manages them: enrolment (one or thousands at once),
@@ -67,7 +68,8 @@ export type NewEnrolment = { name: string; email: string; tokenHash: string };
 /**
  * Enrols learners in one transaction: an account that cannot sign in until its invitation is
  * accepted, the cohort membership, and the invitation. A batch of statements per thousand people;
- * any failure (an address taken meanwhile, say) leaves nothing behind.
+ * any failure (an address taken meanwhile, say) leaves nothing behind. Returns each address's
+ * invitation id; the invitations wait for their e-mail (see ./invitation-mail).
  */
 export async function insertEnrolments(params: {
   schoolId: string;
@@ -75,7 +77,8 @@ export async function insertEnrolments(params: {
   invitedById: string | null;
   expiresAt: Date;
   people: NewEnrolment[];
-}): Promise<{ invitationIds: string[] }> {
+}): Promise<{ invitationIds: Map<string, string> }> {
+  const mailState = awaitingFirstSend(new Date());
   return db.transaction(async (tx) => {
     const [cohort] = await tx
       .select({ id: cohorts.id })
@@ -84,7 +87,7 @@ export async function insertEnrolments(params: {
       .for("share");
     if (!cohort) throw new Error(`Cohort ${params.cohortId} is not part of school ${params.schoolId}.`);
 
-    const invitationIds: string[] = [];
+    const invitationIds = new Map<string, string>();
     for (const batch of inBatches(params.people)) {
       const created = await tx
         .insert(users)
@@ -113,10 +116,11 @@ export async function insertEnrolments(params: {
             tokenHash: person.tokenHash,
             invitedById: params.invitedById,
             expiresAt: params.expiresAt,
+            ...mailState,
           })),
         )
-        .returning({ id: invitations.id });
-      invitationIds.push(...issued.map((row) => row.id));
+        .returning({ id: invitations.id, email: invitations.email });
+      for (const row of issued) invitationIds.set(row.email, row.id);
     }
     return { invitationIds };
   });
@@ -154,7 +158,7 @@ export async function addLearnerToCohort(params: { schoolId: string; cohortId: s
 }
 
 export type RosterMember = { userId: string; name: string; email: string; active: boolean; awaiting: boolean };
-export type RosterInvitation = Pick<Invitation, "id" | "email" | "expiresAt" | "usedAt" | "revokedAt" | "createdAt"> & {
+export type RosterInvitation = Pick<Invitation, "id" | "email" | "expiresAt" | "usedAt" | "revokedAt" | "createdAt" | "mailPendingSince"> & {
   hasAccount: boolean;
 };
 
@@ -194,6 +198,7 @@ export async function listCohortRoster(params: {
         usedAt: invitations.usedAt,
         revokedAt: invitations.revokedAt,
         createdAt: invitations.createdAt,
+        mailPendingSince: invitations.mailPendingSince,
         hasAccount: sql<boolean>`exists (select 1 from ${users} u where u.email = ${invitations.email})`,
       })
       .from(invitations)
@@ -229,31 +234,41 @@ export async function findInvitationInSchool(params: { schoolId: string; invitat
 
 export type ReissuedInvitation = { email: string; role: Role; cohortId: string | null; tokenHash: string };
 
-/** New links for these addresses; every earlier open link for them stops working, in one transaction. */
+/**
+ * New links for these addresses; every earlier open link for them stops working, in one
+ * transaction. Returns each address's new invitation id; they wait for their e-mail.
+ */
 export async function reissueInvitations(params: {
   schoolId: string;
   invitedById: string | null;
   expiresAt: Date;
   now: Date;
   items: ReissuedInvitation[];
-}): Promise<void> {
-  if (params.items.length === 0) return;
+}): Promise<Map<string, string>> {
+  const invitationIds = new Map<string, string>();
+  if (params.items.length === 0) return invitationIds;
   await db.transaction(async (tx) => {
     for (const batch of inBatches(params.items)) {
       await revokeOpenInvitations(tx, { schoolId: params.schoolId, emails: batch.map((item) => item.email), now: params.now });
-      await tx.insert(invitations).values(
-        batch.map((item) => ({
-          schoolId: params.schoolId,
-          email: item.email,
-          role: item.role,
-          cohortId: item.cohortId,
-          tokenHash: item.tokenHash,
-          invitedById: params.invitedById,
-          expiresAt: params.expiresAt,
-        })),
-      );
+      const issued = await tx
+        .insert(invitations)
+        .values(
+          batch.map((item) => ({
+            schoolId: params.schoolId,
+            email: item.email,
+            role: item.role,
+            cohortId: item.cohortId,
+            tokenHash: item.tokenHash,
+            invitedById: params.invitedById,
+            expiresAt: params.expiresAt,
+            ...awaitingFirstSend(params.now),
+          })),
+        )
+        .returning({ id: invitations.id, email: invitations.email });
+      for (const row of issued) invitationIds.set(row.email, row.id);
     }
   });
+  return invitationIds;
 }
 
 async function revokeOpenInvitations(tx: Transaction, params: { schoolId: string; emails: string[]; now: Date }) {

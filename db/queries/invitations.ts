@@ -1,9 +1,13 @@
 import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import { db } from "../client";
 import { cohortMemberships, cohorts, invitations, schools, users, type Invitation, type Role } from "../schema";
+import { awaitingFirstSend } from "./invitation-mail";
 import { unsetPasswordHash } from "./users";
 
-/** Issues an invitation and revokes any earlier pending one for the same address, so one link is live. */
+/**
+ * Issues an invitation and revokes any earlier pending one for the same address, so one link is
+ * live. The invitation waits for its e-mail (see ./invitation-mail).
+ */
 export async function createInvitation(params: {
   schoolId: string;
   email: string;
@@ -25,7 +29,10 @@ export async function createInvitation(params: {
           isNull(invitations.revokedAt),
         ),
       );
-    const [invitation] = await tx.insert(invitations).values(params).returning();
+    const [invitation] = await tx
+      .insert(invitations)
+      .values({ ...params, ...awaitingFirstSend(new Date()) })
+      .returning();
     return invitation!;
   });
 }

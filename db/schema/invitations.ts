@@ -1,5 +1,5 @@
-import { relations } from "drizzle-orm";
-import { index, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { relations, sql } from "drizzle-orm";
+import { index, integer, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { cohorts } from "./cohorts";
 import { schools } from "./schools";
 import { roleEnum, users } from "./users";
@@ -21,8 +21,17 @@ export const invitations = pgTable(
     usedAt: timestamp("used_at", { withTimezone: true }),
     revokedAt: timestamp("revoked_at", { withTimezone: true }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    // The e-mail outbox: set while the link has not been e-mailed; a background job sends it again
+    // at mailNextTryAt, backing off after each failed try. Null once sent.
+    mailPendingSince: timestamp("mail_pending_since", { withTimezone: true }),
+    mailAttempts: integer("mail_attempts").notNull().default(0),
+    mailNextTryAt: timestamp("mail_next_try_at", { withTimezone: true }),
   },
-  (table) => [index("invitations_school_id_idx").on(table.schoolId), index("invitations_email_idx").on(table.email)],
+  (table) => [
+    index("invitations_school_id_idx").on(table.schoolId),
+    index("invitations_email_idx").on(table.email),
+    index("invitations_mail_waiting_idx").on(table.mailNextTryAt).where(sql`${table.mailPendingSince} is not null`),
+  ],
 );
 
 export const invitationsRelations = relations(invitations, ({ one }) => ({

@@ -9,6 +9,7 @@ import {
 import { findSchoolById } from "@/db/queries/schools";
 import { findUserByEmail } from "@/db/queries/users";
 import type { Role } from "@/db/schema";
+import { recordLetterOutcomes } from "@/lib/enrolment/letter-outcomes";
 import { readAppEnv } from "@/lib/env";
 import { sendInvitationEmail } from "@/lib/mail/send";
 import { hashPassword } from "./password";
@@ -48,14 +49,21 @@ export async function issueInvitation(params: {
     tokenHash: hashToken(token),
     expiresAt,
   });
-  await sendInvitationEmail({
-    to: params.email,
-    schoolName: school.name,
-    cohortName: cohort?.name ?? null,
-    inviterName: params.inviter?.name ?? null,
-    acceptUrl: `${readAppEnv().APP_URL}/invitations/${token}`,
-    expiresAt,
-  });
+  try {
+    await sendInvitationEmail({
+      to: params.email,
+      schoolName: school.name,
+      cohortName: cohort?.name ?? null,
+      inviterName: params.inviter?.name ?? null,
+      acceptUrl: `${readAppEnv().APP_URL}/invitations/${token}`,
+      expiresAt,
+    });
+  } catch (error) {
+    // The invitation stays in the outbox and is tried again in the background.
+    await recordLetterOutcomes({ sentIds: [], unsentIds: [invitation.id], now });
+    throw error;
+  }
+  await recordLetterOutcomes({ sentIds: [invitation.id], unsentIds: [], now });
   return { ok: true, invitationId: invitation.id, expiresAt };
 }
 

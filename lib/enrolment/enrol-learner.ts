@@ -40,14 +40,15 @@ export async function enrolLearner(params: {
 
   const { token, tokenHash } = issueToken();
   const expiresAt = invitationExpiry(now);
+  let invitationIds: Map<string, string>;
   try {
-    await insertEnrolments({
+    ({ invitationIds } = await insertEnrolments({
       schoolId,
       cohortId: cohort.id,
       invitedById: params.actor.id,
       expiresAt,
       people: [{ name: params.name, email: params.email, tokenHash }],
-    });
+    }));
   } catch (error) {
     // Someone registered or enrolled the address between the checks above and this insert.
     if (isUniqueViolation(error, "users_email_unique")) return { ok: false, reason: "address-taken" };
@@ -57,7 +58,7 @@ export async function enrolLearner(params: {
   const letters = await sendInvitationLetters({
     schoolName: school?.name ?? "your school",
     inviterName: params.actor.name,
-    letters: [{ to: params.email, token, cohortName: cohort.name, expiresAt }],
+    letters: [{ invitationId: invitationIds.get(params.email)!, to: params.email, token, cohortName: cohort.name, expiresAt }],
   });
   return { ok: true, outcome: "invited", letters };
 }

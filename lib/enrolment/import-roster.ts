@@ -76,14 +76,15 @@ export async function importRoster(params: {
     .map((row) => ({ name: row.name, email: row.email, ...issueToken() }));
   const expiresAt = invitationExpiry(now);
   const writeStarted = performance.now();
+  let invitationIds: Map<string, string>;
   try {
-    await insertEnrolments({
+    ({ invitationIds } = await insertEnrolments({
       schoolId: params.actor.schoolId,
       cohortId: cohort.id,
       invitedById: params.actor.id,
       expiresAt,
       people: people.map(({ name, email, tokenHash }) => ({ name, email, tokenHash })),
-    });
+    }));
   } catch (error) {
     if (!isUniqueViolation(error, "users_email_unique")) throw error;
     const again = await classifyFile({ ...params, now });
@@ -100,7 +101,13 @@ export async function importRoster(params: {
   const letters = await sendInvitationLetters({
     schoolName: school?.name ?? "your school",
     inviterName: params.actor.name,
-    letters: people.map((person) => ({ to: person.email, token: person.token, cohortName: cohort.name, expiresAt })),
+    letters: people.map((person) => ({
+      invitationId: invitationIds.get(person.email)!,
+      to: person.email,
+      token: person.token,
+      cohortName: cohort.name,
+      expiresAt,
+    })),
   });
   return { ok: true, imported: people.length, letters, timings: { writeMs, mailMs: performance.now() - mailStarted } };
 }

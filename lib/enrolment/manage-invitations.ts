@@ -20,7 +20,7 @@ export async function resendInvitation(params: { actor: Actor; invitationId: str
 
   const { token, tokenHash } = issueToken();
   const expiresAt = invitationExpiry(now);
-  await reissueInvitations({
+  const invitationIds = await reissueInvitations({
     schoolId: params.actor.schoolId,
     invitedById: params.actor.id,
     expiresAt,
@@ -30,7 +30,7 @@ export async function resendInvitation(params: { actor: Actor; invitationId: str
   const letters = await sendInvitationLetters({
     schoolName: await schoolName(params.actor.schoolId),
     inviterName: params.actor.name,
-    letters: [{ to: invitation.email, token, cohortName: invitation.cohortName, expiresAt }],
+    letters: [{ invitationId: invitationIds.get(invitation.email)!, to: invitation.email, token, cohortName: invitation.cohortName, expiresAt }],
   });
   return { ok: true, letters };
 }
@@ -48,7 +48,7 @@ export async function resendWaitingInvitations(params: { actor: Actor; cohortId:
   const waiting = await listWaitingInvitations({ schoolId: params.actor.schoolId, cohortId: cohort.id });
   const items = waiting.map((invitation) => ({ ...invitation, ...issueToken() }));
   const expiresAt = invitationExpiry(now);
-  await reissueInvitations({
+  const invitationIds = await reissueInvitations({
     schoolId: params.actor.schoolId,
     invitedById: params.actor.id,
     expiresAt,
@@ -58,7 +58,13 @@ export async function resendWaitingInvitations(params: { actor: Actor; cohortId:
   const letters = await sendInvitationLetters({
     schoolName: await schoolName(params.actor.schoolId),
     inviterName: params.actor.name,
-    letters: items.map((item) => ({ to: item.email, token: item.token, cohortName: cohort.name, expiresAt })),
+    letters: items.map((item) => ({
+      invitationId: invitationIds.get(item.email)!,
+      to: item.email,
+      token: item.token,
+      cohortName: cohort.name,
+      expiresAt,
+    })),
   });
   return { ok: true, reissued: items.length, letters };
 }

@@ -3,7 +3,7 @@ import type { RosterInvitation, RosterMember } from "@/db/queries/enrolment";
 // Where each person in a cohort stands, from their account and their newest invitation. Pure, so
 // the rules are tested without a database.
 
-export type RosterState = "accepted" | "deactivated" | "pending" | "expired" | "revoked" | "not-invited";
+export type RosterState = "accepted" | "deactivated" | "unsent" | "pending" | "expired" | "revoked" | "not-invited";
 
 export type RosterLine = {
   key: string;
@@ -18,6 +18,7 @@ export type RosterLine = {
 export const rosterStateLabels: Record<RosterState, string> = {
   accepted: "Accepted",
   deactivated: "Deactivated",
+  unsent: "E-mail not sent yet",
   pending: "Invitation pending",
   expired: "Invitation expired",
   revoked: "Invitation revoked",
@@ -29,7 +30,7 @@ function invitationState(invitation: RosterInvitation | undefined, now: Date): R
   if (invitation.usedAt) return "accepted";
   if (invitation.revokedAt) return "revoked";
   if (invitation.expiresAt <= now) return "expired";
-  return "pending";
+  return invitation.mailPendingSince ? "unsent" : "pending";
 }
 
 export function buildRoster(members: readonly RosterMember[], invitations: readonly RosterInvitation[], now: Date): RosterLine[] {
@@ -80,7 +81,7 @@ export function filterRoster(lines: readonly RosterLine[], filter: RosterFilter)
 }
 
 export function countRosterStates(lines: readonly RosterLine[]): Record<RosterState, number> {
-  const counts = { accepted: 0, deactivated: 0, pending: 0, expired: 0, revoked: 0, "not-invited": 0 };
+  const counts = { accepted: 0, deactivated: 0, unsent: 0, pending: 0, expired: 0, revoked: 0, "not-invited": 0 };
   for (const line of lines) counts[line.state] += 1;
   return counts;
 }

@@ -1,10 +1,12 @@
 import { readAppEnv } from "@/lib/env";
 import { sendInvitationEmail } from "@/lib/mail/send";
+import { recordLetterOutcomes } from "./letter-outcomes";
 
 // E-mails invitation links after their rows are committed. A failure never undoes an invitation:
-// the caller reports how many letters did not go out and the admin can send them again.
+// the caller reports how many letters did not go out, the rows stay in the outbox and are tried
+// again in the background, and the admin can also send them again at once.
 
-export type InvitationLetter = { to: string; token: string; cohortName: string | null; expiresAt: Date };
+export type InvitationLetter = { invitationId: string; to: string; token: string; cohortName: string | null; expiresAt: Date };
 export type LetterOutcome = { sent: number; unsent: number };
 
 // Each message opens its own SMTP connection, so several run side by side to keep a large import
@@ -38,7 +40,7 @@ export async function sendInvitationLetters(params: {
   letters: InvitationLetter[];
 }): Promise<LetterOutcome> {
   let next = 0;
-  let sent = 0;
+  const sentIds: string[] = [];
   let serverDown = false;
   const worker = async () => {
     while (!serverDown && next < params.letters.length) {
@@ -52,7 +54,7 @@ export async function sendInvitationLetters(params: {
           acceptUrl: acceptUrlFor(letter.token),
           expiresAt: letter.expiresAt,
         });
-        sent += 1;
+        sentIds.push(letter.invitationId);
       } catch (error) {
         console.error("An invitation e-mail was not sent:", error);
         if (!isPerMessageFailure(error)) serverDown = true;
@@ -60,12 +62,14 @@ export async function sendInvitationLetters(params: {
     }
   };
   await Promise.all(Array.from({ length: Math.min(parallelLetters, params.letters.length) }, worker));
-  return { sent, unsent: params.letters.length - sent };
+  const sent = new Set(sentIds);
+  await recordLetterOutcomes({ sentIds, unsentIds: params.letters.map((letter) => letter.invitationId).filter((id) => !sent.has(id)) });
+  return { sent: sentIds.length, unsent: params.letters.length - sentIds.length };
 }
 
 /** The sentence an admin reads when some letters did not go out. */
 export function describeUnsent(outcome: LetterOutcome): string | null {
   if (outcome.unsent === 0) return null;
   const what = outcome.unsent === 1 ? "1 invitation e-mail was" : `${outcome.unsent.toLocaleString("en-GB")} invitation e-mails were`;
-  return `${what} not sent because the mail server did not answer. The invitations are saved: use “Resend” (or “Resend all waiting”) once mail works again.`;
+  return `${what} not sent because the mail server did not answer. The invitations are saved and Edgewise keeps trying to send them on its own; “Resend” (or “Resend all waiting”) tries again at once.`;
 }

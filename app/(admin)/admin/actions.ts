@@ -52,7 +52,7 @@ export async function invitePerson(_previous: InviteState, formData: FormData): 
       revalidatePath("/admin");
       return {
         status: "warning",
-        message: `The invitation for ${parsed.data.email} is saved, but the e-mail was not sent because the mail server did not answer. Use “Resend” in the list once mail works again.`,
+        message: `The invitation for ${parsed.data.email} is saved, but the e-mail was not sent because the mail server did not answer. Edgewise keeps trying to send it on its own; “Resend” in the list tries again at once.`,
       };
     }
     return unexpectedFormState(error, values);

@@ -21,6 +21,7 @@ function intentsFor(state: RosterState, hasInvitation: boolean, hasAccount: bool
       return hasAccount ? ["deactivate"] : [];
     case "deactivated":
       return ["reactivate"];
+    case "unsent":
     case "pending":
       return ["resend", "revoke"];
     case "expired":

@@ -12,7 +12,7 @@ function member(name: string, fields: Partial<RosterMember> = {}): RosterMember 
 }
 
 function invitation(email: string, fields: Partial<RosterInvitation> = {}): RosterInvitation {
-  return { id: `inv-${email}`, email, expiresAt: later, usedAt: null, revokedAt: null, createdAt: earlier, hasAccount: true, ...fields };
+  return { id: `inv-${email}`, email, expiresAt: later, usedAt: null, revokedAt: null, createdAt: earlier, mailPendingSince: null, hasAccount: true, ...fields };
 }
 
 describe("where each person in a cohort stands", () => {
@@ -44,6 +44,19 @@ describe("where each person in a cohort stands", () => {
     ]);
     expect(roster.find((line) => line.name === "Cy")?.expiresAt).toEqual(later);
     expect(roster.find((line) => line.name === "Ed")?.expiresAt).toBeNull();
+  });
+
+  it("tells an open link whose e-mail has not gone out from one that was sent", () => {
+    const roster = buildRoster(
+      [member("Gus", { active: false, awaiting: true }), member("Hal", { active: false, awaiting: true })],
+      [invitation("gus@school.example", { mailPendingSince: earlier }), invitation("hal@school.example", { mailPendingSince: earlier, expiresAt: now })],
+      now,
+    );
+    expect(roster.map((line) => [line.name, line.state])).toEqual([
+      ["Gus", "unsent"],
+      ["Hal", "expired"],
+    ]);
+    expect(countRosterStates(roster)).toMatchObject({ unsent: 1, pending: 0, expired: 1 });
   });
 
   it("lists an invitation to the cohort whose person has no account yet", () => {

@@ -21,7 +21,7 @@ export const metadata: Metadata = { title: "Cohort" };
 
 const pageSize = 50;
 
-const stateFilters = ["all", "accepted", "pending", "expired", "revoked", "deactivated"] as const;
+const stateFilters = ["all", "accepted", "unsent", "pending", "expired", "revoked", "deactivated"] as const;
 
 const searchSchema = z.object({
   state: z.enum(stateFilters).catch("all"),
@@ -35,6 +35,11 @@ const notices = {
   saved: "Changes saved.",
   imported: "Import finished.",
 } as const;
+
+function describeWaitingMail(unsent: number): string {
+  const what = unsent === 1 ? "1 invitation e-mail has" : `${unsent.toLocaleString("en-GB")} invitation e-mails have`;
+  return `${what} not gone out yet because the mail server did not answer. Edgewise keeps trying on its own and sends them once mail works again; “Resend all waiting” tries at once.`;
+}
 
 export default async function AdminCohortPage({
   params,
@@ -79,6 +84,7 @@ export default async function AdminCohortPage({
         }
       />
       {search.notice ? <StatusNotice tone="success" message={notices[search.notice]} className="mb-6" /> : null}
+      {counts.unsent > 0 ? <StatusNotice tone="warning" message={describeWaitingMail(counts.unsent)} className="mb-6" /> : null}
       <div className="mb-6 flex flex-wrap items-start gap-3">
         <Link href={`/admin/cohorts/${cohort.id}/import`} className={buttonClass("primary")}>
           Import a CSV list
@@ -89,7 +95,7 @@ export default async function AdminCohortPage({
         <Link href={`/cohorts/${cohort.id}`} className={buttonClass("secondary")}>
           Progress and grade book
         </Link>
-        <ResendWaitingButton cohortId={cohort.id} waiting={counts.pending + counts.expired} />
+        <ResendWaitingButton cohortId={cohort.id} waiting={counts.unsent + counts.pending + counts.expired} />
       </div>
 
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,2fr)]">

@@ -6,7 +6,7 @@ import { StateBadge } from "./state-badge";
 
 type Filter = { state: RosterState | "all"; query: string };
 
-const filterOrder: (RosterState | "all")[] = ["all", "accepted", "pending", "expired", "revoked", "deactivated"];
+const filterOrder: (RosterState | "all")[] = ["all", "accepted", "unsent", "pending", "expired", "revoked", "deactivated"];
 
 function hrefFor(cohortId: string, filter: Filter, page = 1): string {
   const search = new URLSearchParams();

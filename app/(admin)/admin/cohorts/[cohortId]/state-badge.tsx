@@ -2,6 +2,7 @@ import { rosterStateLabels, type RosterState } from "@/lib/enrolment";
 
 const styles: Record<RosterState, string> = {
   accepted: "bg-ok-soft text-ok",
+  unsent: "bg-copper-soft text-copper",
   pending: "bg-accent-soft text-accent-strong",
   expired: "bg-copper-soft text-copper",
   revoked: "bg-sunken text-ink-soft",
