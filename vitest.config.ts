@@ -31,6 +31,17 @@ export default defineConfig({
           hookTimeout: 240_000,
         },
       },
+      {
+        // Each file runs its own copy of the app (scripts/app-instance.ts) and stops parts of it.
+        extends: true,
+        test: {
+          name: "faults",
+          include: ["tests/faults/**/*.test.ts"],
+          fileParallelism: false,
+          testTimeout: 180_000,
+          hookTimeout: 240_000,
+        },
+      },
     ],
   },
 });

@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # `npm test`: provisions everything the tests need on a fresh machine (Debian packages, npm
 # packages, a private test database cluster, the local mail sink, a production build) and runs
-# every suite: unit, integration, reference, browser. Ends with "N passed, N failed".
+# every suite: unit, integration, reference, browser, faults. Ends with "N passed, N failed".
 set -uo pipefail
 source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
@@ -41,8 +41,8 @@ start_local_services test
 set +e
 
 reports=()
-# `npm test -- <file filters>` runs only the matching test files; the browser suite (and the
-# build it needs) then runs only when a filter names an e2e file.
+# `npm test -- <file filters>` runs only the matching test files; the browser and fault suites
+# (and the build they need) then run only when a filter names an e2e or a faults file.
 filters=("$@")
 run_vitest() {
   local name="$1"
@@ -50,10 +50,10 @@ run_vitest() {
   npx vitest run --project "$name" --reporter=default --reporter=json --outputFile.json="test-results/$name.json" --passWithNoTests "${filters[@]}"
   reports+=("test-results/$name.json")
 }
-wants_browser_suite() {
+wants_suite() {
   [ ${#filters[@]} -eq 0 ] && return 0
   local filter
-  for filter in "${filters[@]}"; do [[ "$filter" == *e2e* ]] && return 0; done
+  for filter in "${filters[@]}"; do [[ "$filter" == *"$1"* ]] && return 0; done
   return 1
 }
 
@@ -61,21 +61,29 @@ run_vitest unit
 run_vitest integration
 run_vitest reference
 
-if ! wants_browser_suite; then
+if ! wants_suite e2e && ! wants_suite faults; then
   node scripts/test-summary.mjs "${reports[@]}"
   exit $?
 fi
 
-step "Building the app for the browser tests"
+step "Building the app for the browser and fault tests"
 if npx next build >"$DATA_DIR/build-test.log" 2>&1; then
-  require_free_port "$APP_PORT" "the browser tests serve the app there"
-  NODE_ENV=production start_background npx next start -H 127.0.0.1 -p "$APP_PORT" >"$DATA_DIR/app-test.log" 2>&1
-  pids+=($!)
-  wait_for_port "$APP_PORT" 60 "The app"
-  run_vitest e2e
+  if wants_suite e2e; then
+    require_free_port "$APP_PORT" "the browser tests serve the app there"
+    NODE_ENV=production start_background npx next start -H 127.0.0.1 -p "$APP_PORT" >"$DATA_DIR/app-test.log" 2>&1
+    pids+=($!)
+    wait_for_port "$APP_PORT" 60 "The app"
+    run_vitest e2e
+  fi
+  # The fault tests start private copies of the app (own cluster, mail sink, upload fake) on
+  # ports FAULTS_PORT_BASE+1…+31 and stop parts of them; the shared test cluster is not touched.
+  if wants_suite faults; then
+    export FAULTS_PORT_BASE="${FAULTS_PORT_BASE:-$((59000 + offset))}"
+    run_vitest faults
+  fi
 else
   tail -n 40 "$DATA_DIR/build-test.log"
-  echo "The build failed (full log: .data/build-test.log); the browser tests count as failed."
+  echo "The build failed (full log: .data/build-test.log); the browser and fault tests count as failed."
   echo '{"numPassedTests":0,"numFailedTests":1}' >test-results/build.json
   reports+=("test-results/build.json")
 fi
