@@ -43,6 +43,7 @@ const unavailableMessages = new Set([
   "Connection terminated due to connection timeout",
   "Connection terminated unexpectedly",
   "Query read timeout",
+  "Client has encountered a connection error and is not queryable",
 ]);
 
 export function isServiceOutage(error: unknown): boolean {

@@ -37,11 +37,13 @@ export function launchBrowser(): Promise<Browser> {
   });
 }
 
+/** A fresh browser context on the app at `origin` (the suite's app unless a test runs its own copy). */
 export async function openPage(
   browser: Browser,
   viewport: keyof typeof viewports = "wide",
+  origin = baseUrl,
 ): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser.newContext({ baseURL: baseUrl, viewport: viewports[viewport] });
+  const context = await browser.newContext({ baseURL: origin, viewport: viewports[viewport] });
   const page = await context.newPage();
   return { context, page };
 }

@@ -9,6 +9,13 @@ import { startBenchDraft } from "./actions";
 
 type Notice = { tone: "error" | "success"; text: string };
 
+const unreachableMessage = "Edgewise is not answering right now, so no photo was added. Try again in a moment.";
+const serviceDownMessage = "The photo service is not answering, so no photo was added. Try again in a moment.";
+
+// What the upload library reports when the service, or the app's side of it, failed rather than
+// refused the file; its own text for these names internals, not what the learner can do.
+const serviceFailureCodes = new Set<string>(["INTERNAL_SERVER_ERROR", "INTERNAL_CLIENT_ERROR", "UPLOAD_FAILED", "URL_GENERATION_FAILED"]);
+
 /**
  * Picks or takes photos and sends them through the upload route. Files are checked here first for
  * an instant answer; the server checks them again, and checks what arrived by its content.
@@ -21,7 +28,7 @@ export function PhotoUploader({ exerciseSlug, storedCount }: { exerciseSlug: str
   const [dragging, setDragging] = useState(false);
   const { startUpload, isUploading } = useUploadThing("benchPhoto", {
     onUploadProgress: setProgress,
-    onUploadError: (error) => setNotices([{ tone: "error", text: error.message }]),
+    onUploadError: (error) => setNotices([{ tone: "error", text: serviceFailureCodes.has(error.code) ? serviceDownMessage : error.message }]),
   });
   const room = benchPhotoLimits.maxPhotos - storedCount;
   const busy = isUploading || progress !== null;
@@ -44,6 +51,10 @@ export function PhotoUploader({ exerciseSlug, storedCount }: { exerciseSlug: str
         ),
       );
       router.refresh();
+    } catch {
+      // The server action itself could not be reached or answered (Edgewise is restarting, or its
+      // database is down); the upload never started.
+      setNotices([{ tone: "error", text: unreachableMessage }]);
     } finally {
       setProgress(null);
     }

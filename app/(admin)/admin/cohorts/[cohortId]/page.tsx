@@ -38,7 +38,7 @@ const notices = {
 
 function describeWaitingMail(unsent: number): string {
   const what = unsent === 1 ? "1 invitation e-mail has" : `${unsent.toLocaleString("en-GB")} invitation e-mails have`;
-  return `${what} not gone out yet because the mail server did not answer. Edgewise keeps trying on its own and sends them once mail works again; “Resend all waiting” tries at once.`;
+  return `${what} not gone out yet because the mail server did not answer. Edgewise keeps trying on its own and sends ${unsent === 1 ? "it" : "them"} once mail works again; “Resend all waiting” tries at once.`;
 }
 
 export default async function AdminCohortPage({
