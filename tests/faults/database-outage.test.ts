@@ -183,6 +183,12 @@ describe("the database stops during a run of lab submissions and page loads", ()
     const retried = await Promise.all(unacknowledged.map((s) => submit(s.learner, s.key)));
     expect(retried.map((r) => r.exchange.status).filter((status) => status !== 200 && status !== 201)).toEqual([]);
 
+    const count = (status: number) => retried.filter((r) => r.exchange.status === status).length;
+    console.log(
+      `${run.submissions.length} submissions, ${acknowledged.length} acknowledged; of ${retried.length} retried, ` +
+        `${count(200)} had been stored already (replayed) and ${count(201)} were stored now.`,
+    );
+
     const after = await db.select().from(labAttempts).where(inArray(labAttempts.userId, learners.map((l) => l.id)));
     const keys = after.map((row) => row.idempotencyKey);
     for (const submission of run.submissions) expect(keys.filter((key) => key === submission.key)).toHaveLength(1);

@@ -76,7 +76,7 @@ describe("adding a bench photo while a service behind it is down", () => {
       const message = page.getByText("The photo service is not answering", { exact: false });
       await message.waitFor({ timeout: 60_000 });
       await expectIdleUploader(page);
-      expect(await page.locator('[role="status"]').innerText()).not.toMatch(stackTracePattern);
+      expect(await page.getByRole("region", { name: /^Photos/ }).getByRole("status").innerText()).not.toMatch(stackTracePattern);
       await saveScreenshot(page, "faults-upload-service-down-wide");
       expect(await storedPhotos()).toEqual([]);
 
