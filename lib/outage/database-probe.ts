@@ -1,4 +1,5 @@
 import pg from "pg";
+import { readDatabaseEnv } from "@/lib/env";
 
 // Whether the database answers, as the request proxy needs it before a page renders: a page that
 // fails half-way can no longer change its status, so the outage has to be known first. One
@@ -15,16 +16,19 @@ let verdict: Verdict | undefined;
 let probing: Promise<boolean> | undefined;
 
 function probePool(): pg.Pool {
-  pool ??= new pg.Pool({
-    connectionString: process.env.DATABASE_URL,
-    max: 1,
-    idleTimeoutMillis: 0,
-    connectionTimeoutMillis: probeTimeoutMs,
-    query_timeout: probeTimeoutMs,
-  });
-  pool.removeAllListeners("error").on("error", () => {
-    verdict = undefined;
-  });
+  if (!pool) {
+    pool = new pg.Pool({
+      connectionString: readDatabaseEnv().DATABASE_URL,
+      max: 1,
+      idleTimeoutMillis: 0,
+      connectionTimeoutMillis: probeTimeoutMs,
+      query_timeout: probeTimeoutMs,
+    });
+    // The server closed the kept connection (shut down, restarted, link lost): ask again next time.
+    pool.on("error", () => {
+      verdict = undefined;
+    });
+  }
   return pool;
 }
 
