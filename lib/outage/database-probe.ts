@@ -21,6 +21,8 @@ function probePool(): pg.Pool {
       connectionString: readDatabaseEnv().DATABASE_URL,
       max: 1,
       idleTimeoutMillis: 0,
+      // The kept connection must not hold a process open that has nothing else left to do.
+      allowExitOnIdle: true,
       connectionTimeoutMillis: probeTimeoutMs,
       query_timeout: probeTimeoutMs,
     });
