@@ -65,7 +65,8 @@ export async function POST(request: Request, context: Context): Promise<NextResp
       throw new AppError("conflict", "That submission key was already used for another lab. Submit again.");
     }
     const attempt = toAttemptView(recorded.attempt);
-    if (recorded.status === "created" && attempt.passed) await checkCertificateAfterCourseWork({ userId: user.id });
+    // A replay checks too: the first answer may have been cut off between the commit and the check.
+    if (attempt.passed) await checkCertificateAfterCourseWork({ userId: user.id });
     return withSession(
       NextResponse.json(
         { attempt, score: attempt.score, passed: attempt.passed, reasons: verdictLines(attempt), replayed: recorded.status === "replayed" },
