@@ -1,5 +1,5 @@
-import type { SimInput, SolveQuality } from "@/lib/sim";
-import type { LiveRun, SimulationReply, SimulationRequest } from "./live-run";
+import type { SimInput } from "@/lib/sim";
+import type { LiveRun, RunSpan, SimulationReply, SimulationRequest } from "./live-run";
 
 export type ChannelUpdate =
   | { kind: "result"; key: string; run: LiveRun; roundTripMs: number }
@@ -7,15 +7,18 @@ export type ChannelUpdate =
 
 type Port = { post(request: SimulationRequest): void };
 
+type Job = { key: string; input: SimInput; span: RunSpan };
+
 /**
  * Latest input wins: at most one request per channel is with the worker; an input that arrives
  * meanwhile waits in a single slot, replacing any input still waiting there, so dragging a
- * control never queues every position. A reply to an input that has since been replaced is
- * dropped rather than drawn.
+ * control never queues every position and the worker never holds a stale one (it only ever
+ * receives the newest). A reply to an input that has since been replaced is dropped rather
+ * than drawn.
  */
 export class SimulationChannel {
   private inFlight: { id: number; key: string; sentAt: number } | null = null;
-  private waiting: { key: string; input: SimInput } | null = null;
+  private waiting: Job | null = null;
   private latestKey: string | null = null;
   private closed = false;
 
@@ -24,16 +27,16 @@ export class SimulationChannel {
     private readonly nextId: () => number,
     private readonly deliver: (update: ChannelUpdate) => void,
     private readonly onClose: () => void = () => undefined,
-    private readonly quality: SolveQuality = "grade",
   ) {}
 
-  submit(key: string, input: SimInput): void {
-    this.latestKey = key;
+  /** `key` names the input and span together: equal keys are the same run. */
+  submit(job: Job): void {
+    this.latestKey = job.key;
     if (this.inFlight) {
-      this.waiting = this.inFlight.key === key ? null : { key, input };
+      this.waiting = this.inFlight.key === job.key ? null : job;
       return;
     }
-    this.send(key, input);
+    this.send(job);
   }
 
   /** Called with every reply from the worker; ignores replies meant for other channels. */
@@ -44,7 +47,7 @@ export class SimulationChannel {
     if (this.waiting) {
       const next = this.waiting;
       this.waiting = null;
-      this.send(next.key, next.input);
+      this.send(next);
     }
     if (this.closed || key !== this.latestKey) return true;
     this.deliver(
@@ -69,9 +72,9 @@ export class SimulationChannel {
     this.onClose();
   }
 
-  private send(key: string, input: SimInput): void {
+  private send({ key, input, span }: Job): void {
     const id = this.nextId();
     this.inFlight = { id, key, sentAt: performance.now() };
-    this.port.post({ id, input, quality: this.quality });
+    this.port.post({ id, input, span });
   }
 }

@@ -1,4 +1,3 @@
-import type { SolveQuality } from "@/lib/sim";
 import type { SimulationReply } from "./live-run";
 import { SimulationChannel, type ChannelUpdate } from "./simulation-channel";
 
@@ -22,13 +21,12 @@ function startWorker(): Worker {
   return started;
 }
 
-export function openSimulationChannel(deliver: (update: ChannelUpdate) => void, quality: SolveQuality): SimulationChannel {
+export function openSimulationChannel(deliver: (update: ChannelUpdate) => void): SimulationChannel {
   const channel = new SimulationChannel(
     { post: (request) => (worker ??= startWorker()).postMessage(request) },
     () => (lastId += 1),
     deliver,
     () => channels.delete(channel),
-    quality,
   );
   channels.add(channel);
   return channel;

@@ -1,8 +1,8 @@
 "use client";
 
 import { useEffect, useRef, useState } from "react";
-import type { SimInput, SolveQuality } from "@/lib/sim";
-import type { LiveRun } from "./live-run";
+import type { SimInput } from "@/lib/sim";
+import type { LiveRun, RunSpan } from "./live-run";
 import type { SimulationChannel } from "./simulation-channel";
 import { openSimulationChannel } from "./simulation-worker-client";
 
@@ -20,37 +20,37 @@ export type LiveSimulation = {
 type Settled = { key: string; run: LiveRun | null; error: string | null; roundTripMs: number | null };
 
 /**
- * Simulates `input` in a Web Worker and re-simulates whenever it changes (compared by value).
- * Only the newest input counts: older results are dropped, never shown after a newer one.
+ * Simulates `input` in a Web Worker and re-simulates whenever it or the span changes (compared by
+ * value). Only the newest counts: older results are dropped, never shown after a newer one.
  * `quality: "preview"` (for runs redrawn while a control moves) takes half the solver steps and
- * stays within about 1 % of VDD; grading always runs at full accuracy on the server.
+ * stays within about 1 % of VDD; `firstBits` solves only the start of a long pattern (see
+ * lib/sim/README.md, "Drag previews"). Grading always runs at full accuracy on the server.
  */
-export function useLiveSimulation(input: SimInput | null, { quality = "grade" }: { quality?: SolveQuality } = {}): LiveSimulation {
-  const key = input === null ? null : JSON.stringify(input);
+export function useLiveSimulation(input: SimInput | null, { quality = "grade", firstBits }: Partial<RunSpan> = {}): LiveSimulation {
+  const key = input === null ? null : `${quality}:${firstBits ?? "all"}:${JSON.stringify(input)}`;
   const [settled, setSettled] = useState<Settled | null>(null);
   const channel = useRef<SimulationChannel | null>(null);
-  const latestInput = useRef(input);
-  latestInput.current = input;
+  const latest = useRef({ input, span: { quality, firstBits } });
+  latest.current = { input, span: { quality, firstBits } };
 
   useEffect(() => {
-    const opened = openSimulationChannel(
-      (update) =>
-        setSettled((previous) =>
-          update.kind === "result"
-            ? { key: update.key, run: update.run, error: null, roundTripMs: update.roundTripMs }
-            : { key: update.key, run: previous?.run ?? null, error: update.message, roundTripMs: null },
-        ),
-      quality,
+    const opened = openSimulationChannel((update) =>
+      setSettled((previous) =>
+        update.kind === "result"
+          ? { key: update.key, run: update.run, error: null, roundTripMs: update.roundTripMs }
+          : { key: update.key, run: previous?.run ?? null, error: update.message, roundTripMs: null },
+      ),
     );
     channel.current = opened;
     return () => {
       opened.close();
       channel.current = null;
     };
-  }, [quality]);
+  }, []);
 
   useEffect(() => {
-    if (key !== null && latestInput.current) channel.current?.submit(key, latestInput.current);
+    const { input: current, span } = latest.current;
+    if (key !== null && current) channel.current?.submit({ key, input: current, span });
   }, [key]);
 
   if (key === null) return { result: null, pending: false, error: null, roundTripMs: null };

@@ -1,6 +1,6 @@
 "use client";
 
-import { useLiveSimulation } from "@/components/simulation";
+import { DRAG_SPAN, FULL_SPAN, useLiveSimulation, type LiveRun } from "@/components/simulation";
 import { ScopeView } from "@/components/scope-view";
 import type { PassRule } from "@/lessons/schema";
 import type { SimInput } from "@/lib/sim";
@@ -21,14 +21,40 @@ function SimulationBadge({ pending, roundTripMs, computeMs }: { pending: boolean
   );
 }
 
+/** Says what a drag preview leaves out, so that it is never taken for the full run. */
+function DragPreviewNote({ run }: { run: LiveRun }) {
+  const cut = run.bits.length < run.patternBits;
+  return (
+    <p className="mt-4 rounded-lg border border-line bg-sunken px-4 py-3 text-sm text-ink-soft" data-testid="drag-preview-note" role="status">
+      A quick preview while the control moves{cut ? `: the first ${run.bits.length} of ${run.patternBits} bits` : ""}, within 1 % of the supply of the full
+      simulation. Let go to see the full run checked against the lab&apos;s rule.
+    </p>
+  );
+}
+
 /**
  * "Try on the bench": the run re-simulated in the browser's worker as the controls move, drawn on
- * the scope view, with the lab's pass rule applied to it as a preview. Grading happens only on submit.
+ * the scope view, with the lab's pass rule applied to it as a preview. While a control is dragged
+ * the worker solves a quicker preview (DRAG_SPAN) so that the drawing keeps up; once it is let go,
+ * the full run at grading accuracy, which alone is held against the rule. Grading happens only on submit.
  */
-export function BenchPreview({ input, rule, caption, note }: { input: SimInput; rule: PassRule; caption: string; note?: React.ReactNode }) {
-  const live = useLiveSimulation(input, { quality: "preview" });
+export function BenchPreview({
+  input,
+  dragging = false,
+  rule,
+  caption,
+  note,
+}: {
+  input: SimInput;
+  dragging?: boolean;
+  rule: PassRule;
+  caption: string;
+  note?: React.ReactNode;
+}) {
+  const live = useLiveSimulation(input, dragging ? DRAG_SPAN : FULL_SPAN);
   const run = live.result;
-  const judgement = run ? previewJudgement(rule, run) : null;
+  const isFullRun = run !== null && run.span.quality === FULL_SPAN.quality && run.bits.length === run.patternBits;
+  const judgement = run && isFullRun ? previewJudgement(rule, run) : null;
 
   return (
     <div data-testid="bench-preview" data-pending={live.pending}>
@@ -43,6 +69,7 @@ export function BenchPreview({ input, rule, caption, note }: { input: SimInput; 
           <ScopeView run={run} stale={live.pending} caption={caption}>
             <SimulationBadge pending={live.pending} roundTripMs={live.roundTripMs} computeMs={run.computeMs} />
           </ScopeView>
+          {run.span.quality === DRAG_SPAN.quality ? <DragPreviewNote run={run} /> : null}
           {judgement ? (
             <div
               className={`mt-4 rounded-lg border p-4 text-sm ${judgement.pass ? "border-ok/30 bg-ok-soft" : "border-copper/30 bg-copper-soft"}`}

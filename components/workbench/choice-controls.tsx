@@ -11,6 +11,8 @@ type StepperProps = {
   value: number;
   format: (value: number) => string;
   onChange: (value: number) => void;
+  /** The pointer went down on the slider: a drag may follow. */
+  onDragStart?: () => void;
   note?: string;
   disabled?: boolean;
 };
@@ -19,7 +21,7 @@ type StepperProps = {
  * A slider over a fixed list of values (an E-series, a length grid, timing steps) with step
  * buttons beside it: arrows and Page Up/Down move along the list from the keyboard.
  */
-function ValueStepper({ label, values, value, format, onChange, note, disabled }: StepperProps) {
+function ValueStepper({ label, values, value, format, onChange, onDragStart, note, disabled }: StepperProps) {
   const id = useId();
   const index = Math.max(0, values.findIndex((v) => Math.abs(v - value) <= 1e-9 * Math.max(1, Math.abs(v))));
   const move = (to: number) => onChange(values[Math.min(values.length - 1, Math.max(0, to))]);
@@ -52,6 +54,7 @@ function ValueStepper({ label, values, value, format, onChange, note, disabled }
           value={index}
           disabled={disabled}
           onChange={(event) => move(Number(event.target.value))}
+          onPointerDown={onDragStart}
           aria-valuetext={format(value)}
           className="h-2 w-full cursor-pointer accent-accent"
         />
@@ -142,11 +145,13 @@ export function ChoiceControls({
   run,
   choices,
   onChange,
+  onDragStart,
   disabled,
 }: {
   run: BenchRun;
   choices: RunChoices;
   onChange: (choices: RunChoices) => void;
+  onDragStart?: () => void;
   disabled?: boolean;
 }) {
   const { controls } = run;
@@ -179,7 +184,14 @@ export function ChoiceControls({
         />
       ) : null}
       {controls.length ? (
-        <ValueStepper label="Cable length" values={controls.length} value={choices.length ?? controls.length[0]} format={formatMetres} onChange={(length) => set({ length })} disabled={disabled} />
+        <ValueStepper
+          label="Cable length"
+          values={controls.length}
+          value={choices.length ?? controls.length[0]} format={formatMetres}
+          onChange={(length) => set({ length })}
+          onDragStart={onDragStart}
+          disabled={disabled}
+        />
       ) : null}
       {controls.seriesResistance ? (
         <ValueStepper
@@ -189,6 +201,7 @@ export function ChoiceControls({
           format={formatOhms}
           note={`${controls.seriesResistance.values.length} standard values`}
           onChange={(seriesResistance) => set({ seriesResistance })}
+          onDragStart={onDragStart}
           disabled={disabled}
         />
       ) : null}
@@ -200,6 +213,7 @@ export function ChoiceControls({
             value={choices.zeroHigh ?? controls.timing.zeroHigh.min}
             format={formatNanoseconds}
             onChange={(zeroHigh) => set({ zeroHigh })}
+            onDragStart={onDragStart}
             disabled={disabled}
           />
           <ValueStepper
@@ -208,6 +222,7 @@ export function ChoiceControls({
             value={choices.oneHigh ?? controls.timing.oneHigh.min}
             format={formatNanoseconds}
             onChange={(oneHigh) => set({ oneHigh })}
+            onDragStart={onDragStart}
             disabled={disabled}
           />
         </>

@@ -18,6 +18,7 @@ import { RunTabs } from "./run-tabs";
 import { ScenarioWords } from "./scenario-words";
 import { SourceReadout } from "./source-readout";
 import { SubmitPanel, type QuestionText } from "./submit-panel";
+import { useControlDrag } from "./use-control-drag";
 
 type Props = { setup: BenchSetup; questionTexts: Record<string, QuestionText> };
 
@@ -48,6 +49,7 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
   const [replay, setReplay] = useState<Replay | null>(null);
   const [reply, setReply] = useState<SubmitReply | null>(null);
   const pendingKey = useRef<PendingKey | null>(null);
+  const { dragging, startDrag } = useControlDrag();
 
   const history = useQuery({ queryKey: historyKey, queryFn: () => listAttempts(labSlug) });
 
@@ -118,7 +120,7 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
             <h2 id="controls-heading" className="mb-4 text-lg font-semibold">
               Your choices
             </h2>
-            <ChoiceControls run={activeRun} choices={activeChoices} onChange={(next) => changeChoices(activeRun.id, next)} />
+            <ChoiceControls run={activeRun} choices={activeChoices} onChange={(next) => changeChoices(activeRun.id, next)} onDragStart={startDrag} />
             {replay ? (
               <p className="mt-4 text-sm text-ink-soft">
                 These are your bench settings. The drawing and the scope show attempt {replay.attempt.attemptNumber}; moving a control brings your bench back.
@@ -133,6 +135,7 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
             </h2>
             <BenchPreview
               input={previewInput}
+              dragging={dragging}
               rule={setup.passRule}
               caption={`Scope view of ${activeRun.label}`}
               note={

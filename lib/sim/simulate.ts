@@ -3,7 +3,7 @@ import { decodeWaveform } from "./decoder";
 import type { DriveSchedule } from "./drive-source";
 import { SimSolveBudgetError } from "./errors";
 import { pinEquilibrium } from "./far-node";
-import { planSolve, solveLine, type LineTotals, type SolveQuality } from "./line-solver";
+import { planSolve, solveLine, type LineTotals, type SolveOutput, type SolveQuality } from "./line-solver";
 import { measureBitLevels, measureRun, type RunMetrics } from "./metrics";
 import { parseSimInput, type ResolvedSimInput, type SimInput } from "./schema";
 import { bitSlots, colourBits } from "./signal";
@@ -43,7 +43,26 @@ export type SimulateOptions = {
   keepFullResolution?: boolean;
   /** "grade" (the default) is the accuracy every verdict and grade uses; "preview" takes coarser steps, for redrawing while a control is dragged. */
   quality?: SolveQuality;
+  /**
+   * Sends only the first n bits of the pattern, then the run's usual low ending. Nothing reaches
+   * the far end before it was sent, so up to bit n the waveform is the full run's; a preview of a
+   * long pattern while a control is dragged. Its verdict speaks only of those bits.
+   */
+  firstBits?: number;
 };
+
+/** What a run found, apart from its traces. */
+export type RunAnalysis = Omit<SimResult, "time" | "nearEnd" | "farEnd" | "full">;
+
+/** A run for drawing: its analysis, with its traces as typed arrays, unrounded. */
+export type DrawnRun = RunAnalysis & {
+  trace: { time: Float64Array; nearEnd: Float64Array; farEnd: Float64Array };
+  /** Bits in the input's pattern (the run holds fewer when `firstBits` cut it short). */
+  patternBits: number;
+};
+
+/** How finely a drawn run is sampled: `finestInterval` apart, or coarser so that a long run stays within `maxPoints`. */
+export type DrawingOptions = Omit<SimulateOptions, "keepFullResolution"> & { finestInterval: number; maxPoints: number };
 
 const MAX_DRAWN_POINTS = 4000;
 
@@ -97,12 +116,21 @@ function driveSchedule(input: ResolvedSimInput, slots: ReturnType<typeof bitSlot
   return { edgeStarts, rising, edgeTime: input.driver.edgeTime, highVoltage: input.driver.highVoltage };
 }
 
-/** Simulates one run: waveforms, decoded bits, metrics and verdict. */
-export function simulateRun(input: SimInput | ResolvedSimInput, options: SimulateOptions = {}): SimResult {
+type JudgedRun = {
+  resolved: ResolvedSimInput;
+  solved: SolveOutput;
+  endTime: number;
+  patternBits: number;
+  analysis: RunAnalysis;
+};
+
+/** Solves the run and judges it: everything but the sampled traces. */
+function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOptions): JudgedRun {
   const resolved = parseSimInput(input);
   const { driver, receiver, signal } = resolved;
   const { perMetre, totals } = lineOf(resolved);
-  const bits = signal.bits ?? colourBits(signal.colours ?? [], signal.byteOrder);
+  const pattern = signal.bits ?? colourBits(signal.colours ?? [], signal.byteOrder);
+  const bits = options.firstBits === undefined ? pattern : pattern.slice(0, Math.max(1, Math.floor(options.firstBits)));
   const slots = bitSlots(bits, signal);
   const endTime = signal.leadIn + bits.length * signal.bitPeriod + Math.max(signal.latchGap ?? 0, totals.delay + signal.bitPeriod);
 
@@ -167,17 +195,7 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
     clampCurrentPeakTime: solved.clampCurrentPeakTime,
   });
 
-  const interval = resolved.output.sampleInterval ?? niceInterval(endTime / (MAX_DRAWN_POINTS - 1));
-  const points = Math.floor(endTime / interval + 1e-9) + 1;
-  if (points > MAX_SAMPLED_POINTS) {
-    throw new SimSolveBudgetError(
-      `output.sampleInterval of ${interval} s gives ${points.toLocaleString("en")} points over ${(endTime * 1e6).toPrecision(4)} µs, more than ${MAX_SAMPLED_POINTS.toLocaleString("en")}`,
-    );
-  }
-  const result: SimResult = {
-    time: roundedArray(Float64Array.from({ length: points }, (_, i) => i * interval), 1e15),
-    nearEnd: roundedArray(sampleNearEnd(solved.near, solved.dt, solved.stepCount, interval, points), 1e6),
-    farEnd: roundedArray(sampleTrace(solved.far, solved.dt, interval, points), 1e6),
+  const analysis: RunAnalysis = {
     decoded: decoding.bits.map((bit) => bit.received).join(""),
     bits: decoding.bits.map((bit, i) => ({
       sent: bit.sent,
@@ -198,6 +216,36 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
       timeStep: plan.dt,
     },
   };
+  return { resolved, solved, endTime, patternBits: pattern.length, analysis };
+}
+
+function pointCount(endTime: number, interval: number): number {
+  const points = Math.floor(endTime / interval + 1e-9) + 1;
+  if (points > MAX_SAMPLED_POINTS) {
+    throw new SimSolveBudgetError(
+      `output.sampleInterval of ${interval} s gives ${points.toLocaleString("en")} points over ${(endTime * 1e6).toPrecision(4)} µs, more than ${MAX_SAMPLED_POINTS.toLocaleString("en")}`,
+    );
+  }
+  return points;
+}
+
+function uniformTimes(interval: number, points: number): Float64Array {
+  const time = new Float64Array(points);
+  for (let i = 0; i < points; i += 1) time[i] = i * interval;
+  return time;
+}
+
+/** Simulates one run: waveforms, decoded bits, metrics and verdict. */
+export function simulateRun(input: SimInput | ResolvedSimInput, options: SimulateOptions = {}): SimResult {
+  const { resolved, solved, endTime, analysis } = solveAndJudge(input, options);
+  const interval = resolved.output.sampleInterval ?? niceInterval(endTime / (MAX_DRAWN_POINTS - 1));
+  const points = pointCount(endTime, interval);
+  const result: SimResult = {
+    time: roundedArray(uniformTimes(interval, points), 1e15),
+    nearEnd: roundedArray(sampleNearEnd(solved.near, solved.dt, solved.stepCount, interval, points), 1e6),
+    farEnd: roundedArray(sampleTrace(solved.far, solved.dt, interval, points), 1e6),
+    ...analysis,
+  };
   if (options.keepFullResolution) {
     result.full = {
       time: Float64Array.from({ length: solved.stepCount }, (_, i) => i * solved.dt),
@@ -206,4 +254,24 @@ export function simulateRun(input: SimInput | ResolvedSimInput, options: Simulat
     };
   }
   return result;
+}
+
+/**
+ * Simulates one run for the browser's scope: the same solution and analysis as simulateRun, its
+ * traces sampled straight into typed arrays (no rounding for JSON, no intermediate number arrays)
+ * that a worker can hand over without copying.
+ */
+export function simulateForDrawing(input: SimInput | ResolvedSimInput, options: DrawingOptions): DrawnRun {
+  const { solved, endTime, patternBits, analysis } = solveAndJudge(input, options);
+  const interval = Math.max(options.finestInterval, endTime / options.maxPoints);
+  const points = pointCount(endTime, interval);
+  return {
+    ...analysis,
+    trace: {
+      time: uniformTimes(interval, points),
+      nearEnd: sampleNearEnd(solved.near, solved.dt, solved.stepCount, interval, points),
+      farEnd: sampleTrace(solved.far, solved.dt, interval, points),
+    },
+    patternBits,
+  };
 }
