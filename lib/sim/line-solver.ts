@@ -89,7 +89,7 @@ export type SolveQuality = "grade" | "preview";
  */
 const QUALITY_RULES: Record<SolveQuality, { maxStep: number; stepsPerEdge: number; tolerances: SolverTolerances }> = {
   grade: { maxStep: 1e-10, stepsPerEdge: 25, tolerances: { settled: 2e-4, input: 5e-4, output: 2e-4, junction: 1e-4, quiet: 2e-3 } },
-  preview: { maxStep: 2e-10, stepsPerEdge: 15, tolerances: { settled: 1e-3, input: 3e-3, output: 1e-3, junction: 5e-4, quiet: 5e-3 } },
+  preview: { maxStep: 2e-10, stepsPerEdge: 15, tolerances: { settled: 1e-3, input: 1.5e-3, output: 1e-3, junction: 5e-4, quiet: 5e-3 } },
 };
 
 /** Segments per unit of R/Z0: keeps the lumped-loss error of the first arrival, about R/(4N·Z0), under 0.3 %. */
