@@ -9,79 +9,15 @@
  * difference from ngspice (smallest difference within ±0.5 ns, docs/simulator.md).
  * Targets are printed as met or not met; nothing here fails a build.
  */
-import { availableParallelism, loadavg } from "node:os";
-import { cableCatalogue, CABLE_KINDS, parseSimInput, simulateRun } from "@/lib/sim";
+import { parseSimInput, simulateRun } from "@/lib/sim";
 import { runNgspice, timeNgspice } from "@/tests/reference/support/ngspice-runner";
 import { decodeWaveform } from "@/tests/reference/support/receiver-decode";
-import type { DocSimInput } from "@/tests/reference/support/reference-circuit";
 import { decodeSettingsOf, referenceCircuitOf } from "@/tests/reference/support/solver-run";
 import { windowedError } from "@/tests/reference/support/waveform-compare";
-
-type Kind = (typeof CABLE_KINDS)[number];
-
-interface StandardCase {
-  name: string;
-  kind: Kind;
-  length: number;
-  seriesResistance: number;
-  driverVolts: number;
-  driverResistance: number;
-  pixels: number;
-}
-
-/** docs/simulator.md, "Standard benchmark cases": 3 ns edges, 5 pF clamped receiver on a 5 V pixel. */
-const CASES: StandardCase[] = [
-  { name: "1 beside-ground 10 m 33 Ω 5 V", kind: "beside-ground", length: 10, seriesResistance: 33, driverVolts: 5, driverResistance: 20, pixels: 4 },
-  { name: "2 lone-lead 10 m 249 Ω 3.3 V", kind: "lone-lead", length: 10, seriesResistance: 249, driverVolts: 3.3, driverResistance: 30, pixels: 4 },
-  { name: "3 twisted-pair 20 m 100 Ω 5 V", kind: "twisted-pair", length: 20, seriesResistance: 100, driverVolts: 5, driverResistance: 20, pixels: 4 },
-  { name: "4 coax-75 30 m 47 Ω 5 V", kind: "coax-75", length: 30, seriesResistance: 47, driverVolts: 5, driverResistance: 20, pixels: 4 },
-  { name: "5 beside-ground 1 m 0 Ω 5 V, 24 bits", kind: "beside-ground", length: 1, seriesResistance: 0, driverVolts: 5, driverResistance: 20, pixels: 1 },
-];
-
-const COLOURS: [number, number, number][] = [
-  [255, 96, 0],
-  [18, 52, 86],
-  [0, 200, 120],
-  [171, 205, 239],
-];
+import { inputOf, loadNote, median, medianTime, STANDARD_CASES, table, verdict, type StandardCase } from "./bench-sim-support";
 
 const TARGETS = { tenMetreMedianMs: 5, speedup: 200, gradeMs: 10 };
-const WARM_UP = 5;
-const MIN_REPEATS = 20;
-const MIN_MEASURE_MS = 500;
 const NGSPICE_TIMED_RUNS = 1;
-
-function inputOf(c: StandardCase, lossless: boolean): DocSimInput {
-  const cable = lossless
-    ? { perMetre: { ...cableCatalogue[c.kind].perMetre, resistance: 0 }, length: c.length }
-    : { kind: c.kind as "lone-lead", length: c.length };
-  return {
-    driver: { highVoltage: c.driverVolts, outputResistance: c.driverResistance, edgeTime: 3e-9 },
-    seriesResistance: c.seriesResistance,
-    cable,
-    receiver: { supplyVoltage: 5, inputCapacitance: 5e-12, clampDiodes: true, deglitchTime: 10e-9 },
-    signal: { colours: COLOURS.slice(0, c.pixels), byteOrder: "GRB" },
-  };
-}
-
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const middle = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
-}
-
-/** Median wall time in ms of `work`, after a warm-up, over at least MIN_REPEATS runs and MIN_MEASURE_MS. */
-function medianTime(work: () => unknown): number {
-  for (let i = 0; i < WARM_UP; i++) work();
-  const times: number[] = [];
-  const started = performance.now();
-  while (times.length < MIN_REPEATS || performance.now() - started < MIN_MEASURE_MS) {
-    const t0 = performance.now();
-    work();
-    times.push(performance.now() - t0);
-  }
-  return median(times);
-}
 
 function grade(json: string): string {
   const result = simulateRun(parseSimInput(JSON.parse(json)));
@@ -141,7 +77,7 @@ async function benchCase(c: StandardCase): Promise<Row> {
   };
 }
 
-function table(rows: Row[]): string {
+function rowTable(rows: Row[]): string {
   const header = ["case", "bits", "step ns", "ours lossless ms", "ours with R' ms", "grade ms", "ngspice ms", "ngspice wall ms", "ratio", "max err mV", "% VDD", "bits match"];
   const body = rows.map((r) => [
     r.name,
@@ -157,17 +93,7 @@ function table(rows: Row[]): string {
     r.errorPercentVdd.toFixed(2),
     r.decodedMatch ? "yes" : "NO",
   ]);
-  const widths = header.map((h, i) => Math.max(h.length, ...body.map((row) => row[i].length)));
-  const line = (cells: string[]) => cells.map((cell, i) => (i === 0 ? cell.padEnd(widths[i]) : cell.padStart(widths[i]))).join("  ");
-  return [line(header), widths.map((w) => "-".repeat(w)).join("  "), ...body.map(line)].join("\n");
-}
-
-/** Wall-clock medians mean little when other work competes for the cores: say so beside the figures. */
-function loadNote(): string {
-  const load = loadavg()[0];
-  const cores = availableParallelism();
-  const busy = load > cores * 0.75 ? " — machine busy, times are inflated; the ratios, measured side by side, suffer less" : "";
-  return `load average ${load.toFixed(2)} on ${cores} cores${busy}`;
+  return table(header, body);
 }
 
 async function main() {
@@ -175,12 +101,11 @@ async function main() {
   console.log(`at start: ${loadNote()}`);
   console.log("ours: median of simulateRun; grade: JSON in → validate → simulate → decode → verdict → JSON out; ngspice ms: its transient analysis time\n");
   const rows: Row[] = [];
-  for (const c of CASES) rows.push(await benchCase(c));
-  console.log(table(rows));
+  for (const c of STANDARD_CASES) rows.push(await benchCase(c));
+  console.log(rowTable(rows));
   console.log(`at end: ${loadNote()}`);
 
   const tenMetre = rows.filter((r) => r.isTenMetreFull);
-  const verdict = (ok: boolean) => (ok ? "met" : "NOT MET");
   const worstTenMetre = Math.max(...tenMetre.map((r) => r.catalogueMs));
   const leastSpeedup = Math.min(...tenMetre.map((r) => r.speedup));
   const worstGrade = Math.max(...rows.map((r) => r.gradeMs));

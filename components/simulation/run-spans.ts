@@ -11,3 +11,9 @@ export const FULL_SPAN: RunSpan = { quality: "grade" };
  * Measured by `npm run bench:live`; bounded by tests/unit/sim/drag-preview.test.ts.
  */
 export const DRAG_SPAN: RunSpan = { quality: "preview", firstBits: 24 };
+
+/**
+ * Sampling of a drawn run: fine enough for a 3 ns edge to keep its shape when the scope zooms to
+ * one edge, capped so a long pattern stays a few megabytes.
+ */
+export const DRAWING_SAMPLING = { finestInterval: 0.5e-9, maxPoints: 100_000 };

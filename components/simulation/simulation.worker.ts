@@ -1,10 +1,6 @@
 import { parseSimInput, SimInputError, simulateForDrawing, type SimInput } from "@/lib/sim";
 import type { LiveRun, RunSpan, SimulationReply, SimulationRequest } from "./live-run";
-
-// Sampling for the scope view: fine enough for a 3 ns edge to keep its shape when zoomed to
-// one edge, capped so a long pattern stays a few megabytes. The arrays are new for every run:
-// they are handed to the page (transferred, not copied), which keeps them while it draws.
-const SAMPLING = { finestInterval: 0.5e-9, maxPoints: 100_000 };
+import { DRAWING_SAMPLING } from "./run-spans";
 
 function describe(error: unknown): string {
   if (error instanceof SimInputError) return error.issues.map((issue) => `${issue.path}: ${issue.message}`).join("; ");
@@ -14,7 +10,8 @@ function describe(error: unknown): string {
 function simulate(input: SimInput, span: RunSpan): LiveRun {
   const started = performance.now();
   const resolved = parseSimInput(input);
-  const run = simulateForDrawing(resolved, { ...SAMPLING, ...span });
+  // The traces are new arrays every run: they are handed to the page (transferred, not copied), which keeps them while it draws.
+  const run = simulateForDrawing(resolved, { ...DRAWING_SAMPLING, ...span });
   const { receiver, signal } = resolved;
   return {
     trace: run.trace,

@@ -18,7 +18,7 @@ function harness() {
   return { channel, posted, delivered, answer };
 }
 
-const at = (ohms: number): SimInput => ({ seriesResistance: ohms, cable: { kind: "lone-lead", length: 10 } });
+const at = (ohms: number): SimInput => ({ seriesResistance: ohms, cable: { kind: "lone-lead", length: 10 }, signal: { bits: "0110" } });
 
 describe("SimulationChannel", () => {
   it("sends one request at a time and, of the positions passed meanwhile, only the newest", () => {
