@@ -13,7 +13,7 @@ export type LiveSimulation = {
   pending: boolean;
   /** Why the current input could not be simulated, in the simulator's words. */
   error: string | null;
-  /** From handing the input to the worker to having its result back (ms). */
+  /** For the run in `result`: from handing its input to the worker to having it back (ms). */
   roundTripMs: number | null;
 };
 
@@ -59,6 +59,6 @@ export function useLiveSimulation(input: SimInput | null, { quality = "grade", f
     result: settled?.run ?? null,
     pending: !current,
     error: current ? settled.error : null,
-    roundTripMs: current ? settled.roundTripMs : null,
+    roundTripMs: settled?.roundTripMs ?? null,
   };
 }

@@ -1,5 +1,6 @@
 "use client";
 
+import { useMemo } from "react";
 import { DRAG_SPAN, FULL_SPAN, useLiveSimulation, type LiveRun } from "@/components/simulation";
 import { ScopeView } from "@/components/scope-view";
 import type { PassRule } from "@/lessons/schema";
@@ -55,6 +56,20 @@ export function BenchPreview({
   const run = live.result;
   const isFullRun = run !== null && run.span.quality === FULL_SPAN.quality && run.bits.length === run.patternBits;
   const judgement = run && isFullRun ? previewJudgement(rule, run) : null;
+  // While a control is dragged the next preview follows within a frame or two: dimming the scope
+  // and blanking the badge for that moment would only flicker, and would redraw the chart (the
+  // page's costliest render) once more on every step, for nothing new to see.
+  const stale = live.pending && !dragging;
+  const { roundTripMs } = live;
+  const scope = useMemo(
+    () =>
+      run ? (
+        <ScopeView run={run} stale={stale} caption={caption}>
+          <SimulationBadge pending={stale} roundTripMs={roundTripMs} computeMs={run.computeMs} />
+        </ScopeView>
+      ) : null,
+    [run, stale, caption, roundTripMs],
+  );
 
   return (
     <div data-testid="bench-preview" data-pending={live.pending}>
@@ -66,9 +81,7 @@ export function BenchPreview({
       {run ? (
         <>
           {note}
-          <ScopeView run={run} stale={live.pending} caption={caption}>
-            <SimulationBadge pending={live.pending} roundTripMs={live.roundTripMs} computeMs={run.computeMs} />
-          </ScopeView>
+          {scope}
           {run.span.quality === DRAG_SPAN.quality ? <DragPreviewNote run={run} /> : null}
           {judgement ? (
             <div

@@ -1,9 +1,10 @@
 /**
  * The preview the workbench draws while a control is dragged (DRAG_SPAN: preview quality, the
  * first 24 bits) against the full-accuracy run of the whole pattern. Up to the end of the cut
- * its traces stay within 1 % of VDD (compared as docs/simulator.md says, the smallest
- * difference within ±0.5 ns), and it reads the same bits wherever the full run is not on a knife
- * edge. After the cut the preview is a different run (the data stop), so it is not compared there.
+ * its traces stay within 1 % of VDD, or of the swing where an unclamped pin rings beyond its
+ * rails (compared as docs/simulator.md says, the smallest difference within ±0.5 ns), and it
+ * reads the same bits wherever the full run is not on a knife edge. After the cut the preview
+ * is a different run (the data stop), so it is not compared there.
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
@@ -37,6 +38,12 @@ function compare(input: SimInput) {
     windowedError(until(full.full!.time, full.full![side], ends[side]), until(preview.trace.time, preview.trace[side], ends[side])),
   );
   return { resolved, full, preview, errors };
+}
+
+function peak(values: Float64Array): number {
+  let largest = 0;
+  for (const value of values) largest = Math.max(largest, Math.abs(value));
+  return largest;
 }
 
 const kind = fc.constantFrom(...CABLE_KINDS);
@@ -79,17 +86,18 @@ describe("drag preview (DRAG_SPAN)", () => {
     expect(preview.decoded).toBe(full.decoded.slice(0, 24));
   });
 
-  it("over random runs of every cable kind: within 1 % of VDD up to the cut; bits differ only where the full run is marginal", () => {
+  it("over random runs of every cable kind: within 1 % of VDD (or of the swing) up to the cut; bits differ only where the full run is marginal", () => {
     fc.assert(
       fc.property(inputs, (input) => {
         const { resolved, full, preview, errors } = compare(input as SimInput);
-        const supply = resolved.receiver.supplyVoltage;
-        for (const error of errors) expect(error.maxError / supply, `at ${error.at} s`).toBeLessThan(TOLERANCE_OF_VDD);
+        // Without clamps a pin rings far beyond its rails (to 9 V on a 5 V pixel); there the bound is 1 % of that swing.
+        const scale = Math.max(resolved.receiver.supplyVoltage, peak(full.full!.farEnd), peak(full.full!.nearEnd));
+        for (const error of errors) expect(error.maxError / scale, `at ${error.at} s`).toBeLessThan(TOLERANCE_OF_VDD);
         preview.bits.forEach((bit, i) => {
           const graded = full.bits[i];
           if (bit.received === graded.received) return;
           // Moving a trace by 1 % of VDD can only flip a bit whose margins are about that thin.
-          const thinVoltage = Math.abs(graded.voltageMargin) <= 2 * TOLERANCE_OF_VDD * supply;
+          const thinVoltage = Math.abs(graded.voltageMargin) <= 2 * TOLERANCE_OF_VDD * scale;
           const thinTiming = graded.timingMargin === null || Math.abs(graded.timingMargin) <= 2e-9;
           expect(thinVoltage || thinTiming, `bit ${i}: ${graded.received} in the full run, ${bit.received} in the preview`).toBe(true);
         });
