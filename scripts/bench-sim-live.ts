@@ -14,7 +14,7 @@
 import { DRAG_SPAN, DRAWING_SAMPLING, FULL_SPAN } from "@/components/simulation/run-spans";
 import type { RunSpan } from "@/components/simulation/live-run";
 import { CABLE_KINDS, parseSimInput, simulateForDrawing } from "@/lib/sim";
-import { inputOf, loadNote, medianTime, STANDARD_CASES, table, verdict, type StandardCase } from "./bench-sim-support";
+import { cpuTimeOf, inputOf, loadNote, medianTime, medianTimes, STANDARD_CASES, table, verdict, type StandardCase } from "./bench-sim-support";
 
 const FRAME_MS = 16;
 
@@ -43,20 +43,26 @@ function drawOnce(c: StandardCase, span: RunSpan) {
   return simulateForDrawing(parseSimInput(inputOf(c)), { ...DRAWING_SAMPLING, ...span });
 }
 
-type Row = { name: string; bits: string; fullMs: number; wholePreviewMs: number; dragMs: number };
+type Row = { name: string; bits: string; fullMs: number; wholePreviewMs: number; dragMs: number; dragCpuMs: number };
 
 function measure(c: StandardCase): Row {
   const drag = drawOnce(c, DRAG_SPAN);
+  const dragTimes = medianTimes(() => drawOnce(c, DRAG_SPAN));
   return {
     name: c.name,
     bits: `${drag.bits.length} of ${drag.patternBits}`,
     fullMs: medianTime(() => drawOnce(c, FULL_SPAN)),
     wholePreviewMs: medianTime(() => drawOnce(c, { quality: "preview" })),
-    dragMs: medianTime(() => drawOnce(c, DRAG_SPAN)),
+    dragMs: dragTimes.wallMs,
+    dragCpuMs: dragTimes.cpuMs,
   };
 }
 
-/** The slowest drag previews over the scan grid, each timed once (after the standard cases warmed the code up). */
+/**
+ * The slowest drag previews over the scan grid (after the standard cases warmed the code up).
+ * Each is ranked by the smaller CPU time of two runs, so that a run that merely waited for a
+ * busy core does not push a cheap case to the top.
+ */
 function slowestDragCases(): { cases: StandardCase[]; scanned: number } {
   const timed: { c: StandardCase; ms: number }[] = [];
   for (const kind of CABLE_KINDS) {
@@ -64,9 +70,7 @@ function slowestDragCases(): { cases: StandardCase[]; scanned: number } {
       for (const seriesResistance of SCAN.resistors) {
         for (const driver of SCAN.drivers) {
           const c = { name: `${kind} ${length} m ${seriesResistance} Ω ${driver.driverVolts} V`, kind, length, seriesResistance, ...driver, pixels: 4 };
-          const started = performance.now();
-          drawOnce(c, DRAG_SPAN);
-          timed.push({ c, ms: performance.now() - started });
+          timed.push({ c, ms: Math.min(cpuTimeOf(() => drawOnce(c, DRAG_SPAN)), cpuTimeOf(() => drawOnce(c, DRAG_SPAN))) });
         }
       }
     }
@@ -86,13 +90,14 @@ function main() {
   rows.push(...scan.cases.map(measure));
   console.log(
     table(
-      ["case", "bits drawn", "full run ms", "whole preview ms", "drag ms", "drag / full", "drag in a frame"],
+      ["case", "bits drawn", "full run ms", "whole preview ms", "drag ms", "drag CPU ms", "drag / full", "drag in a frame"],
       rows.map((r) => [
         r.name,
         r.bits,
         r.fullMs.toFixed(2),
         r.wholePreviewMs.toFixed(2),
         r.dragMs.toFixed(2),
+        r.dragCpuMs.toFixed(2),
         `${(r.dragMs / r.fullMs).toFixed(2)}×`,
         r.dragMs < FRAME_MS ? "yes" : "NO",
       ]),
@@ -100,13 +105,17 @@ function main() {
   );
   console.log(`(the scan timed ${scan.scanned} drag previews of every cable kind at ${SCAN.lengths.join(", ")} m, ${SCAN.resistors.join(", ")} Ω, 3.3 V and 5 V drivers; its slowest are shown)`);
   console.log(`at end: ${loadNote()}`);
+  console.log("(medians of wall time; drag CPU ms: this process's CPU time, near an idle machine's wall time when the cores are shared)");
 
   const worst = rows.reduce((a, b) => (b.dragMs > a.dragMs ? b : a));
-  const worstRatio = Math.max(...rows.map((r) => r.dragMs / r.fullMs));
+  const worstCpu = rows.reduce((a, b) => (b.dragCpuMs > a.dragCpuMs ? b : a));
+  const ringing = rows.find((r) => r.name === RINGING.name)!;
   console.log("\ntarget (issue 4, a benchmark figure, not a test):");
   console.log(
-    `  drag redraw simulated within one animation frame (${FRAME_MS} ms): worst ${worst.dragMs.toFixed(2)} ms (${worst.name}), at most ${worstRatio.toFixed(2)}× the full run — ${verdict(worst.dragMs < FRAME_MS)}`,
+    `  drag redraw simulated within one animation frame (${FRAME_MS} ms), wall time: worst ${worst.dragMs.toFixed(2)} ms (${worst.name}) — ${verdict(worst.dragMs < FRAME_MS)}`,
   );
+  console.log(`  the same in CPU time (what an unshared core would take): worst ${worstCpu.dragCpuMs.toFixed(2)} ms (${worstCpu.name}) — ${verdict(worstCpu.dragCpuMs < FRAME_MS)}`);
+  console.log(`  the run that rings throughout: drag ${(ringing.dragMs / ringing.fullMs).toFixed(2)}× its full run (${ringing.dragMs.toFixed(2)} of ${ringing.fullMs.toFixed(2)} ms)`);
 }
 
 main();

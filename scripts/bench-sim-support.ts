@@ -68,6 +68,13 @@ function cpuMs(): number {
   return (user + system) / 1e3;
 }
 
+/** CPU time of this process in ms over one run of `work`. */
+export function cpuTimeOf(work: () => unknown): number {
+  const started = cpuMs();
+  work();
+  return cpuMs() - started;
+}
+
 /**
  * Median wall time and median CPU time of this process in ms. On a machine shared with other
  * work the wall time counts the waits for a core too; the CPU time stays near what an idle
@@ -80,9 +87,7 @@ export function medianTimes(work: () => unknown): { wallMs: number; cpuMs: numbe
   const started = performance.now();
   while (wall.length < MIN_REPEATS || performance.now() - started < MIN_MEASURE_MS) {
     const t0 = performance.now();
-    const c0 = cpuMs();
-    work();
-    cpu.push(cpuMs() - c0);
+    cpu.push(cpuTimeOf(work));
     wall.push(performance.now() - t0);
   }
   return { wallMs: median(wall), cpuMs: median(cpu) };
