@@ -56,9 +56,9 @@ export function BenchPreview({
   const run = live.result;
   const isFullRun = run !== null && run.span.quality === FULL_SPAN.quality && run.bits.length === run.patternBits;
   const judgement = run && isFullRun ? previewJudgement(rule, run) : null;
-  // While a control is dragged the next preview follows within a frame or two: dimming the scope
-  // and blanking the badge for that moment would only flicker, and would redraw the chart (the
-  // page's costliest render) once more on every step, for nothing new to see.
+  // While a control is dragged the next preview is already on its way: dimming the scope and
+  // blanking the badge meanwhile would only flicker, and would redraw the chart (the page's
+  // costliest render) once more on every step, for nothing new to see.
   const stale = live.pending && !dragging;
   const { roundTripMs } = live;
   const scope = useMemo(
