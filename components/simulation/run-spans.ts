@@ -6,7 +6,7 @@ export const FULL_SPAN: RunSpan = { quality: "grade" };
 /**
  * A run redrawn while a control is dragged, to fit an animation frame (16 ms) even when the line
  * rings for the whole pattern: coarser steps (usually within 1 % of VDD of the full run, always
- * within 1.5 % in the tests) and only the first pixel's 24 bits. Every lab pattern is 24 bits or
+ * within 2 % in the tests) and only the first pixel's 24 bits. Every lab pattern is 24 bits or
  * fewer, so there this cuts nothing; a longer pattern shows its first pixel while the control
  * moves and the whole run when it stops. Measured by `npm run bench:live`; bounded by
  * tests/unit/sim/drag-preview.test.ts.

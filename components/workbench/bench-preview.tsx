@@ -27,8 +27,8 @@ function DragPreviewNote({ run }: { run: LiveRun }) {
   const cut = run.bits.length < run.patternBits;
   return (
     <p className="mt-4 rounded-lg border border-line bg-sunken px-4 py-3 text-sm text-ink-soft" data-testid="drag-preview-note" role="status">
-      A quick preview while the control moves{cut ? `: the first ${run.bits.length} of ${run.patternBits} bits` : ""}, within about 1 % of the supply of the
-      full simulation. Let go to see the full run checked against the lab&apos;s rule.
+      A quick preview while the control moves{cut ? `: the first ${run.bits.length} of ${run.patternBits} bits` : ""}, within 2 % of the supply of the full
+      simulation. Let go to see the full run checked against the lab&apos;s rule.
     </p>
   );
 }
