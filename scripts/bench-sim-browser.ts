@@ -3,7 +3,7 @@
  * against a running, seeded app at E2E_BASE_URL: the time from a slider's input event to the
  * scope's redrawn far-end trace, while the resistor is dragged and once it is let go.
  *
- * Signed in as the demo learner, on a lab whose run rings at its start (LABS), the
+ * Signed in as a demo learner with seeded work, on a lab whose run rings at its start (LABS), the
  * mouse holds the resistor's thumb and moves it one value at a time, waiting for each redraw:
  * each step is a drag redraw (the worker's preview, DRAG_SPAN). After letting go, the full run at
  * grading accuracy is drawn: the reference the ratio is taken against, in the same page. Keyboard
@@ -16,7 +16,8 @@
  * under test-results/screenshots/. Nothing here fails a build.
  */
 import type { Page } from "playwright-core";
-import { demoAccounts, launchBrowser, openPage, saveScreenshot, signInThroughForm } from "@/tests/e2e/support/browser";
+import { demoCohorts, demoLearnerEmail, demoPassword } from "@/db/demo-data";
+import { launchBrowser, openPage, saveScreenshot, signInThroughForm } from "@/tests/e2e/support/browser";
 import { median, table, verdict } from "./bench-sim-support";
 
 /** Labs with a resistor slider, ringing at their start: the first the demo learner has unlocked is used. */
@@ -24,6 +25,9 @@ const LABS = ["lone-lead-termination", "overshoot-limit", "rc-window"];
 const SLIDER = { name: /^Series resistor/ };
 const FAR_END_TRACE = 'path.recharts-line-curve[stroke="#b05f26"]';
 const FRAME_MS = 16;
+// The demo seed gives every learner but the first of a cohort work far into the course, so this
+// one has the termination labs open.
+const LEARNER = { email: demoLearnerEmail(demoCohorts[0].learners[1]), password: demoPassword };
 const DRAG_STEPS = 12;
 const KEY_STEPS = 6;
 
@@ -174,7 +178,7 @@ async function openFirstUnlockedLab(page: Page): Promise<string> {
     await page.goto(`/labs/${lab}`);
     if ((await page.getByRole("slider", SLIDER).count()) > 0) return lab;
   }
-  throw new Error(`the demo learner has none of ${LABS.join(", ")} unlocked`);
+  throw new Error(`${LEARNER.email} has none of ${LABS.join(", ")} unlocked`);
 }
 
 async function main() {
@@ -183,7 +187,7 @@ async function main() {
   try {
     const { page } = await openPage(browser, "wide");
     await markWorkerMessages(page);
-    await signInThroughForm(page, demoAccounts.learner);
+    await signInThroughForm(page, LEARNER);
     const lab = await openFirstUnlockedLab(page);
     await page.locator('[data-testid="bench-preview"][data-pending="false"]').waitFor({ timeout: 60_000 });
     await page.locator(FAR_END_TRACE).first().waitFor({ timeout: 60_000 });
@@ -194,7 +198,7 @@ async function main() {
     const keys = await keyboardSteps(page);
 
     const scenario = await page.getByRole("heading", { level: 1 }).innerText();
-    console.log(`live workbench in chromium (${browser.version()}), lab ${lab} ("${scenario}", the learner's own variant), as ${demoAccounts.learner.email}`);
+    console.log(`live workbench in chromium (${browser.version()}), lab ${lab} ("${scenario}", the learner's own variant), as ${LEARNER.email}`);
     console.log("medians in ms (and the worst step); simulation: as the worker reports it; the three middle columns split input→redraw\n");
     console.log(
       table(

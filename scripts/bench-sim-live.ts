@@ -110,7 +110,7 @@ function main() {
   const worst = rows.reduce((a, b) => (b.dragMs > a.dragMs ? b : a));
   const worstCpu = rows.reduce((a, b) => (b.dragCpuMs > a.dragCpuMs ? b : a));
   const ringing = rows.find((r) => r.name === RINGING.name)!;
-  console.log("\ntarget (issue 4, a benchmark figure, not a test):");
+  console.log("\ntarget (issue 3, a benchmark figure, not a test):");
   console.log(
     `  drag redraw simulated within one animation frame (${FRAME_MS} ms), wall time: worst ${worst.dragMs.toFixed(2)} ms (${worst.name}) — ${verdict(worst.dragMs < FRAME_MS)}`,
   );
