@@ -7,7 +7,7 @@ import { classifyRoster, countRoster, rosterEmails, type ClassifiedRow, type Ros
 import { invitationExpiry, issueToken } from "./invitation-tokens";
 import { parseRosterCsv } from "./roster-csv";
 import { readRosterFile } from "./roster-file";
-import { sendInvitationLetters, type LetterOutcome } from "./send-invitations";
+import { cohortLetters, sendInvitationLetters, type LetterOutcome } from "./send-invitations";
 
 export type RosterPreview = { fileName: string; rows: ClassifiedRow[]; counts: RosterCounts };
 
@@ -101,13 +101,7 @@ export async function importRoster(params: {
   const letters = await sendInvitationLetters({
     schoolName: school?.name ?? "your school",
     inviterName: params.actor.name,
-    letters: people.map((person) => ({
-      invitationId: invitationIds.get(person.email)!,
-      to: person.email,
-      token: person.token,
-      cohortName: cohort.name,
-      expiresAt,
-    })),
+    letters: cohortLetters(people, invitationIds, { cohortName: cohort.name, expiresAt }),
   });
   return { ok: true, imported: people.length, letters, timings: { writeMs, mailMs: performance.now() - mailStarted } };
 }

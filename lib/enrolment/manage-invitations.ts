@@ -3,7 +3,7 @@ import { findInvitationInSchool, listWaitingInvitations, reissueInvitations, rev
 import { findSchoolById } from "@/db/queries/schools";
 import type { Actor } from "./actor";
 import { invitationExpiry, issueToken } from "./invitation-tokens";
-import { sendInvitationLetters, type LetterOutcome } from "./send-invitations";
+import { cohortLetters, sendInvitationLetters, type LetterOutcome } from "./send-invitations";
 
 export type ResendResult = { ok: true; letters: LetterOutcome } | { ok: false; reason: "not-found" | "accepted" };
 
@@ -58,13 +58,7 @@ export async function resendWaitingInvitations(params: { actor: Actor; cohortId:
   const letters = await sendInvitationLetters({
     schoolName: await schoolName(params.actor.schoolId),
     inviterName: params.actor.name,
-    letters: items.map((item) => ({
-      invitationId: invitationIds.get(item.email)!,
-      to: item.email,
-      token: item.token,
-      cohortName: cohort.name,
-      expiresAt,
-    })),
+    letters: cohortLetters(items, invitationIds, { cohortName: cohort.name, expiresAt }),
   });
   return { ok: true, reissued: items.length, letters };
 }

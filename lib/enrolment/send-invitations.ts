@@ -34,6 +34,15 @@ function acceptUrlFor(token: string): string {
   return `${readAppEnv().APP_URL}/invitations/${token}`;
 }
 
+/** One letter per person invited to a cohort, each carrying the invitation written for their address. */
+export function cohortLetters(
+  people: { email: string; token: string }[],
+  invitationIds: Map<string, string>,
+  cohort: { cohortName: string; expiresAt: Date },
+): InvitationLetter[] {
+  return people.map((person) => ({ invitationId: invitationIds.get(person.email)!, to: person.email, token: person.token, ...cohort }));
+}
+
 export async function sendInvitationLetters(params: {
   schoolName: string;
   inviterName: string | null;
