@@ -1,12 +1,11 @@
 import { and, desc, eq, isNull, lt, sql } from "drizzle-orm";
 import { db } from "../client";
 import type { Executor } from "../connection";
+import { findLearnerCohort } from "./cohorts";
 import {
   benchReviews,
   benchSubmissions,
   certificates,
-  cohortMemberships,
-  cohorts,
   labAttempts,
   schools,
   users,
@@ -39,20 +38,7 @@ async function findLearnerFacts(executor: Executor, params: { userId: string; co
     .where(eq(users.id, params.userId));
   if (!learner) return null;
 
-  // The learner's cohort for the course: the latest-starting one when they were moved between cohorts.
-  const [cohort] = await executor
-    .select({ id: cohorts.id, name: cohorts.name })
-    .from(cohortMemberships)
-    .innerJoin(cohorts, eq(cohorts.id, cohortMemberships.cohortId))
-    .where(
-      and(
-        eq(cohortMemberships.userId, params.userId),
-        eq(cohortMemberships.role, "learner"),
-        eq(cohorts.courseSlug, params.courseSlug),
-      ),
-    )
-    .orderBy(desc(cohorts.startsOn))
-    .limit(1);
+  const cohort = await findLearnerCohort(params, executor);
 
   const scores = await executor
     .select({ labSlug: labAttempts.labSlug, best: sql<number>`max(${labAttempts.score})::int` })
@@ -74,7 +60,7 @@ async function findLearnerFacts(executor: Executor, params: { userId: string; co
 
   return {
     learner,
-    cohort: cohort ?? null,
+    cohort,
     bestPassingScores: new Map(scores.map((row) => [row.labSlug, row.best])),
     acceptedBenchWork: new Map(accepted.map((row) => [row.exerciseSlug, { points: row.points, maxPoints: row.maxPoints }])),
   };

@@ -1,5 +1,6 @@
 import { and, asc, desc, eq, getTableColumns, sql } from "drizzle-orm";
 import { db } from "../client";
+import type { Executor } from "../connection";
 import { cohortMemberships, cohorts, users, type Cohort, type CohortRole } from "../schema";
 
 export type CohortSummary = Cohort & { learnerCount: number; instructorNames: string[] };
@@ -77,9 +78,13 @@ export async function listCohortMembers(params: { cohortId: string; role: Cohort
 }
 
 /** The learner's cohort for a course: the latest-starting one when they were moved between cohorts. */
-export async function findLearnerCohortId(params: { userId: string; courseSlug: string }): Promise<string | null> {
-  const [row] = await db
-    .select({ id: cohorts.id })
+/** The learner's cohort for a course: the latest-starting one when they were moved between cohorts. */
+export async function findLearnerCohort(
+  params: { userId: string; courseSlug: string },
+  executor: Executor = db,
+): Promise<{ id: string; name: string } | null> {
+  const [row] = await executor
+    .select({ id: cohorts.id, name: cohorts.name })
     .from(cohortMemberships)
     .innerJoin(cohorts, eq(cohorts.id, cohortMemberships.cohortId))
     .where(
@@ -91,5 +96,9 @@ export async function findLearnerCohortId(params: { userId: string; courseSlug: 
     )
     .orderBy(desc(cohorts.startsOn))
     .limit(1);
-  return row?.id ?? null;
+  return row ?? null;
+}
+
+export async function findLearnerCohortId(params: { userId: string; courseSlug: string }): Promise<string | null> {
+  return (await findLearnerCohort(params))?.id ?? null;
 }
