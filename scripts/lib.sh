@@ -17,6 +17,11 @@ as_root() {
 apt_install() {
   local package="$1" probe="$2"
   if [ -e "$probe" ] || command -v "$probe" >/dev/null 2>&1; then return 0; fi
+  apt_install_package "$package"
+}
+
+apt_install_package() {
+  local package="$1"
   command -v apt-get >/dev/null || fail "$package is missing and apt-get is not available: install $package with your package manager."
   step "Installing $package from Debian's packages (first run only)"
   as_root env DEBIAN_FRONTEND=noninteractive apt-get install -y -q "$package" >"$DATA_DIR/apt-$package.log" 2>&1 || {
@@ -38,18 +43,36 @@ ensure_node_modules() {
   fi
 }
 
-# Builds the production app unless .next already holds a build of the committed sources and
-# nothing under the app's folders has changed since.
+# Everything the production build is made from.
+BUILD_SOURCES=(app components lessons lib db public proxy.ts instrumentation.ts next.config.ts tailwind.config.ts postcss.config.mjs tsconfig.json package-lock.json)
+
+# The build in .next is current when it was made from the committed sources and none of them has
+# changed since.
+production_build_is_current() {
+  [ -f "$ROOT/.next/BUILD_ID" ] && [ "$(cat "$ROOT/.next/edgewise-source-stamp" 2>/dev/null)" = "$(source_stamp)" ] &&
+    [ -z "$(cd "$ROOT" && git status --porcelain -- "${BUILD_SOURCES[@]}" 2>/dev/null)" ]
+}
+
+source_stamp() {
+  (cd "$ROOT" && git ls-files -s -- "${BUILD_SOURCES[@]}" 2>/dev/null | sha1sum | cut -c1-40)
+}
+
+# build_production LOG: next build. A build of committed sources is stamped, so that the next
+# start or test run reuses it; one made with uncommitted changes is never reused.
+build_production() {
+  local stamp=""
+  [ -z "$(cd "$ROOT" && git status --porcelain -- "${BUILD_SOURCES[@]}" 2>/dev/null)" ] && stamp=$(source_stamp)
+  (cd "$ROOT" && npx next build >"$1" 2>&1) || return 1
+  if [ -n "$stamp" ]; then echo "$stamp" >"$ROOT/.next/edgewise-source-stamp"; fi
+}
+
+# Builds the production app unless .next already holds a current build.
 ensure_production_build() {
-  local stamp
-  stamp=$(cd "$ROOT" && git ls-files -s -- app components lessons lib db public next.config.ts tailwind.config.ts postcss.config.mjs package-lock.json 2>/dev/null | sha1sum | cut -c1-40)
-  if [ ! -f "$ROOT/.next/BUILD_ID" ] || [ "$(cat "$ROOT/.next/edgewise-source-stamp" 2>/dev/null)" != "$stamp" ] ||
-    [ -n "$(cd "$ROOT" && git status --porcelain -- app components lessons lib db 2>/dev/null)" ]; then
-    step "Building the app (next build, about a minute)"
-    (cd "$ROOT" && npx next build >"$DATA_DIR/build.log" 2>&1) || { tail -n 40 "$DATA_DIR/build.log"; fail "the build failed (full log: .data/build.log)."; }
-    echo "$stamp" >"$ROOT/.next/edgewise-source-stamp"
-  else
+  if production_build_is_current; then
     step "Build is up to date"
+  else
+    step "Building the app (next build, about a minute)"
+    build_production "$DATA_DIR/build.log" || { tail -n 40 "$DATA_DIR/build.log"; fail "the build failed (full log: .data/build.log)."; }
   fi
 }
 

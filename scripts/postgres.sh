@@ -10,10 +10,12 @@ PGDATA="${PGDATA:-$DATA_DIR/pg}"
 PGLOG="$PGDATA.log"
 mkdir -p "$DATA_DIR"
 
+# The newest installed server's programs. The client package alone also fills
+# /usr/lib/postgresql/*/bin, so the server is recognised by its own program.
 pg_bin() {
-  local dir
-  dir=$(ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -n 1)
-  [ -n "$dir" ] && echo "$dir"
+  local server
+  server=$(ls -d /usr/lib/postgresql/*/bin/postgres 2>/dev/null | sort -V | tail -n 1)
+  [ -n "$server" ] && dirname "$server"
 }
 
 run_as_postgres() {
@@ -23,7 +25,7 @@ run_as_postgres() {
 is_ready() { "$BIN/pg_isready" -q -U postgres -h 127.0.0.1 -p "$PGPORT"; }
 
 up() {
-  if [ -z "$(pg_bin)" ]; then apt_install postgresql /usr/lib/postgresql; fi
+  [ -n "$(pg_bin)" ] || apt_install_package postgresql
   BIN=$(pg_bin) || fail "PostgreSQL's server programs were not found under /usr/lib/postgresql."
 
   if [ ! -f "$PGDATA/PG_VERSION" ]; then

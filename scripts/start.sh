@@ -15,14 +15,17 @@ mkdir -p "$DATA_DIR"
 
 children=()
 service_pids=()  # filled by start_local_services as each stand-in starts
+# Stops what this script started and keeps its outcome: 0 after Ctrl-C, the failing step's status otherwise.
 cleanup() {
+  local status=$1
   trap - INT TERM EXIT
   stop_background "${children[@]}" "${service_pids[@]}"
   wait 2>/dev/null || true
   [ "${started_postgres:-0}" = 1 ] && bash scripts/postgres.sh stop
-  exit 0
+  exit "$status"
 }
-trap cleanup INT TERM EXIT
+trap 'cleanup $?' EXIT
+trap 'cleanup 0' INT TERM
 
 require_free_port "$PORT" "Edgewise serves there; set PORT to use another"
 ensure_node_modules
