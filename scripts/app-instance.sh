@@ -20,15 +20,15 @@ npx tsx scripts/migrate.ts >/dev/null
 npx tsx scripts/seed.ts >/dev/null
 
 unset SMTP_HOST UPLOADTHING_TOKEN
-mail_sink_env "$base"
+mail_sink_env "instance-$name" "$base"
 upload_fake_env "instance-$name" "$base"
-rm -rf "$UPLOAD_FAKE_DIR"
+rm -rf "$UPLOAD_FAKE_DIR" "$MAIL_SINK_FILE"
 
 [ "${3:-}" = --build ] && ensure_production_build
 [ -f .next/BUILD_ID ] || fail "there is no production build in .next; run 'npx next build' first."
 
 for variable in PGDATA PGPORT DATABASE_URL APP_PORT APP_URL SMTP_HOST SMTP_PORT SMTP_SECURE MAIL_SINK_API_PORT \
-  MAIL_SINK_URL MAIL_FROM UPLOADTHING_TOKEN UPLOAD_FAKE_PORT UPLOAD_FAKE_API_PORT UPLOADTHING_INGEST_URL \
+  MAIL_SINK_URL MAIL_SINK_FILE MAIL_FROM UPLOADTHING_TOKEN UPLOAD_FAKE_PORT UPLOAD_FAKE_API_PORT UPLOADTHING_INGEST_URL \
   UPLOADTHING_API_URL UPLOADTHING_IS_DEV UPLOADTHING_LOG_LEVEL UPLOAD_FAKE_DIR; do
   printf '%s=%s\n' "$variable" "${!variable}"
 done >"$DATA_DIR/instance-$name.env"

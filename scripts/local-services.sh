@@ -2,11 +2,12 @@
 # Sourced by start.sh, test.sh and app-instance.sh; fills service_pids and exports the matching environment.
 # Profiles: dev (ports 540xx) and test (ports 550xx) so a test run never touches a running demo.
 
-# The environment the app and the mail sink share, for a sink on ports BASE+25 (SMTP) and BASE+26 (messages).
+# The environment the app and the mail sink share, for a sink on ports BASE+25 (SMTP) and BASE+26
+# (messages) keeping what it catches in .data/mail-PROFILE.jsonl.
 mail_sink_env() {
-  local base="$1"
+  local profile="$1" base="$2"
   export SMTP_HOST=127.0.0.1 SMTP_PORT=$((base + 25)) SMTP_SECURE=false
-  export MAIL_SINK_API_PORT=$((base + 26)) MAIL_SINK_URL="http://127.0.0.1:$((base + 26))"
+  export MAIL_SINK_API_PORT=$((base + 26)) MAIL_SINK_URL="http://127.0.0.1:$((base + 26))" MAIL_SINK_FILE="$DATA_DIR/mail-$profile.jsonl"
   export MAIL_FROM="${MAIL_FROM:-Edgewise <no-reply@edgewise.example.test>}"
 }
 
@@ -30,10 +31,12 @@ start_local_services() {
   if [ -n "${SMTP_HOST:-}" ]; then
     step "Sending mail through $SMTP_HOST (SMTP_HOST is set; no local sink)"
   else
-    mail_sink_env "$base"
+    mail_sink_env "$profile" "$base"
+    # Like the uploads below: the test database starts empty, so does its mail.
+    [ "$profile" = test ] && rm -f "$MAIL_SINK_FILE"
     require_free_port "$SMTP_PORT" "the local mail sink needs it"
     require_free_port "$MAIL_SINK_API_PORT" "the local mail sink's message list needs it"
-    step "Starting the local mail sink (SMTP 127.0.0.1:$SMTP_PORT, messages at $MAIL_SINK_URL)"
+    step "Starting the local mail sink (SMTP 127.0.0.1:$SMTP_PORT, messages at $MAIL_SINK_URL, kept in .data/mail-$profile.jsonl)"
     start_background node scripts/mail-sink.mjs >"$DATA_DIR/mail-sink-$profile.log" 2>&1
     service_pids+=($!)
     wait_for_port "$SMTP_PORT" 60 "The mail sink"

@@ -83,12 +83,14 @@ export type PrivateMailSink = { process: ChildProcess; listUrl: string };
 
 /**
  * The project's real sink script on ports of this file's own, for tests that must stop mail or
- * send thousands of letters without filling the shared sink other tests and pages read.
+ * send thousands of letters without filling the shared sink other tests and pages read;
+ * `keptIn` names the file it keeps its messages in (memory only when empty).
  */
-export async function startPrivateMailSink(smtpPort: number): Promise<PrivateMailSink> {
+export async function startPrivateMailSink(smtpPort: number, keptIn = ""): Promise<PrivateMailSink> {
   const apiPort = await freePort();
   const child = spawn(process.execPath, ["scripts/mail-sink.mjs"], {
-    env: { ...process.env, SMTP_PORT: String(smtpPort), MAIL_SINK_API_PORT: String(apiPort) },
+    // In memory unless a file is named: the shared sink's file is never this one's.
+    env: { ...process.env, SMTP_PORT: String(smtpPort), MAIL_SINK_API_PORT: String(apiPort), MAIL_SINK_FILE: keptIn },
     stdio: "ignore",
   });
   await waitForPort(smtpPort);
