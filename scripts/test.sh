@@ -66,8 +66,17 @@ if ! wants_suite e2e && ! wants_suite faults; then
   exit $?
 fi
 
-step "Building the app for the browser and fault tests"
-if npx next build >"$DATA_DIR/build-test.log" 2>&1; then
+# The build does not depend on the environment it will serve, so one made by `npm start` from
+# the same sources serves the tests too, and the other way round.
+if production_build_is_current; then
+  step "The app's build is up to date for the browser and fault tests"
+  built=0
+else
+  step "Building the app for the browser and fault tests"
+  build_production "$DATA_DIR/build-test.log"
+  built=$?
+fi
+if [ "$built" = 0 ]; then
   if wants_suite e2e; then
     require_free_port "$APP_PORT" "the browser tests serve the app there"
     NODE_ENV=production start_background npx next start -H 127.0.0.1 -p "$APP_PORT" >"$DATA_DIR/app-test.log" 2>&1
