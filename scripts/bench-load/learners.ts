@@ -52,13 +52,13 @@ export async function createBenchLearners(count: number): Promise<BenchLearner[]
     created.map(async (user, i): Promise<BenchLearner> => {
       await markLessonsCompleted({ userId: user.id, completions });
       const cookie = await createSession(user.id);
-      return { cookie: `${cookie.name}=${cookie.value}`, ...labWork(labs[i % labs.length]) };
+      return { userId: user.id, cookie: `${cookie.name}=${cookie.value}`, ...labWork(labs[i % labs.length]) };
     }),
   );
 }
 
 /** The lab's own reference solution and its first catalogued mistake (valid for every learner's variant), and right answers. */
-function labWork(lab: Lab): Omit<BenchLearner, "cookie"> {
+function labWork(lab: Lab): Omit<BenchLearner, "cookie" | "userId"> {
   const answers = Object.fromEntries(lab.questions.map((q) => [q.id, formatInUnit(q.answer.value, q.answer.unit)]));
   return { labSlug: lab.slug, passing: lab.reference.solution, failing: lab.reference.mistakes[0].choices, answers };
 }

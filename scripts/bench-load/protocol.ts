@@ -2,7 +2,7 @@
 // (driver.ts, a child process) say to each other.
 
 /** A bench learner with a session, the lab they work on, choices that pass and fail it, and the answers to its questions. */
-export type BenchLearner = { cookie: string; labSlug: string; passing: unknown; failing: unknown; answers: Record<string, string> };
+export type BenchLearner = { userId: string; cookie: string; labSlug: string; passing: unknown; failing: unknown; answers: Record<string, string> };
 
 export type RequestKind = "submit" | "retry" | "page";
 
