@@ -134,6 +134,12 @@ Some notes on the rows:
 - **Twisted pair** here is one pair of a data-network cable: data on one conductor, ground on its twisted partner. Such cables are made for 100 Ω between the two conductors of a pair (the figure of the TIA-568 cabling standards), and the catalogue's 99 Ω agrees.
 - **Three-core**: in a round cable of data, ground and supply, the data core touches both others, and at the speed of an edge both carry its return current (the supply conductor is tied to ground through the supply's capacitors). Two returns mean more capacitance, 4/3 of the two-core value, and less inductance: Z0 drops to about 70 Ω.
 - **R′**, the resistance per metre, is tiny next to Z0: 10 m of data beside ground has 0.67 Ω. For runs of the lengths in this course the lines are very nearly lossless. The simulator includes the loss anyway.
+
+### Worked example: from per-metre figures to Z0 and delay
+
+For the round three-core cable the table gives L′ = 393 nH/m and C′ = 79.4 pF/m. Then Z0 = √(393 × 10⁻⁹ ÷ 79.4 × 10⁻¹²) = √4,950 Ω² ≈ 70 Ω, and delay = √(393 × 10⁻⁹ × 79.4 × 10⁻¹²) ≈ 5.59 ns/m (the catalogue's 70.3 Ω and 5.58 ns/m come from unrounded figures).
+
+Compared with data beside ground, the second return raised C′ by a third and cut L′ by a quarter: their ratio, and Z0, fell from 93.8 Ω to 70.3 Ω, while their product, and so the delay, stayed put, because the insulation is the same. **Geometry moves L′ and C′ in opposite directions and sets Z0; the material sets their product, and with it the delay.** That is why the catalogue's impedances span 70 to 351 Ω while its delays stay between 3.65 and 5.58 ns/m.
 `,
     },
     {
@@ -183,11 +189,19 @@ For the 3 ns edge of a 5 V buffer, one sixth is 0.5 ns, which is
 
 of data-beside-ground cable. Nine centimetres! Every data run an installer builds is far longer than that. On a 10 m run, the one-way delay is 55.8 ns and a reflection needs 112 ns to come back: nearly forty times the edge. The wave picture is not a refinement for these runs; it is the only correct one.
 
+### Why the round trip is the measure
+
+A reflection returns to the driver one round trip, 2 T_d, after the edge set off. If the edge is still rising then, the reflection folds into it; if not, it shows as a separate step. Round trip below rise time is the rule's "half" form; the one-sixth form wants it below a third. For the 3.3 V controller pin (a 4 ns edge, from the course's driver list) on twisted pair (5.20 ns/m), the round trip equals the edge at 4 ns ÷ (2 × 5.20 ns/m) = 0.38 m, and the one-sixth rule stops at 0.67 ns ÷ 5.20 ns/m = 0.13 m.
+
 ## Total capacitance, and what the driver really sees
 
 Ten metres of data beside ground holds 10 × 59.5 pF = 595 pF. Lesson 3's RC picture would have the driver charge all 595 pF through its resistance at once. The transmission-line picture says something different: for the first 112 ns, the driver sees only 93.8 Ω; the line charges section by section as the wave moves, and the total capacitance "appears" only after the wave has gone to the far end and back several times.
 
 The two pictures agree in the long run. If the source resistance is much larger than Z0, each round trip adds only a small step, and the steps trace out the RC curve with the cable's total capacitance. If the source resistance is close to or below Z0, the first step is already large, and the RC picture badly underestimates how fast the far end moves and says nothing about the overshoot that follows. Which case you are in decides what your resistor does, and that is why the next two lessons matter.
+
+### Worked example: lesson 3's short lead as a staircase
+
+Lesson 3's 5 V buffer (20 Ω), 330 Ω and 2 m of data beside ground gave an RC rise time of about 95 ns. As a line: R_src = 350 Ω, T_d = 11.2 ns, and returning waves meet Γ_s = (350 − 93.8) / (350 + 93.8) = +0.577 at the driver (lesson 5). The far end climbs 5 V × (1 − 0.577^n): 2.11 V at 11.2 ns, 3.33 V at 33.5 ns, 4.04 V at 55.8 ns, 4.44 V at 78.1 ns, 4.68 V at 100.5 ns. It passes 10 % at the first step and 90 % at the fifth: a rise of 8 × T_d ≈ 89 ns against RC's 95 ns (which also counted the pixel's 5 pF). Four round trips fit inside the rise, so the steps are small and many: the staircase is the RC curve drawn in steps. Without the 330 Ω, RC promises a clean 5.5 ns edge; the line delivers a first step of 8.2 V: lesson 5.
 
 ## Summing up
 
@@ -201,6 +215,15 @@ The two pictures agree in the long run. If the source resistance is much larger 
 
 Your company's standard asks for a data cable whose characteristic impedance lies between 85 Ω and 110 Ω, with no more than 5.7 ns/m of delay and no more than 65 pF/m. The controller is a 3.3 V pin with a 33 Ω resistor already fitted. Pick a cable from the catalogue that meets the standard, check it on the workbench (the scope view shows what each cable does to the same signal), and answer the two questions about the run.
 `,
+    },
+    {
+      kind: "check",
+      id: "round-trip-length",
+      prompt:
+        "A 3.3 V controller pin switches in 4 ns. At what length of twisted pair (5.20 ns/m) does the round trip equal the rise time?",
+      answer: { value: 4e-9 / (2 * 5.2e-9), unit: "m", tolerance: 0.02 },
+      hint: "Round trip = 2 × length × delay per metre; set it equal to 4 ns.",
+      explanation: "Length = 4 ns ÷ (2 × 5.20 ns/m) ≈ 0.38 m. Any longer and reflections come back after the edge has finished, as separate steps.",
     },
     {
       kind: "check",

@@ -136,6 +136,40 @@ No overshoot now: a **staircase**, one step per round trip (112 ns on 10 m), cre
     {
       kind: "text",
       markdown: `
+## A bounce diagram, step by step
+
+A fourth case, one wave at a time: the 3.3 V controller pin (30 Ω, from the course's driver list) with 100 Ω in series, into 10 m of lone lead (Z0 = 351 Ω, T_d = 36.5 ns). R_src = 130 Ω, so Γ_s = (130 − 351) / (130 + 351) = −0.459, the pixel end has Γ_L = +1, and the launched step is 3.3 V × 351 / 481 = 2.41 V.
+
+1. At 36.5 ns the 2.41 V wave reaches the pixel and reflects whole: arriving and leaving waves add, and the far end jumps to 4.81 V.
+2. At 73 ns the reflection reaches the driver: −0.459 × 2.41 V = −1.10 V sets off back.
+3. At 110 ns it arrives doubled: the far end drops by 2.21 V, to 2.60 V. Each later round trip multiplies the wave by Γ_s again.
+
+| arrival n | time after the switch (ns) | step at the far end (V) | far end (V) |
+| --- | --- | --- | --- |
+| 1 | 36.5 | +4.81 | 4.81 |
+| 2 | 110 | −2.21 | 2.60 |
+| 3 | 183 | +1.01 | 3.62 |
+| 4 | 256 | −0.47 | 3.15 |
+| 5 | 329 | +0.21 | 3.37 |
+| 6 | 402 | −0.10 | 3.27 |
+
+**When has it settled?** After n arrivals the far end is 3.3 V × |Γ_s|^n from its final level. Within 1 % (our choice, not a standard) needs n > ln 0.01 / ln 0.459 = 5.9: the sixth arrival, at 11 × T_d = 402 ns. A 0 bit is high for only 400 ns (lesson 1), so the falling edge starts its own, upside-down bounce diagram before this one has died; the line is linear and the two simply add.
+
+**Does it decode?** The lowest plateau, 2.60 V, is far above the 1.5 V low threshold, so every bit decodes. But it is only 0.1 V above mid-supply, where real inputs usually switch (lesson 2). In the simulator the pixel's 5 pF input reflects a small spike at each step, one of which pulls the trace briefly to about 2.47 V, and the verdict warns of a mid-supply dip.
+`,
+    },
+    {
+      kind: "check",
+      id: "settling-time",
+      prompt:
+        "In the fourth case (Γ_s = −0.459, T_d = 36.5 ns, open far end), how long after the driver switches does the far end stay within 1 % of its final level?",
+      answer: { value: 11 * 10 * 3.65e-9, unit: "ns", tolerance: 0.02 },
+      hint: "Find the first n with |Γ_s|^n < 0.01; arrival n comes at (2n − 1) × T_d.",
+      explanation: "ln 0.01 / ln 0.459 = 5.9, so n = 6, which arrives at 11 × 36.5 ns ≈ 402 ns: just after a 0 bit's 400 ns high time has ended.",
+    },
+    {
+      kind: "text",
+      markdown: `
 ## Overshoot and the clamp diodes
 
 **Overshoot** is how far the far end rises above the level it finally settles at; **undershoot** is the same below 0 V after a falling edge. Case 1 asks for a 4.5 V overshoot on a 5 V pixel; case 2 for 1.4 V.
@@ -186,6 +220,23 @@ Everything here is fixed by two numbers you control: the cable (which sets Z0) a
       answer: { value: 5 * (1 - 0.511 ** 2), unit: "V", tolerance: 0.02 },
       hint: "V_far(n) = V × (1 − Γ_s^n) with n = 2.",
       explanation: "0.511² = 0.261; 5 V × (1 − 0.261) ≈ 3.69 V, just above a 5 V pixel's 3.5 V threshold.",
+    },
+    {
+      kind: "text",
+      markdown: `
+## Reading reflections on a scope
+
+A scope shows one point's voltage against time. Reflections give themselves away by:
+
+- **flat steps**: nothing changes between arrivals, so the trace moves in flat-topped steps, each one round trip long (73 ns on 10 m of lone lead);
+- **timing set by length**: steps at T_d, 3 T_d, 5 T_d, ringing every 4 T_d. Double the cable and the timing doubles; change the resistor and only the step sizes change.
+
+A slow **RC edge** (lesson 3) is a smooth curve, steepest at its start, with no flat parts. A resistor charging a capacitor cannot overshoot, so a trace that goes past its final level and comes back is not an RC edge. Its rise time follows the resistance: 680 Ω instead of 330 Ω behind the 20 Ω buffer doubles R_src from 350 to 700 Ω and doubles the rise, where ringing would keep its period. A staircase with steps too fine to see is the RC curve (lesson 4). Ringing far faster than 4 T_d that ignores the cable's length often comes from the probe's ground lead (lesson 8).
+
+## A common misconception: "a shorter cable rings less"
+
+In the bounce diagram every voltage of the fourth case's table depends only on the driver, the resistor and Z0, not on length. On 5 m of the same lead the far end still jumps to 4.81 V and drops back to 2.60 V; each step just lasts half as long (T_d = 18.3 ns). The cable's resistance barely damps it (10 m of lone lead has 0.74 Ω against 351 Ω). Only when the round trip becomes shorter than the edge (lesson 4) do the steps merge into the edge and the ringing fade. Nor is 4.81 V from a 3.3 V driver interference: the open end doubles the wave. The cure is a matched source (lesson 6), not a shorter cable.
+`,
     },
     {
       kind: "text",

@@ -10,7 +10,8 @@
  * - rise time = τ·ln 9 for an RC charge, scope rise ≈ 0.35 / bandwidth, root-sum-of-squares of
  *   cascaded rise times, LC resonance 1/(2π√(LC)), reflection coefficients and the open-end
  *   bounce series V·(1 − Γs^n): electronics textbook formulas;
- * - silicon diode forward drop 0.7 V: textbook figure.
+ * - silicon diode forward drop 0.7 V: textbook figure;
+ * - driver resistances and edge times: the course's driver list (lessons/drivers.ts).
  * A learner who types the formula's result must be accepted: each answer lies within half its
  * tolerance of the recomputed value.
  */
@@ -25,6 +26,7 @@ import {
   type TwoWireGeometry,
 } from "@/lib/sim";
 import { getCourse, type Lesson, type NumericAnswer } from "@/lessons";
+import { buffer5v, controllerPin3v3 } from "@/lessons/drivers";
 
 const defaults = parseSimInput({ cable: { kind: "beside-ground", length: 1 }, signal: { bits: "0" } });
 const T_BIT = defaults.signal.bitPeriod;
@@ -45,6 +47,11 @@ const beside = cableCatalogue["beside-ground"];
 const twisted = cableCatalogue["twisted-pair"];
 const threeCore = cableCatalogue["three-core"];
 const gamma = (source: number, z0: number) => (source - z0) / (source + z0);
+/** Lesson 5's fourth case: the controller pin with 100 Ω into 10 m of lone lead. */
+const CASE4_SOURCE = controllerPin3v3.outputResistance + 100;
+const CASE4_DELAY = 10 * lone.delayPerMetre;
+/** First arrival n at which the open far end stays within `fraction` of its final level: |Γs|^n < fraction. */
+const settlingArrival = (gammaS: number, fraction: number) => Math.ceil(Math.log(fraction) / Math.log(Math.abs(gammaS)));
 const frame = (pixels: number, latch: number) => pixels * WORD_BITS * T_BIT + latch;
 const ones = (bits: string) => [...bits].filter((b) => b === "1").length;
 
@@ -92,6 +99,10 @@ const formulas: Record<string, Formula> = {
   "transmission-line/delay-per-metre": { source: "delay = √(L′·C′)", value: () => Math.sqrt(520e-9 * 52e-12) },
   "transmission-line/run-delay": { source: "length × catalogue delay per metre", value: () => 12 * beside.delayPerMetre },
   "transmission-line/launched-step": { source: "voltage divider with Z0 (catalogue)", value: () => (5 * beside.z0) / (53 + beside.z0) },
+  "transmission-line/round-trip-length": {
+    source: "2·length·delay = rise time; controller pin edge (lessons/drivers.ts), catalogue delay",
+    value: () => controllerPin3v3.edgeTime / (2 * twisted.delayPerMetre),
+  },
   "transmission-line/effective-permittivity": {
     source: "delay = √ε_eff / c",
     value: () => (beside.delayPerMetre * SPEED_OF_LIGHT) ** 2,
@@ -102,6 +113,10 @@ const formulas: Record<string, Formula> = {
   "reflections/source-coefficient": { source: "Γ = (R − Z0)/(R + Z0)", value: () => gamma(53, beside.z0) },
   "reflections/first-arrival": { source: "V_far(1) = V·(1 − Γs)", value: () => 5 * (1 - gamma(53, beside.z0)) },
   "reflections/ringing-period": { source: "four one-way delays (catalogue)", value: () => 4 * 10 * lone.delayPerMetre },
+  "reflections/settling-time": {
+    source: "first n with |Γs|^n < 1 %, arriving at (2n − 1)·T_d (catalogue delay, controller pin)",
+    value: () => (2 * settlingArrival(gamma(CASE4_SOURCE, lone.z0), 0.01) - 1) * CASE4_DELAY,
+  },
   "reflections/staircase-second-step": { source: "V_far(n) = V·(1 − Γs^n)", value: () => 5 * (1 - gamma(290, beside.z0) ** 2) },
 
   "series-termination/matching-resistor": { source: "R_s = Z0 − R_out (catalogue Z0)", value: () => lone.z0 - 30 },
@@ -228,5 +243,88 @@ describe("tables printed in the lessons", () => {
     const text = lessonBySlug("designing-a-run").blocks.flatMap((b) => (b.kind === "text" ? [b.markdown] : [])).join("\n");
     expect(text).toContain(`at 5 mm the figure is about ${Math.round(z0At(5e-3))} Ω`);
     expect(text).toContain(`at 30 mm about ${Math.round(z0At(30e-3))} Ω`);
+  });
+});
+
+const textOf = (slug: string) => lessonBySlug(slug).blocks.flatMap((b) => (b.kind === "text" ? [b.markdown] : [])).join("\n");
+/** A signed number as printed in the lessons, with the typographic minus. */
+const signed = (cell: string) => Number(cell.replace("−", "-").replace("+", ""));
+
+describe("worked examples printed in the lessons", () => {
+  it("lesson 5's step-by-step bounce table follows (2n − 1)·T_d, 2·V_launch·Γs^(n−1) and V·(1 − Γs^n)", () => {
+    const rows = tableAfter(lessonBySlug("reflections"), "## A bounce diagram, step by step");
+    expect(rows).toHaveLength(6);
+    const volts = controllerPin3v3.highVoltage;
+    const gammaS = gamma(CASE4_SOURCE, lone.z0);
+    const launched = (volts * lone.z0) / (CASE4_SOURCE + lone.z0);
+    rows.forEach(([arrival, time, step, far], i) => {
+      const n = i + 1;
+      expect(number(arrival)).toBe(n);
+      expect(Math.abs(number(time) * 1e-9 - (2 * n - 1) * CASE4_DELAY), `arrival ${n} time`).toBeLessThanOrEqual(0.6e-9);
+      expect(Math.abs(signed(step) - 2 * launched * gammaS ** (n - 1)), `arrival ${n} step`).toBeLessThanOrEqual(0.006);
+      expect(Math.abs(signed(far) - volts * (1 - gammaS ** n)), `arrival ${n} far end`).toBeLessThanOrEqual(0.006);
+    });
+  });
+
+  it("lesson 5's fourth case: coefficient, launched step, settling and the shorter cable", () => {
+    const text = textOf("reflections");
+    const gammaS = gamma(CASE4_SOURCE, lone.z0);
+    const z0 = Math.round(lone.z0);
+    expect(text).toContain(`Γ_s = (${CASE4_SOURCE} − ${z0}) / (${CASE4_SOURCE} + ${z0}) = −${Math.abs(gammaS).toFixed(3)}`);
+    expect(text).toContain(`T_d = ${(CASE4_DELAY * 1e9).toFixed(1)} ns`);
+    expect(text).toContain(`the launched step is 3.3 V × ${z0} / ${CASE4_SOURCE + z0} = ${((3.3 * lone.z0) / (CASE4_SOURCE + lone.z0)).toFixed(2)} V`);
+    const n = settlingArrival(gammaS, 0.01);
+    expect(n).toBe(6);
+    expect(text).toContain(`ln 0.01 / ln ${Math.abs(gammaS).toFixed(3)} = ${(Math.log(0.01) / Math.log(Math.abs(gammaS))).toFixed(1)}: the sixth arrival, at ${2 * n - 1} × T_d = ${Math.round((2 * n - 1) * CASE4_DELAY * 1e9)} ns`);
+    expect(text).toContain(`A 0 bit is high for only ${Math.round(ZERO_HIGH * 1e9)} ns`);
+    expect(text).toContain(`only ${(3.3 * (1 - gammaS ** 2) - 5 / 2).toFixed(1)} V above mid-supply`);
+    expect(text).toContain(`(T_d = ${(5 * lone.delayPerMetre * 1e9).toFixed(1)} ns)`);
+    expect(text).toContain(`10 m of lone lead has ${(10 * lone.perMetre.resistance).toFixed(2)} Ω against ${z0} Ω`);
+    expect(text).toContain(`each one round trip long (${Math.round(2 * CASE4_DELAY * 1e9)} ns on 10 m of lone lead)`);
+    expect((buffer5v.outputResistance + 680) / (buffer5v.outputResistance + 330)).toBe(2);
+  });
+
+  it("lesson 4's three-core example: Z0 and delay from the printed L′ and C′, and the 4/3 and 3/4 against beside ground", () => {
+    const text = textOf("transmission-line");
+    const l = Math.round(threeCore.perMetre.inductance * 1e9);
+    const c = Number((threeCore.perMetre.capacitance * 1e12).toFixed(1));
+    expect(text).toContain(`L′ = ${l} nH/m and C′ = ${c} pF/m`);
+    const ratio = (l * 1e-9) / (c * 1e-12);
+    expect(text).toContain(`√${(Math.round(ratio / 10) * 10).toLocaleString("en-US")} Ω² ≈ ${Math.round(Math.sqrt(ratio))} Ω`);
+    expect(text).toContain(`≈ ${(Math.sqrt(l * 1e-9 * c * 1e-12) * 1e9).toFixed(2)} ns/m (the catalogue's ${threeCore.z0.toFixed(1)} Ω and ${(threeCore.delayPerMetre * 1e9).toFixed(2)} ns/m`);
+    expect(threeCore.perMetre.capacitance / beside.perMetre.capacitance).toBeCloseTo(4 / 3, 9);
+    expect(threeCore.perMetre.inductance / beside.perMetre.inductance).toBeCloseTo(3 / 4, 9);
+    expect(threeCore.delayPerMetre).toBeCloseTo(beside.delayPerMetre, 15);
+    expect(text).toContain(`fell from ${beside.z0.toFixed(1)} Ω to ${threeCore.z0.toFixed(1)} Ω`);
+    const entries = Object.values(cableCatalogue);
+    const z0s = entries.map((e) => e.z0);
+    const delays = entries.map((e) => e.delayPerMetre * 1e9);
+    expect(text).toContain(`impedances span ${Math.round(Math.min(...z0s))} to ${Math.round(Math.max(...z0s))} Ω`);
+    expect(text).toContain(`delays stay between ${Math.min(...delays).toFixed(2)} and ${Math.max(...delays).toFixed(2)} ns/m`);
+  });
+
+  it("lesson 4's round-trip rule for the controller pin on twisted pair", () => {
+    const text = textOf("transmission-line");
+    const rise = controllerPin3v3.edgeTime;
+    const delay = twisted.delayPerMetre;
+    expect(text).toContain(`(a ${rise * 1e9} ns edge`);
+    expect(text).toContain(`${rise * 1e9} ns ÷ (2 × ${(delay * 1e9).toFixed(2)} ns/m) = ${(rise / (2 * delay)).toFixed(2)} m`);
+    expect(text).toContain(`${((rise / 6) * 1e9).toFixed(2)} ns ÷ ${(delay * 1e9).toFixed(2)} ns/m = ${(rise / 6 / delay).toFixed(2)} m`);
+  });
+
+  it("lesson 4's staircase for lesson 3's short lead follows 5 V·(1 − Γs^n) at (2n − 1)·T_d", () => {
+    const text = textOf("transmission-line");
+    const source = buffer5v.outputResistance + 330;
+    const delay = 2 * beside.delayPerMetre;
+    const gammaS = gamma(source, beside.z0);
+    expect(text).toContain(`T_d = ${(delay * 1e9).toFixed(1)} ns`);
+    expect(text).toContain(`Γ_s = (${source} − ${beside.z0.toFixed(1)}) / (${source} + ${beside.z0.toFixed(1)}) = +${gammaS.toFixed(3)}`);
+    const steps = [1, 2, 3, 4, 5].map((n) => `${(buffer5v.highVoltage * (1 - gammaS ** n)).toFixed(2)} V at ${((2 * n - 1) * delay * 1e9).toFixed(1)} ns`);
+    expect(text).toContain(steps.join(", "));
+    const ninety = settlingArrival(gammaS, 0.1);
+    expect(ninety).toBe(5);
+    expect(buffer5v.highVoltage * (1 - gammaS)).toBeGreaterThan(0.1 * buffer5v.highVoltage);
+    expect(text).toContain(`a rise of ${2 * (ninety - 1)} × T_d ≈ ${Math.round(2 * (ninety - 1) * delay * 1e9)} ns against RC's ${Math.round(LN9 * source * (2 * beside.perMetre.capacitance + INPUT_C) * 1e9)} ns`);
+    expect(text).toContain(`first step of ${(buffer5v.highVoltage * (1 - gamma(buffer5v.outputResistance, beside.z0))).toFixed(1)} V`);
   });
 });

@@ -3,7 +3,8 @@
  * the labs (the lessons cite it as their source). Each case names the lesson that makes the claim.
  */
 import { describe, expect, it } from "vitest";
-import { CABLE_KINDS, simulateRun, type CableKind, type SimResult } from "@/lib/sim";
+import { CABLE_KINDS, cableCatalogue, parseSimInput, simulateRun, type CableKind, type SimResult } from "@/lib/sim";
+import { buffer5v, controllerPin3v3 } from "@/lessons/drivers";
 
 const BITS = "0100110101100010";
 
@@ -102,5 +103,94 @@ describe("lessons 3 and 5: closed forms the text works with", () => {
 
   it("lesson 4: up to 2–3 m nearly anything works, even at 3.3 V on a lone lead with 33 Ω", () => {
     expect(decodes(run({ volts: 5, cable: "lone-lead", length: 2, seriesResistance: 33 }))).toBe(true);
+  });
+});
+
+/** The simulator's default lead-in: the driver's first edge starts here (docs/simulator.md). */
+const LEAD_IN = parseSimInput({ cable: { kind: "lone-lead", length: 1 }, signal: { bits: "1" } }).signal.leadIn;
+
+/** One rising edge (bits "10") from one of the course's drivers, sampled every 0.5 ns. */
+function edge(options: { driver: typeof buffer5v | typeof controllerPin3v3; cable: CableKind; length: number; seriesResistance: number; inputCapacitance?: number }): SimResult {
+  const { highVoltage, outputResistance, edgeTime } = options.driver;
+  return simulateRun({
+    driver: { highVoltage, outputResistance, edgeTime },
+    seriesResistance: options.seriesResistance,
+    cable: { kind: options.cable, length: options.length },
+    receiver: { supplyVoltage: 5, ...(options.inputCapacitance === undefined ? {} : { inputCapacitance: options.inputCapacitance }) },
+    signal: { bits: "10" },
+    output: { sampleInterval: 0.5e-9 },
+  });
+}
+
+/** Far-end voltage at `t` after the middle of the driver's first edge. */
+function farAt(result: SimResult, t: number, edgeTime: number): number {
+  const at = LEAD_IN + edgeTime / 2 + t;
+  const i = result.time.findIndex((x) => x >= at);
+  return result.farEnd[i];
+}
+
+/** Far-end voltage in the middle of the plateau after arrival n: 2n one-way delays after the edge. */
+const plateau = (result: SimResult, n: number, edgeTime: number) => farAt(result, 2 * n * result.line.delay, edgeTime);
+
+/** Lowest far-end voltage inside the first high, after the first arrival has settled onto its plateau. */
+function lowestInHigh(result: SimResult, edgeTime: number): number {
+  const from = LEAD_IN + edgeTime / 2 + result.line.delay + 10e-9;
+  const to = LEAD_IN + 0.8e-6;
+  return Math.min(...result.farEnd.filter((_, i) => result.time[i] > from && result.time[i] < to));
+}
+
+describe("lesson 5: the fourth case, 3.3 V pin with 100 Ω into 10 m of lone lead", () => {
+  const case4 = { driver: controllerPin3v3, cable: "lone-lead" as const, length: 10, seriesResistance: 100 };
+  const gammaS = (30 + 100 - cableCatalogue["lone-lead"].z0) / (30 + 100 + cableCatalogue["lone-lead"].z0);
+  const edgeTime = controllerPin3v3.edgeTime;
+
+  it("the bounce table's plateaus are the simulator's, and the far end is within 1 % of 3.3 V from the sixth arrival on", () => {
+    const result = edge(case4);
+    for (let n = 1; n <= 8; n += 1) {
+      expect(Math.abs(plateau(result, n, edgeTime) - 3.3 * (1 - gammaS ** n)), `arrival ${n}`).toBeLessThan(0.02);
+    }
+    expect(Math.abs(plateau(result, 5, edgeTime) - 3.3)).toBeGreaterThan(0.033);
+    for (let n = 6; n <= 8; n += 1) expect(Math.abs(plateau(result, n, edgeTime) - 3.3), `arrival ${n}`).toBeLessThan(0.033);
+  });
+
+  it("decodes, but the pixel's 5 pF input pulls a dip to about 2.47 V and the verdict warns of it", () => {
+    const result = edge(case4);
+    expect(result.decoded).toBe("10");
+    const lowest = lowestInHigh(result, edgeTime);
+    expect(lowest).toBeGreaterThan(2.4);
+    expect(lowest).toBeLessThan(2.5);
+    expect(result.verdict.reasons.map((r) => r.code)).toContain("mid-supply-dip");
+  });
+
+  it("without the input capacitance the lowest point is the 2.60 V plateau, and no dip is reported", () => {
+    const result = edge({ ...case4, inputCapacitance: 1e-15 });
+    expect(Math.abs(lowestInHigh(result, edgeTime) - 3.3 * (1 - gammaS ** 2))).toBeLessThan(0.02);
+    expect(result.verdict.reasons.map((r) => r.code)).not.toContain("mid-supply-dip");
+  });
+
+  it("a shorter cable rings as hard: on 5 m the far end still reaches 4.81 V and drops back to 2.60 V", () => {
+    const result = edge({ ...case4, length: 5 });
+    expect(Math.abs(plateau(result, 1, edgeTime) - 3.3 * (1 - gammaS))).toBeLessThan(0.02);
+    expect(Math.abs(plateau(result, 2, edgeTime) - 3.3 * (1 - gammaS ** 2))).toBeLessThan(0.02);
+  });
+});
+
+describe("lesson 4: lesson 3's short lead (5 V buffer, 330 Ω, 2 m beside ground) as a staircase", () => {
+  const beside = cableCatalogue["beside-ground"];
+  const gammaS = (20 + 330 - beside.z0) / (20 + 330 + beside.z0);
+  const edgeTime = buffer5v.edgeTime;
+  const result = edge({ driver: buffer5v, cable: "beside-ground", length: 2, seriesResistance: 330 });
+
+  it("climbs 5 V × (1 − Γs^n), one step per round trip", () => {
+    for (let n = 1; n <= 6; n += 1) {
+      expect(Math.abs(plateau(result, n, edgeTime) - 5 * (1 - gammaS ** n)), `arrival ${n}`).toBeLessThan(0.02);
+    }
+  });
+
+  it("has a rise time between the staircase's 8·T_d and lesson 3's 2.2·R·C (with the 5 pF input)", () => {
+    const staircase = 8 * 2 * beside.delayPerMetre;
+    const rc = Math.log(9) * 350 * (2 * beside.perMetre.capacitance + 5e-12);
+    expect(result.metrics.riseTime!).toBeGreaterThan(0.97 * staircase);
+    expect(result.metrics.riseTime!).toBeLessThan(1.03 * rc);
   });
 });
