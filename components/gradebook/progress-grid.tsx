@@ -6,12 +6,15 @@ import {
   columnFilteringFeature,
   createColumnHelper,
   createFilteredRowModel,
+  createPaginatedRowModel,
   createSortedRowModel,
+  rowPaginationFeature,
   rowSortingFeature,
   sortFn_alphanumeric,
   tableFeatures,
   useTable,
   type ColumnFiltersState,
+  type PaginationState,
   type SortingState,
 } from "@tanstack/react-table";
 import type { GradebookItem, GradebookRow, Standing } from "@/lib/gradebook";
@@ -22,10 +25,15 @@ import { StandingBadge } from "./standing-badge";
 const features = tableFeatures({
   rowSortingFeature,
   columnFilteringFeature,
+  rowPaginationFeature,
   sortedRowModel: createSortedRowModel(),
   filteredRowModel: createFilteredRowModel(),
+  paginatedRowModel: createPaginatedRowModel(),
   sortFns: { alphanumeric: sortFn_alphanumeric },
 });
+
+/** Rows per page: a large cohort's grid stays quick to render and to scan; search and sorting cover every learner. */
+export const GRID_PAGE_SIZE = 50;
 
 const helper = createColumnHelper<typeof features, GradebookRow>();
 
@@ -131,14 +139,17 @@ export function ProgressGrid({ items, rows, cohortId, now }: Props) {
   const columns = useMemo(() => buildColumns(items, cohortId, now), [items, cohortId, now]);
   const [sorting, setSorting] = useState<SortingState>([]);
   const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
+  const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize: GRID_PAGE_SIZE });
   const table = useTable({
     features,
     columns,
     data: rows,
     getRowId: (row) => row.learner.id,
-    state: { sorting, columnFilters },
+    state: { sorting, columnFilters, pagination },
     onSortingChange: setSorting,
     onColumnFiltersChange: setColumnFilters,
+    onPaginationChange: setPagination,
+    autoResetPageIndex: true,
     enableSortingRemoval: true,
   });
 
@@ -150,6 +161,8 @@ export function ProgressGrid({ items, rows, cohortId, now }: Props) {
     return tally;
   }, [rows]);
   const visibleRows = table.getRowModel().rows;
+  const matching = table.getFilteredRowModel().rows.length;
+  const firstShown = pagination.pageIndex * pagination.pageSize + 1;
 
   return (
     <div>
@@ -192,7 +205,9 @@ export function ProgressGrid({ items, rows, cohortId, now }: Props) {
           </button>
         ) : null}
         <p className="ml-auto text-sm text-ink-soft" aria-live="polite">
-          Showing {visibleRows.length} of {rows.length} learners
+          {visibleRows.length === matching
+            ? `Showing ${matching} of ${rows.length} learners`
+            : `Showing ${firstShown}–${firstShown + visibleRows.length - 1} of ${matching} ${matching === rows.length ? "learners" : `matching (${rows.length} in all)`}`}
         </p>
       </div>
 
@@ -274,6 +289,31 @@ export function ProgressGrid({ items, rows, cohortId, now }: Props) {
           </tbody>
         </table>
       </div>
+      {table.getPageCount() > 1 ? (
+        <GridPages
+          page={pagination.pageIndex + 1}
+          pages={table.getPageCount()}
+          onPrevious={table.getCanPreviousPage() ? () => table.previousPage() : undefined}
+          onNext={table.getCanNextPage() ? () => table.nextPage() : undefined}
+        />
+      ) : null}
     </div>
+  );
+}
+
+function GridPages({ page, pages, onPrevious, onNext }: { page: number; pages: number; onPrevious?: () => void; onNext?: () => void }) {
+  const button = "rounded-lg border border-line-strong px-3 py-1.5 text-sm font-semibold enabled:hover:bg-accent-soft disabled:opacity-40";
+  return (
+    <nav className="mt-3 flex items-center justify-end gap-2" aria-label="Grid pages">
+      <button type="button" className={button} onClick={onPrevious} disabled={!onPrevious}>
+        ← Previous {GRID_PAGE_SIZE}
+      </button>
+      <p className="px-2 text-sm tabular-nums text-ink-soft">
+        Page {page} of {pages}
+      </p>
+      <button type="button" className={button} onClick={onNext} disabled={!onNext}>
+        Next {GRID_PAGE_SIZE} →
+      </button>
+    </nav>
   );
 }
