@@ -9,7 +9,10 @@
  *   target (issue 5, point 6);
  * - the SQL statements one run sends (counted at the pg client), and the indexes each one's plan uses;
  * - a reference measured in the same process: the same grid read with one query per learner
- *   (the N+1 shape), to show what the aggregate queries save on this machine.
+ *   (the N+1 shape), to show what the aggregate queries save on this machine;
+ * - the whole server response of the cohort page (`next start`, production build, an
+ *   instructor's session), request to last byte. The app's course has the real 10 items (8 labs,
+ *   2 bench exercises): the page shows those for the same 500 learners.
  * Nothing here fails a build; the target is printed as met or not met.
  *
  * Run: npm run bench:gradebook  (needs tsx --conditions=react-server for the server-only modules)
@@ -47,6 +50,7 @@ const WARM_UP = 3;
 const RUNS = 15;
 const REFERENCE_RUNS = 3;
 const SCRATCH_DB = "edgewise_gradebook_bench";
+const PAGE_PORT = Number(process.env.GRADEBOOK_APP_PORT ?? 57102);
 const keep = process.argv.includes("--keep");
 
 /** The course with two more labs (copies of lessons 7 and 8's), so the grid has 12 items: 10 labs and 2 bench exercises. */
@@ -332,6 +336,15 @@ async function main(): Promise<void> {
     console.log(`  grid: ${rows.length} learners, ${rows.filter((r) => r.standing === "stuck").length} needing attention, ${rows.filter((r) => r.standing === "complete").length} with every item passed`);
     console.log(`\nWhole cohort page data (grid + charts, loadCohortOverview): median ${overviewMedian.toFixed(1)} ms, ${overview.statements.length} statements.`);
     console.log(`Reference in this process, one statement per learner (${learnerIds.length} statements, labs only): median ${referenceMedian.toFixed(1)} ms → the grid is ${(referenceMedian / gridMedian).toFixed(1)}× faster.`);
+
+    const { timeCohortPage } = await import("./bench-gradebook/page-response");
+    const lastLearner = rows.map((row) => row.learner.name).sort().at(-1)!;
+    const page = await timeCohortPage({ port: PAGE_PORT, cohortId: filled.cohortId, instructorId: filled.reviewerId, lastLearner, warmUp: WARM_UP, runs: RUNS });
+    if (!page.cellsShown) throw new Error(`the cohort page did not list ${lastLearner}`);
+    const pageMedian = median(page.times);
+    console.log(`\nCohort page, whole server response (next start, ${LEARNERS} learners × ${gradebookItems(getCourse()).length} items of the app's course, ${(page.bytes / 1000).toFixed(0)} kB of HTML), ${RUNS} runs after ${WARM_UP} warm-up:`);
+    console.log(`  median ${pageMedian.toFixed(1)} ms (min ${Math.min(...page.times).toFixed(1)}, max ${Math.max(...page.times).toFixed(1)}), ×${(pageMedian / overviewMedian).toFixed(1)} its data function`);
+    console.log(`  target ${TARGET_MS} ms: ratio ${(pageMedian / TARGET_MS).toFixed(3)} → ${pageMedian < TARGET_MS ? "met" : "NOT met"}`);
   } finally {
     await setupPool.end();
     const shared = (globalThis as { edgewiseDb?: { $client: pg.Pool } }).edgewiseDb;
