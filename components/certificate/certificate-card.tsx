@@ -5,10 +5,11 @@ import { getCourse } from "@/lessons";
 import { formatCertificateCode } from "@/lib/certificates/code";
 import { evaluateCompletion } from "@/lib/certificates/completion";
 import { issueCertificateIfComplete } from "@/lib/certificates/issue";
-import { learnerCertificatePath } from "@/lib/certificates/urls";
+import { certificatePdfPath, learnerCertificatePath } from "@/lib/certificates/urls";
 
 /**
- * For the learner's home: where they stand with the certificate, linking to its page. It checks the
+ * For the learner's home: where they stand with the certificate, and once it is issued its PDF to
+ * download, beside a link to its page. It checks the
  * completion rule as it renders, so a graduate's certificate appears here even if no earlier check ran.
  */
 export async function CertificateCard({ userId }: { userId: string }) {
@@ -29,17 +30,29 @@ export async function CertificateCard({ userId }: { userId: string }) {
     );
   }
   const { certificate } = result;
+  if (certificate.revokedAt) {
+    return (
+      <Card>
+        <h2 className="text-lg font-semibold">Certificate revoked</h2>
+        <p className="mt-2 text-sm text-ink-soft">Your school revoked it. Its page says why.</p>
+        <Link href={learnerCertificatePath} className={buttonClass("secondary", "mt-3")}>
+          Open the certificate page
+        </Link>
+      </Card>
+    );
+  }
   return (
     <Card>
-      <h2 className="text-lg font-semibold">{certificate.revokedAt ? "Certificate revoked" : "Your certificate is ready"}</h2>
-      <p className="mt-2 text-sm text-ink-soft">
-        {certificate.revokedAt
-          ? "Your school revoked it. Its page says why."
-          : `Code ${formatCertificateCode(certificate.code)}. Download it as a PDF from its page.`}
-      </p>
-      <Link href={learnerCertificatePath} className={buttonClass(certificate.revokedAt ? "secondary" : "primary", "mt-3")}>
-        {certificate.revokedAt ? "Open the certificate page" : "Get my certificate"}
-      </Link>
+      <h2 className="text-lg font-semibold">Your certificate is ready</h2>
+      <p className="mt-2 text-sm text-ink-soft">Code {formatCertificateCode(certificate.code)}. Anyone can check it by this code.</p>
+      <div className="mt-3 flex flex-wrap gap-3">
+        <a href={certificatePdfPath(certificate.id)} className={buttonClass("primary")} download>
+          Download the certificate (PDF)
+        </a>
+        <Link href={learnerCertificatePath} className={buttonClass("secondary")}>
+          Open its page
+        </Link>
+      </div>
     </Card>
   );
 }

@@ -85,6 +85,17 @@ describe("a certificate from download to check", () => {
 
       const mail = await waitForMessage({ to: learner.email, subject: /certificate/i });
       expect(findLinks(mail.text)).toContain(`${baseUrl}/c/${code}`);
+
+      // The same PDF straight from the learner's home page.
+      await page.goto("/learn");
+      const homeCard = page.locator("section, div").filter({ has: page.getByRole("heading", { name: "Your certificate is ready" }) }).last();
+      expect(await homeCard.getByText(`Code ${code}.`).isVisible()).toBe(true);
+      const [fromHome] = await Promise.all([page.waitForEvent("download"), homeCard.getByRole("link", { name: "Download the certificate (PDF)" }).click()]);
+      expect(fromHome.suggestedFilename()).toBe(`certificate-${code}.pdf`);
+      const homeFile = path.resolve("test-results", "certificate-e2e-from-home.pdf");
+      await fromHome.saveAs(homeFile);
+      expect((await readCertificatePdf(new Uint8Array(await readFile(homeFile)))).text).toContain(code);
+      await saveScreenshot(page, "certificate-learner-home");
     } finally {
       await context.close();
     }
@@ -168,6 +179,9 @@ describe("a certificate from download to check", () => {
       await graduate.page.goto("/certificate");
       await expect(graduate.page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Certificate revoked");
       expect(await graduate.page.getByText("Bench photos were found to be another learner's work.").isVisible()).toBe(true);
+      expect(await graduate.page.getByRole("link", { name: "Download the certificate (PDF)" }).count()).toBe(0);
+      await graduate.page.goto("/learn");
+      await graduate.page.getByRole("heading", { name: "Certificate revoked" }).waitFor();
       expect(await graduate.page.getByRole("link", { name: "Download the certificate (PDF)" }).count()).toBe(0);
       const refused = await graduate.page.request.get(pdfPath, { maxRedirects: 0 });
       expect(refused.status()).toBe(303);
