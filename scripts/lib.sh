@@ -62,7 +62,7 @@ source_stamp() {
 build_production() {
   local stamp=""
   [ -z "$(cd "$ROOT" && git status --porcelain -- "${BUILD_SOURCES[@]}" 2>/dev/null)" ] && stamp=$(source_stamp)
-  (cd "$ROOT" && npx next build >"$1" 2>&1) || return 1
+  (cd "$ROOT" && EDGEWISE_LOCAL_PAGES=1 npx next build >"$1" 2>&1) || return 1
   if [ -n "$stamp" ]; then echo "$stamp" >"$ROOT/.next/edgewise-source-stamp"; fi
 }
 

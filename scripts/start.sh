@@ -49,7 +49,7 @@ if [ "$MODE" = production ]; then
   NODE_ENV=production start_background npx next start -H 127.0.0.1 -p "$PORT"
 else
   step "Starting the dev server on http://127.0.0.1:$PORT (Ctrl-C stops it)"
-  start_background npx next dev -H 127.0.0.1 -p "$PORT"
+  EDGEWISE_LOCAL_PAGES=1 start_background npx next dev -H 127.0.0.1 -p "$PORT"
 fi
 children+=($!)
 wait "${children[-1]}"

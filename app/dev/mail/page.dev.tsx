@@ -9,8 +9,8 @@ import { findLinks, isMailSinkEnabled, listCaughtMessages, type CaughtMessage } 
 
 export const metadata: Metadata = { title: "Caught mail", robots: { index: false } };
 
-// Exists only while the local mail sink is configured (development and tests); with real SMTP
-// there is nothing to show, so the route is absent.
+// Built only by the project's scripts (see next.config.ts), and answers only while the local mail
+// sink is configured; with real SMTP there is nothing to show, so the route is absent.
 export default async function CaughtMailPage() {
   if (!isMailSinkEnabled()) notFound();
   const user = await requireRouteAccess("/dev/mail");

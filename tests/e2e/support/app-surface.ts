@@ -1,7 +1,8 @@
 import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 
-// Everything the app answers, found by reading app/ the way Next routes it: pages (page.tsx),
+// Everything the app answers, found by reading app/ the way Next routes it: pages (page.tsx, and
+// page.dev.tsx, which the scripts' builds under test include),
 // route handlers (route.ts, one entry per exported HTTP method) and server actions (the exported
 // functions of "use server" modules), the last mapped to the ids the build gave them.
 
@@ -27,7 +28,7 @@ function projectPath(file: string): string {
 
 export function discoverPages(): string[] {
   return listFiles(appDir)
-    .filter((file) => path.basename(file) === "page.tsx")
+    .filter((file) => ["page.tsx", "page.dev.tsx"].includes(path.basename(file)))
     .map(routePatternOf)
     .sort();
 }
