@@ -2,7 +2,8 @@
 # Every step prints one line that says what it does, so a slow first start is never silent.
 
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
-DATA_DIR="$ROOT/.data"
+# Everything a run keeps (clusters, caught mail, uploads, logs); EDGEWISE_DATA_DIR gives a run its own.
+DATA_DIR="${EDGEWISE_DATA_DIR:-$ROOT/.data}"
 
 step() { printf '\033[1m==> %s\033[0m\n' "$*"; }
 fail() { printf '\033[31mError: %s\033[0m\n' "$*" >&2; exit 1; }

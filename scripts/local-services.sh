@@ -25,7 +25,7 @@ upload_fake_env() {
 
 start_local_services() {
   local profile="$1" base
-  [ "$profile" = test ] && base=$((55000 + ${TEST_PORT_OFFSET:-0})) || base=54000
+  [ "$profile" = test ] && base=$((55000 + ${TEST_PORT_OFFSET:-0})) || base=${LOCAL_SERVICES_PORT_BASE:-54000}
   service_pids=()
 
   if [ -n "${SMTP_HOST:-}" ]; then
@@ -36,7 +36,7 @@ start_local_services() {
     [ "$profile" = test ] && rm -f "$MAIL_SINK_FILE"
     require_free_port "$SMTP_PORT" "the local mail sink needs it"
     require_free_port "$MAIL_SINK_API_PORT" "the local mail sink's message list needs it"
-    step "Starting the local mail sink (SMTP 127.0.0.1:$SMTP_PORT, messages at $MAIL_SINK_URL, kept in .data/mail-$profile.jsonl)"
+    step "Starting the local mail sink (SMTP 127.0.0.1:$SMTP_PORT, messages at $MAIL_SINK_URL, kept in ${DATA_DIR#$ROOT/}/mail-$profile.jsonl)"
     start_background node scripts/mail-sink.mjs >"$DATA_DIR/mail-sink-$profile.log" 2>&1
     service_pids+=($!)
     wait_for_port "$SMTP_PORT" 60 "The mail sink"
@@ -50,7 +50,7 @@ start_local_services() {
     [ "$profile" = test ] && rm -rf "$UPLOAD_FAKE_DIR"
     require_free_port "$UPLOAD_FAKE_PORT" "the local upload fake needs it"
     require_free_port "$UPLOAD_FAKE_API_PORT" "the local upload fake's file API needs it"
-    step "Starting the local upload fake (ingest $UPLOADTHING_INGEST_URL, API $UPLOADTHING_API_URL, files in .data/uploads-$profile)"
+    step "Starting the local upload fake (ingest $UPLOADTHING_INGEST_URL, API $UPLOADTHING_API_URL, files in ${DATA_DIR#$ROOT/}/uploads-$profile)"
     start_background node scripts/upload-fake.mjs >"$DATA_DIR/upload-fake-$profile.log" 2>&1
     service_pids+=($!)
     wait_for_port "$UPLOAD_FAKE_PORT" 60 "The upload fake"

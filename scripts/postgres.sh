@@ -38,7 +38,7 @@ up() {
     fi
     chmod 700 "$PGDATA"
     run_as_postgres "$BIN/initdb" -D "$PGDATA" -U postgres -A trust -E UTF8 --locale=C.UTF-8 >"$DATA_DIR/initdb.log" 2>&1 ||
-      fail "initdb failed (see .data/initdb.log)."
+      fail "initdb failed (see ${DATA_DIR#$ROOT/}/initdb.log)."
     cat >>"$PGDATA/postgresql.conf" <<CONF
 listen_addresses = '127.0.0.1'
 port = $PGPORT
