@@ -134,6 +134,10 @@ async function fillCohorts(database: Database, course: Course) {
     .returning();
   const labSlugs = course.lessons.flatMap((l) => (l.lab ? [l.lab.slug] : []));
   const benchSlugs = course.lessons.flatMap((l) => (l.bench ? [l.bench.slug] : []));
+  const rubrics = new Map(course.lessons.flatMap((l) => (l.bench ? [[l.bench.slug, l.bench.rubric] as const] : [])));
+  // The same share of every criterion, so the stored points add up to the stored total.
+  const scoresAt = (exerciseSlug: string, share: number) =>
+    Object.fromEntries(rubrics.get(exerciseSlug)!.map((c) => [c.id, Math.round(c.points * share)]));
   const checkLessons = course.lessons.slice(0, 8);
   const outcomes = gradedOutcomes(course);
   const cohortIds: string[] = [];
@@ -207,19 +211,22 @@ async function fillCohorts(database: Database, course: Course) {
     await insertInBatches(checks, (batch) => database.insert(quickCheckAnswers).values(batch));
     await insertInBatches(progress, (batch) => database.insert(lessonProgress).values(batch).onConflictDoNothing());
     const stored = submissions.length
-      ? await database.insert(benchSubmissions).values(submissions.map(({ reviewed: _reviewed, ...row }) => row)).returning({ id: benchSubmissions.id, status: benchSubmissions.status })
+      ? await database.insert(benchSubmissions).values(submissions.map(({ reviewed: _reviewed, ...row }) => row)).returning({ id: benchSubmissions.id, status: benchSubmissions.status, exerciseSlug: benchSubmissions.exerciseSlug })
       : [];
     const reviews = stored
       .filter((s) => s.status === "returned" || s.status === "accepted")
-      .map((s) => ({
-        submissionId: s.id,
-        reviewerId: reviewer!.id,
-        scores: { design: 3, measurement: 3, comparison: 1 },
-        total: s.status === "accepted" ? 8 : 5,
-        maxTotal: 10,
-        feedback: "Generated review.",
-        decision: s.status === "accepted" ? ("accept" as const) : ("return" as const),
-      }));
+      .map((s) => {
+        const scores = scoresAt(s.exerciseSlug, s.status === "accepted" ? 0.8 : 0.5);
+        return {
+          submissionId: s.id,
+          reviewerId: reviewer!.id,
+          scores,
+          total: Object.values(scores).reduce((sum, points) => sum + points, 0),
+          maxTotal: 10,
+          feedback: "Generated review.",
+          decision: s.status === "accepted" ? ("accept" as const) : ("return" as const),
+        };
+      });
     if (reviews.length) await insertInBatches(reviews, (batch) => database.insert(benchReviews).values(batch));
     attemptCount += attempts.length;
   }

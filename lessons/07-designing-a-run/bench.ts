@@ -6,7 +6,7 @@ export const bench = {
   brief: `
 Build one data run of your own design on the bench: a controller output (or a signal source set to the pixel protocol), a series resistor, at least 5 m of cable, and a strip whose first pixel you can probe. Work through the seven steps of the lesson on paper first and keep your working.
 
-Measure at the first pixel's data input, with the probe's ground on the pixel's ground (lesson 8 explains how), and record what the run does. Then state what you built and what you measured.
+Measure at the first pixel's data input, with the probe's ground on the pixel's ground (lesson 8 explains how), and record what the run does. Then state what you built and what you measured, and conclude: does the measurement agree with your prediction, and if not, why?
 
 Power the strip from a supply with a fuse sized for its conductors, and disconnect the supply before changing any wiring. Work only on the low-voltage side; leave any mains wiring to a licensed electrician.
 `,
@@ -27,8 +27,13 @@ Power the strip from a supply with a fuse sized for its conductors, and disconne
     ],
   },
   rubric: [
-    { id: "design", criterion: "The written design follows the seven steps and its window contains the resistor fitted", points: 4 },
-    { id: "measurement", criterion: "The probe is at the first pixel with a short ground, and the reported values match the photo", points: 4 },
-    { id: "comparison", criterion: "The learner compares the measurement with the prediction and explains any difference", points: 2 },
+    {
+      id: "measurement-correct",
+      criterion: "Measured at the first pixel's data input with a short probe ground, and the stated rise time and overshoot are the ones on the photo",
+      points: 3,
+    },
+    { id: "trace-readable", criterion: "The photo shows the rising edge with its timebase, volts per division and rise-time readout legible", points: 2 },
+    { id: "conclusion-sound", criterion: "The conclusion sets the measurement beside the prediction and accounts for any difference between them", points: 2 },
+    { id: "design-worked", criterion: "The written design works through the seven steps, and its window of resistor values contains the one fitted", points: 3 },
   ],
 } satisfies BenchExerciseInput;

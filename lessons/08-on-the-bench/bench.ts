@@ -6,7 +6,7 @@ export const bench = {
   brief: `
 Measure and document one real data run, on the bench or on an installation you are allowed to work on, at its first pixel. Use a 10:1 probe compensated on the scope's calibrator, with its spring ground on the pixel's ground pad.
 
-Submit two photos, the scope screen and the probing setup, and state the values below. Your instructor checks that the photo supports every number you give.
+Submit two photos, the scope screen and the probing setup, and state the values below. In the note, identify the run and say whether the edge you measured is one the pixel reads cleanly, and why. Your instructor checks that the photo supports every number you give.
 
 Keep to the low-voltage side. Clip the scope's ground only to the supply's negative, with the supply's output isolated from earth, and leave anything on the mains side to a licensed electrician.
 `,
@@ -27,9 +27,13 @@ Keep to the low-voltage side. Clip the scope's ground only to the supply's negat
     ],
   },
   rubric: [
-    { id: "photo-readable", criterion: "The scope photo is square-on, in focus and its settings and readouts can be read", points: 3 },
-    { id: "probing", criterion: "The probing photo shows the first pixel's pads and a short ground", points: 3 },
-    { id: "values", criterion: "The stated rise time and overshoot agree with the photo", points: 2 },
-    { id: "note", criterion: "The note identifies the run: cable, length, resistor, driver and measured pixel supply", points: 2 },
+    { id: "measurement-correct", criterion: "The stated rise time and overshoot agree with the readouts or cursors on the scope photo", points: 3 },
+    { id: "trace-readable", criterion: "The scope photo is square-on and in focus, with the timebase, volts per division and readouts legible", points: 3 },
+    {
+      id: "conclusion-sound",
+      criterion: "The note identifies the run (cable, length, resistor, driver, measured pixel supply) and its verdict on the edge follows from the values measured",
+      points: 2,
+    },
+    { id: "probing-shown", criterion: "The probing photo shows the tip on the first pixel's data pad and the spring ground on its ground pad", points: 2 },
   ],
 } satisfies BenchExerciseInput;

@@ -160,7 +160,7 @@ describe("a bench exercise from upload to feedback", () => {
       await page.keyboard.press("Escape");
       await dialog.waitFor({ state: "hidden" });
 
-      const given: Record<string, number> = { design: 4, measurement: 3, comparison: 2 };
+      const given: Record<string, number> = { "measurement-correct": 3, "trace-readable": 2, "conclusion-sound": 1, "design-worked": 3 };
       for (const { id, criterion } of findBenchExercise("build-a-run")!.exercise.rubric) {
         await page.getByRole("radio", { name: `${criterion}: ${given[id]}` }).check({ force: true });
       }
@@ -189,7 +189,7 @@ describe("a bench exercise from upload to feedback", () => {
         await page.goto(new URL(link!).pathname);
         await page.getByRole("heading", { name: "Accepted · 9 of 10 points" }).waitFor();
         expect(await page.getByText("Clean measurement. Explain why your rise time beats the prediction.").isVisible()).toBe(true);
-        expect(await page.getByText("3 / 4", { exact: true }).isVisible()).toBe(true);
+        expect(await page.getByText("1 / 2", { exact: true }).isVisible()).toBe(true);
         expect(await page.getByRole("button", { name: /Hand in/ }).count()).toBe(0);
         await saveLoadedScreenshot(page, `bench-learner-feedback-${viewport}`);
       } finally {

@@ -40,7 +40,7 @@ async function workWaitingForReview(): Promise<{ learner: SignedIn; submissionId
 }
 
 const fullMarks: ReviewInput = {
-  scores: { design: "4", measurement: "3", comparison: "2" },
+  scores: { "measurement-correct": "3", "trace-readable": "2", "conclusion-sound": "1", "design-worked": "3" },
   feedback: "Clean measurement at the first pixel. Say why the rise time beats the prediction by 2 ns.",
   decision: "accept",
 };
@@ -114,14 +114,14 @@ describe("reviewing bench work", () => {
     const outcome = await reviewBenchWork({
       reviewer: people.homeInstructor.user,
       submissionId,
-      input: { scores: { design: "5", measurement: "-1", comparison: "1.5" }, feedback: "  ", decision: "maybe" },
+      input: { scores: { "measurement-correct": "-1", "trace-readable": "2", "conclusion-sound": "1.5", "design-worked": "5" }, feedback: "  ", decision: "maybe" },
     });
     expect(outcome).toEqual({
       status: "invalid",
       fieldErrors: {
-        "score-design": "At most 4 points here.",
-        "score-measurement": "Give 0 to 4 points.",
-        "score-comparison": "Give a whole number of points, 0 to 2.",
+        "score-measurement-correct": "Give 0 to 3 points.",
+        "score-conclusion-sound": "Give a whole number of points, 0 to 2.",
+        "score-design-worked": "At most 3 points here.",
         feedback: expect.stringContaining("Write feedback"),
         decision: "Choose accept or return.",
       },
@@ -135,7 +135,7 @@ describe("reviewing bench work", () => {
     expect(outcome).toEqual({ status: "recorded", decision: "accept", total: 9, maxTotal: 10, emailed: true });
 
     const [review] = await listBenchReviews({ submissionId });
-    expect(review).toMatchObject({ scores: { design: 4, measurement: 3, comparison: 2 }, total: 9, maxTotal: 10, decision: "accept", reviewerName: "Test instructor" });
+    expect(review).toMatchObject({ scores: { "measurement-correct": 3, "trace-readable": 2, "conclusion-sound": 1, "design-worked": 3 }, total: 9, maxTotal: 10, decision: "accept", reviewerName: "Test instructor" });
     const [stored] = await db.select().from(benchSubmissions).where(eq(benchSubmissions.id, submissionId));
     expect(stored!.status).toBe("accepted");
 
@@ -155,7 +155,7 @@ describe("reviewing bench work", () => {
     const outcome = await reviewBenchWork({
       reviewer: people.homeInstructor.user,
       submissionId,
-      input: { ...fullMarks, scores: { design: "2", measurement: "1", comparison: "0" }, decision: "return" },
+      input: { ...fullMarks, scores: { "measurement-correct": "1", "trace-readable": "1", "conclusion-sound": "0", "design-worked": "1" }, decision: "return" },
     });
     expect(outcome).toMatchObject({ status: "recorded", decision: "return", total: 3 });
     const message = await waitForMessage({ to: learner.user.email, subject: /returned/ });

@@ -176,7 +176,7 @@ beforeAll(async () => {
   await db.insert(benchReviews).values({
     submissionId: returned!.id,
     reviewerId: instructor.id,
-    scores: { design: 3, measurement: 2, comparison: 1 },
+    scores: { "measurement-correct": 2, "trace-readable": 1, "conclusion-sound": 1, "design-worked": 2 },
     total: 6,
     maxTotal: 10,
     feedback: "Probe ground too long: redo the measurement with the spring tip.",

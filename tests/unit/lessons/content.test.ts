@@ -53,6 +53,15 @@ describe("the course", () => {
     expect(course.completion.benchExercises).toEqual(["build-a-run", "document-a-run"]);
   });
 
+  it("marks each bench exercise on the review's three criteria, at most one of its own, out of 10 points", () => {
+    for (const bench of course.lessons.flatMap((l) => (l.bench ? [l.bench] : []))) {
+      const ids = bench.rubric.map((c) => c.id);
+      expect(ids.slice(0, 3), bench.slug).toEqual(["measurement-correct", "trace-readable", "conclusion-sound"]);
+      expect(ids.length, bench.slug).toBeLessThanOrEqual(4);
+      expect(bench.rubric.reduce((sum, c) => sum + c.points, 0), bench.slug).toBe(10);
+    }
+  });
+
   it("finds lessons and labs by slug and nothing for unknown slugs", () => {
     expect(getLesson("reflections")?.number).toBe(5);
     expect(getLab("lone-lead-termination")?.title).toMatch(/lone lead/);

@@ -1,6 +1,7 @@
 import { formatMoment } from "@/components/ui/dates";
 import type { BenchReviewWithReviewer } from "@/db/queries/bench";
 import type { BenchExercise } from "@/lessons";
+import { describeReviewScores } from "@/lib/bench/review-scores";
 
 /** One review as the learner reads it: the decision, points per rubric criterion, and the feedback. */
 export function ReviewFeedback({ exercise, review, latest }: { exercise: BenchExercise; review: BenchReviewWithReviewer; latest: boolean }) {
@@ -20,11 +21,12 @@ export function ReviewFeedback({ exercise, review, latest }: { exercise: BenchEx
       </div>
       <p className="mt-3 whitespace-pre-line text-ink">{review.feedback}</p>
       <ul className="mt-4 divide-y divide-line rounded-lg border border-line text-sm">
-        {exercise.rubric.map((criterion) => (
-          <li key={criterion.id} className="flex items-start justify-between gap-4 px-3 py-2">
-            <span className="text-ink-soft">{criterion.criterion}</span>
+        {describeReviewScores(exercise.rubric, review.scores).map((row) => (
+          <li key={row.id} className="flex items-start justify-between gap-4 px-3 py-2">
+            <span className="text-ink-soft">{row.label}</span>
             <span className="shrink-0 font-semibold text-ink tabular-nums">
-              {review.scores[criterion.id] ?? 0} / {criterion.points}
+              {row.points ?? "not marked"}
+              {row.maximum === null ? " pt" : ` / ${row.maximum}`}
             </span>
           </li>
         ))}
