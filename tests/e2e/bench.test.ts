@@ -1,8 +1,8 @@
 /**
  * The bench exercise end to end in a real browser against the running app: a learner uploads a
  * scope photo through the page and hands the work in, an instructor reviews it with the photo
- * zoomed and the prediction beside it, and the learner reads the feedback. Screenshots of each
- * screen, narrow and wide, go to test-results/screenshots.
+ * zoomed, panned and fitted again beside the prediction, and the learner reads the feedback.
+ * Screenshots of each screen, narrow and wide, go to test-results/screenshots.
  */
 import { randomUUID } from "node:crypto";
 import path from "node:path";
@@ -96,12 +96,19 @@ describe("a bench exercise from upload to feedback", () => {
 
       await fileInput.setInputFiles({ name: "scope-edge.png", mimeType: "image/png", buffer: scopeScreenPhoto() });
       await page.getByText("“scope-edge.png” added.").waitFor({ timeout: 30_000 });
-      const thumbnail = page.getByRole("img", { name: "Bench photo scope-edge.png" });
+      const opener = page.getByRole("button", { name: "Open photo 1: scope-edge.png" });
+      const thumbnail = opener.locator("img");
       await thumbnail.waitFor();
       await expect.poll(() => thumbnail.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 30_000 }).toBe(1600);
-      expect(await page.getByRole("img", { name: "Bench photo not-a-photo.png" }).count()).toBe(0);
+      expect(await page.getByRole("button", { name: /not-a-photo\.png/ }).count()).toBe(0);
       photoPath = (await thumbnail.getAttribute("src"))!;
       expect(photoPath).toMatch(/^\/api\/bench-photos\/[0-9a-f-]{36}$/);
+      await opener.click();
+      const viewer = page.getByRole("dialog", { name: "Photo 1 of 1: scope-edge.png" });
+      await viewer.getByRole("button", { name: "Zoom in" }).click();
+      await expect.poll(() => viewer.getByRole("status").textContent()).toBe("Zoom: 100 %");
+      await viewer.getByRole("button", { name: "Close" }).click();
+      await viewer.waitFor({ state: "hidden" });
 
       await page.getByLabel("Cable used (kind and conductor size)").selectOption("beside-ground");
       await page.getByLabel("Driver output high level (V)").fill("3.3 V");
@@ -151,14 +158,63 @@ describe("a bench exercise from upload to feedback", () => {
       await dialog.waitFor();
       const zoomed = dialog.getByRole("img", { name: "Bench photo scope-edge.png" });
       const shownWidth = () => zoomed.evaluate((img: HTMLImageElement) => (img.complete ? img.getBoundingClientRect().width : 0));
+      const shownLeft = async () => (await zoomed.boundingBox())!.x;
+      const readout = () => dialog.getByRole("status").textContent();
+      const frame = dialog.getByRole("group", { name: /^scope-edge\.png at / });
+      const scrolled = () => frame.evaluate((box) => ({ left: box.scrollLeft, top: box.scrollTop }));
       await expect.poll(shownWidth, { timeout: 30_000 }).toBeGreaterThan(0);
-      expect(await shownWidth()).toBeLessThanOrEqual(viewports.wide.width);
+      const fitWidth = await shownWidth();
+      expect(fitWidth).toBeLessThanOrEqual(viewports.wide.width);
+      expect(await readout()).toMatch(/^Zoom: Fit · \d+ %$/);
+      // Viewport-sized: a full-page capture would stretch the window, and the fitted photo with it.
       await page.screenshot({ path: path.join(screenshotDir, "bench-review-lightbox-fit-wide.png") });
-      await zoomed.click();
-      await expect.poll(shownWidth).toBe(1600);
-      await page.screenshot({ path: path.join(screenshotDir, "bench-review-lightbox-full-size-wide.png") });
+
+      await page.keyboard.press("+");
+      await expect.poll(readout).toBe("Zoom: 100 %");
+      await dialog.getByRole("button", { name: "Zoom in" }).click();
+      await expect.poll(readout).toBe("Zoom: 200 %");
+      expect(await shownWidth()).toBe(3200);
+      expect(await shownWidth()).toBeGreaterThanOrEqual(1.9 * fitWidth);
+
+      const before = await scrolled();
+      const leftBefore = await shownLeft();
+      await page.keyboard.press("ArrowRight");
+      await page.keyboard.press("ArrowDown");
+      const after = await scrolled();
+      expect(after.left).toBeGreaterThan(before.left);
+      expect(after.top).toBeGreaterThan(before.top);
+      expect(await shownLeft()).toBeLessThan(leftBefore);
+
+      const box = (await frame.boundingBox())!;
+      await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+      await page.mouse.down();
+      await page.mouse.move(box.x + box.width / 2 - 150, box.y + box.height / 2 - 60, { steps: 5 });
+      await page.mouse.up();
+      expect(await scrolled()).toEqual({ left: after.left + 150, top: after.top + 60 });
+      await page.screenshot({ path: path.join(screenshotDir, "bench-review-lightbox-200-wide.png") });
+
+      await page.mouse.wheel(0, 380);
+      await expect.poll(shownWidth).toBeLessThan(3200);
+      expect(await readout()).not.toBe("Zoom: 200 %");
+      await page.keyboard.press("0");
+      await expect.poll(readout).toMatch(/^Zoom: Fit/);
+      expect(await shownWidth()).toBeCloseTo(fitWidth, 0);
+
+      await page.setViewportSize(viewports.narrow);
+      await expect.poll(shownWidth).toBeLessThanOrEqual(viewports.narrow.width);
+      for (const name of ["Zoom out", "Zoom in", "Fit", "Close"]) {
+        const control = (await dialog.getByRole("button", { name }).boundingBox())!;
+        expect(control.x).toBeGreaterThanOrEqual(0);
+        expect(control.x + control.width).toBeLessThanOrEqual(viewports.narrow.width);
+        expect(control.y + control.height).toBeLessThanOrEqual(viewports.narrow.height);
+      }
+      await page.screenshot({ path: path.join(screenshotDir, "bench-review-lightbox-fit-narrow.png") });
+      await dialog.getByRole("button", { name: "Zoom in" }).click();
+      await dialog.getByRole("button", { name: "Zoom in" }).click();
+      await page.screenshot({ path: path.join(screenshotDir, "bench-review-lightbox-zoomed-narrow.png") });
       await page.keyboard.press("Escape");
       await dialog.waitFor({ state: "hidden" });
+      await page.setViewportSize(viewports.wide);
 
       const given: Record<string, number> = { "measurement-correct": 3, "trace-readable": 2, "conclusion-sound": 1, "design-worked": 3 };
       for (const { id, criterion } of findBenchExercise("build-a-run")!.exercise.rubric) {

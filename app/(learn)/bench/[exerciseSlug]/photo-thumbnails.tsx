@@ -2,16 +2,18 @@
 
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
+import { benchPhotoUrl, PhotoDialog } from "@/components/bench-photos/photo-dialog";
 import { formatFileSize } from "@/lib/bench/photo-limits";
 import { deleteBenchPhoto } from "./actions";
 
 export type ThumbnailPhoto = { id: string; name: string; size: number; width: number; height: number };
 
-/** The stored photos, each opening full size; removable while the work can still change. */
+/** The stored photos, each opening the zoomable viewer; removable while the work can still change. */
 export function PhotoThumbnails({ exerciseSlug, photos, removable }: { exerciseSlug: string; photos: ThumbnailPhoto[]; removable: boolean }) {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [message, setMessage] = useState<string | null>(null);
+  const [open, setOpen] = useState<number | null>(null);
   if (photos.length === 0) return <p className="text-sm text-ink-faint">No photos yet.</p>;
 
   function remove(photo: ThumbnailPhoto) {
@@ -25,17 +27,11 @@ export function PhotoThumbnails({ exerciseSlug, photos, removable }: { exerciseS
   return (
     <div className="space-y-2">
       <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3" aria-label="Stored photos">
-        {photos.map((photo) => (
+        {photos.map((photo, index) => (
           <li key={photo.id} className="overflow-hidden rounded-lg border border-line bg-surface">
-            <a href={`/api/bench-photos/${photo.id}`} target="_blank" rel="noreferrer" className="block bg-ink/90">
-              <img
-                src={`/api/bench-photos/${photo.id}`}
-                alt={`Bench photo ${photo.name}`}
-                width={photo.width}
-                height={photo.height}
-                className="aspect-[4/3] w-full object-contain"
-              />
-            </a>
+            <button type="button" onClick={() => setOpen(index)} className="block w-full bg-ink/90" aria-label={`Open photo ${index + 1}: ${photo.name}`}>
+              <img src={benchPhotoUrl(photo.id)} alt="" width={photo.width} height={photo.height} className="aspect-[4/3] w-full object-contain" />
+            </button>
             <div className="flex items-center justify-between gap-2 px-2 py-1.5">
               <p className="min-w-0 truncate text-xs text-ink-soft" title={photo.name}>
                 {photo.name} · {formatFileSize(photo.size)}
@@ -58,6 +54,7 @@ export function PhotoThumbnails({ exerciseSlug, photos, removable }: { exerciseS
       <p aria-live="polite" className="text-sm text-ink-soft">
         {message}
       </p>
+      <PhotoDialog photos={photos} open={open} onOpen={setOpen} />
     </div>
   );
 }
