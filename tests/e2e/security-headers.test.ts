@@ -177,7 +177,7 @@ describe("security headers and the Content-Security-Policy", () => {
     await page.goto("/bench/build-a-run");
     await page.locator('input[type="file"]').setInputFiles({ name: "policy-check.png", mimeType: "image/png", buffer: scopePhoto() });
     await page.getByText("“policy-check.png” added.").waitFor({ timeout: 30_000 });
-    const thumbnail = page.getByRole("img", { name: "Bench photo policy-check.png" });
+    const thumbnail = page.getByRole("button", { name: "Open photo 1: policy-check.png" }).locator("img");
     await expect.poll(() => thumbnail.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 30_000 }).toBe(320);
     await finish(watched);
   });

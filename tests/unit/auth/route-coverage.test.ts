@@ -15,7 +15,8 @@ async function findPages(dir: string): Promise<string[]> {
     entries.map((entry) => {
       const full = path.join(dir, entry.name);
       if (entry.isDirectory()) return findPages(full);
-      return Promise.resolve(entry.name === "page.tsx" ? [full] : []);
+      // page.dev.tsx: a page only the project's scripts build in (see next.config.ts), guarded all the same.
+      return Promise.resolve(entry.name === "page.tsx" || entry.name === "page.dev.tsx" ? [full] : []);
     }),
   );
   return nested.flat();
