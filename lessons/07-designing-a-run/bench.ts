@@ -29,11 +29,11 @@ Power the strip from a supply with a fuse sized for its conductors, and disconne
   rubric: [
     {
       id: "measurement-correct",
-      criterion: "Measured at the first pixel's data input with a short probe ground, and the stated rise time and overshoot are the ones on the photo",
+      criterion: "Measurement correct: taken at the first pixel's data input with a short probe ground, and the stated rise time and overshoot are the ones on the photo",
       points: 3,
     },
-    { id: "trace-readable", criterion: "The photo shows the rising edge with its timebase, volts per division and rise-time readout legible", points: 2 },
-    { id: "conclusion-sound", criterion: "The conclusion sets the measurement beside the prediction and accounts for any difference between them", points: 2 },
-    { id: "design-worked", criterion: "The written design works through the seven steps, and its window of resistor values contains the one fitted", points: 3 },
+    { id: "trace-readable", criterion: "Trace readable: the photo shows the rising edge with its timebase, volts per division and rise-time readout legible", points: 2 },
+    { id: "conclusion-sound", criterion: "Conclusion sound: it sets the measurement beside the prediction and accounts for any difference between them", points: 2 },
+    { id: "design-worked", criterion: "Design worked: the written design goes through the seven steps, and its window of resistor values contains the one fitted", points: 3 },
   ],
 } satisfies BenchExerciseInput;

@@ -27,13 +27,13 @@ Keep to the low-voltage side. Clip the scope's ground only to the supply's negat
     ],
   },
   rubric: [
-    { id: "measurement-correct", criterion: "The stated rise time and overshoot agree with the readouts or cursors on the scope photo", points: 3 },
-    { id: "trace-readable", criterion: "The scope photo is square-on and in focus, with the timebase, volts per division and readouts legible", points: 3 },
+    { id: "measurement-correct", criterion: "Measurement correct: the stated rise time and overshoot agree with the readouts or cursors on the scope photo", points: 3 },
+    { id: "trace-readable", criterion: "Trace readable: the scope photo is square-on and in focus, with the timebase, volts per division and readouts legible", points: 3 },
     {
       id: "conclusion-sound",
-      criterion: "The note identifies the run (cable, length, resistor, driver, measured pixel supply) and its verdict on the edge follows from the values measured",
+      criterion: "Conclusion sound: the note identifies the run (cable, length, resistor, driver, measured pixel supply) and its verdict on the edge follows from the values measured",
       points: 2,
     },
-    { id: "probing-shown", criterion: "The probing photo shows the tip on the first pixel's data pad and the spring ground on its ground pad", points: 2 },
+    { id: "probing-shown", criterion: "Probing shown: the probing photo shows the tip on the first pixel's data pad and the spring ground on its ground pad", points: 2 },
   ],
 } satisfies BenchExerciseInput;
