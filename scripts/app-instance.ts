@@ -4,9 +4,9 @@
 // and started again on its own, as the fault tests need.
 import { execFile, spawn, type ChildProcess } from "node:child_process";
 import { openSync, readFileSync } from "node:fs";
-import { connect } from "node:net";
 import path from "node:path";
 import { promisify } from "node:util";
+import { acceptsConnections } from "./ports";
 
 const root = path.resolve(import.meta.dirname, "..");
 const dataDir = path.join(root, ".data");
@@ -119,15 +119,4 @@ async function waitForPort(port: number, child: ChildProcess, what: string, time
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
   throw new Error(`The ${what} did not listen on 127.0.0.1:${port} within ${timeoutMs / 1000} s.`);
-}
-
-function acceptsConnections(port: number): Promise<boolean> {
-  return new Promise((resolve) => {
-    const socket = connect({ host: "127.0.0.1", port });
-    socket.once("connect", () => {
-      socket.destroy();
-      resolve(true);
-    });
-    socket.once("error", () => resolve(false));
-  });
 }

@@ -5,29 +5,19 @@
  * database before it is imported.
  */
 import { execFileSync, spawn } from "node:child_process";
-import { connect } from "node:net";
 import path from "node:path";
 import { createSession } from "@/lib/auth/session-store";
+import { acceptsConnections } from "../ports";
 
 const root = path.resolve(import.meta.dirname, "../..");
 
 export type PageTimes = { times: number[]; bytes: number; cellsShown: boolean };
 
-function accepts(port: number): Promise<boolean> {
-  return new Promise((resolve) => {
-    const socket = connect({ host: "127.0.0.1", port });
-    socket.once("connect", () => {
-      socket.destroy();
-      resolve(true);
-    });
-    socket.once("error", () => resolve(false));
-  });
-}
 
 async function waitUntilListening(port: number, exited: () => boolean): Promise<void> {
   for (const deadline = Date.now() + 60_000; Date.now() < deadline; ) {
     if (exited()) throw new Error(`next start exited before listening on ${port} (see .data/bench-gradebook-app.log).`);
-    if (await accepts(port)) return;
+    if (await acceptsConnections(port)) return;
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
   throw new Error(`next start did not listen on 127.0.0.1:${port} within 60 s.`);

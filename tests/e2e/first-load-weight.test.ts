@@ -10,10 +10,8 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import type { Browser, CDPSession } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { markLessonsCompleted } from "@/db/queries/progress";
-import { getCourse, getLessonOfLab } from "@/lessons";
-import { createPerson } from "../integration/support/people";
 import { baseUrl, launchBrowser, openPage, signInThroughForm, viewports } from "./support/browser";
+import { createLearnerAtLab } from "./support/learner-at-lab";
 
 const LAB = "lone-lead-termination";
 const ROUTE = "/labs/[labSlug]";
@@ -25,11 +23,7 @@ let learner: { email: string; password: string };
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const person = await createPerson({ role: "learner", password, label: "first-load" });
-  const labLesson = getLessonOfLab(LAB)!.number;
-  const earlier = getCourse().lessons.filter((lesson) => lesson.number < labLesson);
-  await markLessonsCompleted({ userId: person.id, completions: earlier.map((lesson) => ({ lessonSlug: lesson.slug, completedAt: new Date() })) });
-  learner = { email: person.email, password };
+  learner = await createLearnerAtLab({ labSlug: LAB, password, label: "first-load" });
 });
 
 afterAll(async () => {

@@ -6,11 +6,12 @@ import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { demoCohorts, demoPassword } from "@/db/demo-data";
-import { cohortMemberships, cohorts, labAttempts, users } from "@/db/schema";
+import { cohortMemberships, labAttempts, users } from "@/db/schema";
 import { getCourse, getLab } from "@/lessons";
 import { formatInUnit } from "@/lib/answers";
 import { gradeWork, outcomeOf, scoreWork, variantSeedFor } from "@/lib/grading";
 import { launchBrowser, openPage, saveScreenshot, signInAs, signInThroughForm } from "./support/browser";
+import { createTaughtCohort } from "./support/taught-cohort";
 
 // The instructor's side of a running cohort in a real browser: the progress grid sorted and
 // filtered, a stuck learner called out in words, a learner's attempt redrawn on the scope, and
@@ -57,25 +58,13 @@ async function addAttempts(userId: string, labSlug: string, good: boolean, daysA
 }
 
 async function createCohortWithWork(): Promise<void> {
-  const [instructor] = await db.select().from(users).where(eq(users.email, demoCohorts[0].instructor.email));
-  if (!instructor) throw new Error("The seeded instructor is missing: run the seed before the browser tests.");
-  const [cohort] = await db
-    .insert(cohorts)
-    .values({
-      schoolId: instructor.schoolId,
-      name: cohortName,
-      courseSlug: getCourse().slug,
-      startsOn: new Date(Date.now() - 20 * day).toISOString().slice(0, 10),
-      endsOn: new Date(Date.now() + 70 * day).toISOString().slice(0, 10),
-    })
-    .returning();
-  cohortId = cohort!.id;
-  await db.insert(cohortMemberships).values({ cohortId, userId: instructor.id, role: "instructor" });
+  const cohort = await createTaughtCohort({ name: cohortName, startedDaysAgo: 20, endsInDays: 70 });
+  cohortId = cohort.cohortId;
   for (const [key, name] of Object.entries(people) as [keyof typeof people, string][]) {
     const [learner] = await db
       .insert(users)
       .values({
-        schoolId: instructor.schoolId,
+        schoolId: cohort.schoolId,
         email: `${key}.${randomUUID().slice(0, 8)}@browser.example`,
         name,
         role: "learner",

@@ -4,19 +4,17 @@
  * attention is found on the first page whatever page they would fall on by name.
  */
 import { randomUUID } from "node:crypto";
-import { eq } from "drizzle-orm";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { demoCohorts } from "@/db/demo-data";
-import { cohortMemberships, cohorts, labAttempts, users } from "@/db/schema";
+import { cohortMemberships, labAttempts, users } from "@/db/schema";
 import { getCourse, getLab } from "@/lessons";
 import { formatInUnit } from "@/lib/answers";
 import { gradeWork, outcomeOf, scoreWork, variantSeedFor } from "@/lib/grading";
 import { launchBrowser, openPage, saveScreenshot, signInAs } from "./support/browser";
+import { createTaughtCohort } from "./support/taught-cohort";
 
 const LEARNERS = 120;
-const day = 86_400_000;
 const cohortName = `Evening course, large intake ${randomUUID().slice(0, 4)}`;
 const name = (n: number) => `Grid Learner ${String(n).padStart(3, "0")}`;
 /** Last by name, so by name alone they would sit on the last page. */
@@ -26,25 +24,13 @@ let browser: Browser;
 let cohortId: string;
 
 async function createLargeCohort(): Promise<void> {
-  const [instructor] = await db.select().from(users).where(eq(users.email, demoCohorts[0].instructor.email));
-  if (!instructor) throw new Error("The seeded instructor is missing: run the seed before the browser tests.");
-  const [cohort] = await db
-    .insert(cohorts)
-    .values({
-      schoolId: instructor.schoolId,
-      name: cohortName,
-      courseSlug: getCourse().slug,
-      startsOn: new Date(Date.now() - 10 * day).toISOString().slice(0, 10),
-      endsOn: new Date(Date.now() + 80 * day).toISOString().slice(0, 10),
-    })
-    .returning();
-  cohortId = cohort!.id;
-  await db.insert(cohortMemberships).values({ cohortId, userId: instructor.id, role: "instructor" });
+  const cohort = await createTaughtCohort({ name: cohortName, startedDaysAgo: 10, endsInDays: 80 });
+  cohortId = cohort.cohortId;
   const learners = await db
     .insert(users)
     .values(
       Array.from({ length: LEARNERS }, (_, i) => ({
-        schoolId: instructor.schoolId,
+        schoolId: cohort.schoolId,
         email: `grid-${i + 1}.${randomUUID().slice(0, 8)}@browser.example`,
         name: name(i + 1),
         role: "learner" as const,

@@ -12,11 +12,10 @@ import type { Browser, BrowserContext, Page, Response } from "playwright-core";
 import { PNG } from "pngjs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { markLessonsCompleted } from "@/db/queries/progress";
 import { cohortMemberships } from "@/db/schema";
-import { getCourse, getLessonOfLab } from "@/lessons";
-import { createPerson, findDemoCohortId } from "../integration/support/people";
+import { findDemoCohortId } from "../integration/support/people";
 import { launchBrowser, openPage, signInAs, signInThroughForm } from "./support/browser";
+import { createLearnerAtLab } from "./support/learner-at-lab";
 
 const LAB = "lone-lead-termination";
 const password = "headers on every page";
@@ -29,12 +28,9 @@ let learner: { email: string; password: string };
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const person = await createPerson({ role: "learner", password, label: "security-headers" });
+  const person = await createLearnerAtLab({ labSlug: LAB, password, label: "security-headers" });
   await db.insert(cohortMemberships).values({ cohortId: await findDemoCohortId(), userId: person.id, role: "learner" });
-  const labLesson = getLessonOfLab(LAB)!.number;
-  const earlier = getCourse().lessons.filter((lesson) => lesson.number < labLesson);
-  await markLessonsCompleted({ userId: person.id, completions: earlier.map((lesson) => ({ lessonSlug: lesson.slug, completedAt: new Date() })) });
-  learner = { email: person.email, password };
+  learner = person;
 });
 
 afterAll(async () => {

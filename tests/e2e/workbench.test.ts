@@ -5,10 +5,8 @@
  */
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { markLessonsCompleted } from "@/db/queries/progress";
-import { getCourse, getLessonOfLab } from "@/lessons";
-import { createPerson } from "../integration/support/people";
 import { launchBrowser, openPage, saveScreenshot, signInThroughForm } from "./support/browser";
+import { createLearnerAtLab } from "./support/learner-at-lab";
 
 const LAB = "lone-lead-termination";
 const password = "scope on the far end";
@@ -19,11 +17,7 @@ let learner: { email: string; password: string };
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  const person = await createPerson({ role: "learner", password, label: "workbench" });
-  const labLesson = getLessonOfLab(LAB)!.number;
-  const earlier = getCourse().lessons.filter((lesson) => lesson.number < labLesson);
-  await markLessonsCompleted({ userId: person.id, completions: earlier.map((lesson) => ({ lessonSlug: lesson.slug, completedAt: new Date() })) });
-  learner = { email: person.email, password };
+  learner = await createLearnerAtLab({ labSlug: LAB, password, label: "workbench" });
 });
 
 afterAll(async () => {

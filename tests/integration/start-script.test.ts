@@ -6,9 +6,10 @@
  */
 import { spawn, spawnSync } from "node:child_process";
 import { rm } from "node:fs/promises";
-import { connect, createServer, type Server } from "node:net";
+import { createServer, type Server } from "node:net";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { acceptsConnections } from "@/scripts/ports";
 
 const root = path.resolve(import.meta.dirname, "../..");
 let server: Server;
@@ -53,16 +54,6 @@ const privateRun = (() => {
 })();
 const privateDataDir = path.join(root, ".data", "start-check");
 
-function listening(port: number): Promise<boolean> {
-  return new Promise((resolve) => {
-    const socket = connect({ host: "127.0.0.1", port });
-    socket.once("connect", () => {
-      socket.destroy();
-      resolve(true);
-    });
-    socket.once("error", () => resolve(false));
-  });
-}
 
 describe("Ctrl-C on npm run dev", () => {
   it("stops the database, the local services and the app server it started, and exits cleanly", { timeout: 300_000 }, async () => {
@@ -85,7 +76,7 @@ describe("Ctrl-C on npm run dev", () => {
     try {
       const ports = [privateRun.pg, privateRun.smtp, privateRun.mailList, privateRun.uploads, privateRun.uploadApi, privateRun.app];
       const deadline = Date.now() + 240_000;
-      while (!(await Promise.all(ports.map(listening))).every(Boolean)) {
+      while (!(await Promise.all(ports.map(acceptsConnections))).every(Boolean)) {
         if (child.exitCode !== null) throw new Error(`npm run dev stopped early:\n${output}`);
         if (Date.now() > deadline) throw new Error(`npm run dev did not open every port in time:\n${output}`);
         await new Promise((resolve) => setTimeout(resolve, 500));
@@ -96,7 +87,7 @@ describe("Ctrl-C on npm run dev", () => {
       // What a terminal does on Ctrl-C: SIGINT to the foreground process group.
       process.kill(-child.pid!, "SIGINT");
       expect(await exited).toBe(0);
-      expect(await Promise.all(ports.map(listening))).toEqual(ports.map(() => false));
+      expect(await Promise.all(ports.map(acceptsConnections))).toEqual(ports.map(() => false));
       expect(output).not.toMatch(/\n\s+at .+:\d+:\d+/);
     } finally {
       if (child.exitCode === null) process.kill(-child.pid!, "SIGKILL");
