@@ -23,7 +23,8 @@ import { median, table, verdict } from "./bench-sim-support";
 /** Labs with a resistor slider, ringing at their start: the first the demo learner has unlocked is used. */
 const LABS = ["lone-lead-termination", "overshoot-limit", "rc-window"];
 const SLIDER = { name: /^Series resistor/ };
-const FAR_END_TRACE = 'path.recharts-line-curve[stroke="#b05f26"]';
+// The chart's far-end trace, or while a control is held the drag overlay's (the chart hides its own then).
+const FAR_END_TRACE = 'path.recharts-line-curve[stroke="#b05f26"], [data-testid="drag-preview-traces"] path[data-trace="far"]';
 const FRAME_MS = 16;
 // The demo seed gives every learner but the first of a cohort work far into the course, so this
 // one has the termination labs open.

@@ -2,6 +2,7 @@
 
 import { CartesianGrid, Line, LineChart, ReferenceArea, ReferenceLine, XAxis, YAxis } from "recharts";
 import type { LiveRun } from "@/components/simulation";
+import { chartMargin, xAxisHeight, yAxisWidth } from "./chart-geometry";
 import type { ScopePoint } from "./decimate";
 import { niceTicks } from "./ticks";
 import type { TimeWindow } from "./time-window";
@@ -19,6 +20,8 @@ type Props = {
   height: number;
   /** Most bit-slot numbers that fit across the chart; every k-th slot is numbered when there are more. */
   slotLabels: number;
+  /** The traces are drawn over the chart by the drag overlay instead. */
+  tracesHidden?: boolean;
 };
 
 const micro = (seconds: number) => seconds * 1e6;
@@ -28,7 +31,7 @@ function tickFormatter(span: number) {
 }
 
 /** The chart itself: traces, the receiver's bands, bit slots at the far end, faulty bits and verdict markers. */
-export function ScopeChart({ run, points, window, yDomain, markers, selectedBit, height, slotLabels }: Props) {
+export function ScopeChart({ run, points, window, yDomain, markers, selectedBit, height, slotLabels, tracesHidden = false }: Props) {
   const vdd = run.receiver.supplyVoltage;
   const high = run.receiver.highThreshold * vdd;
   const low = run.receiver.lowThreshold * vdd;
@@ -42,7 +45,7 @@ export function ScopeChart({ run, points, window, yDomain, markers, selectedBit,
   const voltTicks = niceTicks(yDomain[0], yDomain[1], 6);
 
   return (
-    <LineChart data={points} height={height} responsive style={{ width: "100%" }} margin={{ top: 18, right: 58, bottom: 6, left: 0 }}>
+    <LineChart data={points} height={height} responsive style={{ width: "100%" }} margin={chartMargin}>
       <CartesianGrid stroke="#eeebe2" />
       <XAxis
         dataKey="t"
@@ -53,7 +56,7 @@ export function ScopeChart({ run, points, window, yDomain, markers, selectedBit,
         tickFormatter={tickFormatter(span)}
         tick={{ fontSize: 12, fill: "#4a555c" }}
         label={{ value: span < 2e-6 ? "time (ns)" : "time (µs)", position: "insideBottomRight", offset: -2, fontSize: 12, fill: "#4a555c" }}
-        height={36}
+        height={xAxisHeight}
       />
       <YAxis
         type="number"
@@ -62,7 +65,7 @@ export function ScopeChart({ run, points, window, yDomain, markers, selectedBit,
         ticks={voltTicks}
         tickFormatter={(value: number) => `${value} V`}
         tick={{ fontSize: 12, fill: "#4a555c" }}
-        width={48}
+        width={yAxisWidth}
       />
       <ReferenceArea y1={high} y2={yDomain[1]} fill={bandStyle.high} fillOpacity={0.09} ifOverflow="hidden" />
       <ReferenceArea y1={yDomain[0]} y2={low} fill={bandStyle.low} fillOpacity={0.09} ifOverflow="hidden" />
@@ -104,27 +107,31 @@ export function ScopeChart({ run, points, window, yDomain, markers, selectedBit,
           label={{ value: `(${marker.number})`, position: "insideTopLeft", fontSize: 12, fontWeight: 600, fill: bandStyle.marker }}
         />
       ))}
-      <Line
-        dataKey="near"
-        name={traceStyle.near.label}
-        stroke={traceStyle.near.stroke}
-        strokeDasharray={traceStyle.near.dash}
-        strokeWidth={traceStyle.near.width}
-        dot={false}
-        activeDot={false}
-        isAnimationActive={false}
-        type="linear"
-      />
-      <Line
-        dataKey="far"
-        name={traceStyle.far.label}
-        stroke={traceStyle.far.stroke}
-        strokeWidth={traceStyle.far.width}
-        dot={false}
-        activeDot={false}
-        isAnimationActive={false}
-        type="linear"
-      />
+      {tracesHidden ? null : (
+        <Line
+          dataKey="near"
+          name={traceStyle.near.label}
+          stroke={traceStyle.near.stroke}
+          strokeDasharray={traceStyle.near.dash}
+          strokeWidth={traceStyle.near.width}
+          dot={false}
+          activeDot={false}
+          isAnimationActive={false}
+          type="linear"
+        />
+      )}
+      {tracesHidden ? null : (
+        <Line
+          dataKey="far"
+          name={traceStyle.far.label}
+          stroke={traceStyle.far.stroke}
+          strokeWidth={traceStyle.far.width}
+          dot={false}
+          activeDot={false}
+          isAnimationActive={false}
+          type="linear"
+        />
+      )}
     </LineChart>
   );
 }

@@ -4,6 +4,7 @@ import dynamic from "next/dynamic";
 import { useMemo, useState } from "react";
 import type { LiveRun } from "@/components/simulation";
 import { BitStrip } from "./bit-strip";
+import { DragOverlay } from "./drag-overlay";
 import type { ScopeMarker } from "./scope-chart";
 import { ScopeLegend } from "./scope-legend";
 import { ScopeSummary } from "./scope-summary";
@@ -63,10 +64,35 @@ export function ScopeView({ run, stale = false, caption, height = 300, children 
   const [chartBox, chartWidth] = useElementWidth<HTMLDivElement>();
   const bitIndex = Math.min(chosenBit ?? firstWrongBit(run), run.bits.length - 1);
 
-  const yDomain = useMemo(() => voltageRange(run), [run]);
-  const visible = timeWindow(run, mode, bitIndex);
-  const points = useMemo(() => decimateTraces(run.trace, visible.from, visible.to, POINT_BUDGET), [run, visible.from, visible.to]);
-  const markers: ScopeMarker[] = run.verdict.reasons.flatMap((reason, i) => (reason.at ? [{ number: i + 1, time: reason.at.time }] : []));
+  // While a control is dragged the chart keeps the last full run's frame and only the preview's
+  // traces are drawn over it (DragOverlay); the whole chart follows once the full run is back.
+  const [settledRun, setSettledRun] = useState<LiveRun | null>(run.span.quality === "preview" ? null : run);
+  if (run.span.quality !== "preview" && settledRun !== run) setSettledRun(run);
+  const dragging = run.span.quality === "preview" && settledRun !== null;
+  const chartRun = dragging ? settledRun : run;
+
+  const yDomain = useMemo(() => voltageRange(chartRun), [chartRun]);
+  const { from, to } = timeWindow(chartRun, mode, bitIndex);
+  const points = useMemo(() => decimateTraces(chartRun.trace, from, to, POINT_BUDGET), [chartRun, from, to]);
+  const selectedBit = mode === "whole" ? null : bitIndex;
+  const slotLabels = Math.floor((chartWidth - 110) / 22);
+  // The same element while only the preview changes, so React leaves the chart as it is.
+  const chart = useMemo(() => {
+    const markers: ScopeMarker[] = chartRun.verdict.reasons.flatMap((reason, i) => (reason.at ? [{ number: i + 1, time: reason.at.time }] : []));
+    return (
+      <ScopeChart
+        run={chartRun}
+        points={points}
+        window={{ from, to }}
+        yDomain={yDomain}
+        markers={markers}
+        selectedBit={selectedBit}
+        height={height}
+        slotLabels={slotLabels}
+        tracesHidden={dragging}
+      />
+    );
+  }, [chartRun, points, from, to, yDomain, selectedBit, height, slotLabels, dragging]);
 
   const selectBit = (index: number) => {
     setChosenBit(index);
@@ -126,17 +152,9 @@ export function ScopeView({ run, stale = false, caption, height = 300, children 
       <div className="mt-3">
         <ScopeLegend />
       </div>
-      <div className="mt-2 -ml-2" aria-hidden="true" ref={chartBox} style={{ minHeight: height }}>
-        <ScopeChart
-          run={run}
-          points={points}
-          window={visible}
-          yDomain={yDomain}
-          markers={markers}
-          selectedBit={mode === "whole" ? null : bitIndex}
-          height={height}
-          slotLabels={Math.floor((chartWidth - 110) / 22)}
-        />
+      <div className="relative mt-2 -ml-2" aria-hidden="true" ref={chartBox} style={{ minHeight: height }}>
+        {chart}
+        {dragging ? <DragOverlay run={run} window={{ from, to }} yDomain={yDomain} width={chartWidth} height={height} /> : null}
       </div>
       <BitStrip bits={run.bits} selected={mode === "whole" ? null : bitIndex} onSelect={selectBit} />
       <div className="mt-4 rounded-lg border border-line bg-sunken/50 p-4">

@@ -77,10 +77,16 @@ describe("the workbench", () => {
       await page.mouse.down();
       await page.mouse.move(box.x + box.width * 0.45, y, { steps: 8 });
       await page.mouse.move(box.x + box.width * 0.6, y, { steps: 8 });
+      // While the thumb is held, the preview's traces are drawn over the chart, the chart's own hidden.
+      const overlayFarEnd = page.locator('[data-testid="drag-preview-traces"] path[data-trace="far"]');
+      await overlayFarEnd.waitFor({ timeout: 30_000 });
+      expect(await overlayFarEnd.getAttribute("d")).toMatch(/^M[\d.-]+,[\d.-]+(L[\d.]+,[\d.-]+){100,}$/);
+      expect(await page.locator(farEndTrace).count()).toBe(0);
       await page.mouse.up();
       const dragged = await resistorShown(page);
       expect(dragged).not.toBe("33 Ω");
       await settled(page);
+      expect(await page.getByTestId("drag-preview-traces").count()).toBe(0);
       expect(await page.locator(farEndTrace).first().getAttribute("d")).not.toBe(traceAt33);
       expect(await page.locator('svg[role="img"]').filter({ visible: true }).getAttribute("aria-label")).toContain(`a ${dragged} series resistor`);
       expect(await page.getByTestId("resimulation-time").innerText()).toMatch(/\d+ ms/);
