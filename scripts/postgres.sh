@@ -58,6 +58,12 @@ CONF
   fi
   for _ in $(seq 1 100); do is_ready && break; sleep 0.1; done
   is_ready || fail "PostgreSQL is not accepting connections on port $PGPORT."
+  # A server already answering on the port may be another checkout's, or the system's own: using it
+  # would put this checkout's data in someone else's cluster.
+  local serving
+  serving=$("$BIN/psql" -h 127.0.0.1 -p "$PGPORT" -U postgres -tAc "show data_directory" 2>/dev/null) || serving=""
+  [ "$(realpath -m "$serving")" = "$(realpath -m "$PGDATA")" ] ||
+    fail "port $PGPORT on 127.0.0.1 is answered by another PostgreSQL (${serving:-one this script cannot sign in to}), not this checkout's cluster in ${PGDATA#$ROOT/}. Stop it or set PGPORT to use another port."
 
   for db in "$@"; do
     if ! "$BIN/psql" -h 127.0.0.1 -p "$PGPORT" -U postgres -tAc "select 1 from pg_database where datname = '$db'" | grep -q 1; then
