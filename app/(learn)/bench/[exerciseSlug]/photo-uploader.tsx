@@ -5,6 +5,7 @@ import { useId, useState } from "react";
 import { buttonClass } from "@/components/ui/button-class";
 import { benchPhotoLimits, formatFileSize, refuseDeclaredPhotos } from "@/lib/bench/photo-limits";
 import { useUploadThing } from "@/lib/uploads/client-helpers";
+import { redrawnPhoto } from "@/lib/uploads/redraw-photo";
 import { startBenchDraft } from "./actions";
 
 type Notice = { tone: "error" | "success"; text: string };
@@ -18,7 +19,8 @@ const serviceFailureCodes = new Set<string>(["INTERNAL_SERVER_ERROR", "INTERNAL_
 
 /**
  * Picks or takes photos and sends them through the upload route. Files are checked here first for
- * an instant answer; the server checks them again, and checks what arrived by its content.
+ * an instant answer, and redrawn from their pixels so that no location or camera details travel
+ * with them; the server checks them again, and checks what arrived by its content.
  */
 export function PhotoUploader({ exerciseSlug, storedCount }: { exerciseSlug: string; storedCount: number }) {
   const router = useRouter();
@@ -41,7 +43,7 @@ export function PhotoUploader({ exerciseSlug, storedCount }: { exerciseSlug: str
     try {
       const draft = await startBenchDraft(exerciseSlug);
       if (!draft.ok) return setNotices([{ tone: "error", text: draft.message }]);
-      const results = await startUpload(files, { submissionId: draft.submissionId });
+      const results = await startUpload(await Promise.all(files.map(redrawnPhoto)), { submissionId: draft.submissionId });
       if (!results) return;
       setNotices(
         results.map((result) =>
@@ -107,6 +109,7 @@ export function PhotoUploader({ exerciseSlug, storedCount }: { exerciseSlug: str
           PNG, JPEG or WebP · up to {formatFileSize(benchPhotoLimits.maxBytes)} each · {Math.max(room, 0)} of {benchPhotoLimits.maxPhotos}{" "}
           places left
         </p>
+        <p className="text-xs text-ink-faint">Where and when a photo was taken, and with which camera, is left out: only the picture is sent.</p>
       </div>
       <div aria-live="polite" role="status" className="space-y-2">
         {notices.map((notice, index) => (
