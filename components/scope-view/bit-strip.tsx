@@ -2,15 +2,11 @@
 
 import type { SimBit } from "@/lib/sim";
 
-function describeBit(bit: SimBit, index: number): string {
-  const read = bit.received === "x" ? "unreadable (no single clean pulse)" : bit.received;
-  const verdict = bit.received === String(bit.sent) ? "correct" : "wrong";
-  return `Bit ${index + 1}: sent ${bit.sent}, pixel read ${read}, ${verdict}`;
-}
-
 /**
  * The decoded bits under the chart: what the driver sent over what the pixel read. A wrong bit is
  * marked by a cross and a heavy border as well as by colour; each bit zooms the chart to itself.
+ * Screen readers hear the same digits in a sentence ("Bit 3: sent 1, pixel read 0, wrong"): the
+ * words around them are only hidden from sight, so the name spoken holds the text shown.
  */
 export function BitStrip({ bits, selected, onSelect }: { bits: SimBit[]; selected: number | null; onSelect: (index: number) => void }) {
   return (
@@ -28,15 +24,28 @@ export function BitStrip({ bits, selected, onSelect }: { bits: SimBit[]; selecte
                 <button
                   type="button"
                   onClick={() => onSelect(index)}
-                  aria-label={describeBit(bit, index)}
                   aria-pressed={selected === index}
                   className={`flex w-7 flex-col items-center rounded-md border font-mono text-sm leading-6 ${
                     wrong ? "border-2 border-danger bg-danger-soft text-danger" : "border-line bg-surface text-ink"
                   } ${selected === index ? "ring-2 ring-accent ring-offset-1" : ""}`}
                 >
-                  <span className="text-[10px] leading-4 text-ink-faint">{index + 1}</span>
-                  <span>{bit.sent}</span>
-                  <span className="font-semibold">{wrong ? (bit.received === "x" ? "✗" : `${bit.received}✗`) : bit.received}</span>
+                  <span className="text-[10px] leading-4 text-ink-faint">
+                    <span className="sr-only">Bit </span>
+                    {index + 1}
+                    <span className="sr-only">:</span>
+                  </span>
+                  <span>
+                    <span className="sr-only">sent </span>
+                    {bit.sent}
+                  </span>
+                  <span className="font-semibold">
+                    <span className="sr-only">, pixel read </span>
+                    {wrong ? (bit.received === "x" ? "✗" : `${bit.received}✗`) : bit.received}
+                    <span className="sr-only">
+                      {bit.received === "x" ? " (unreadable: no single clean pulse)" : ""}
+                      {wrong ? ", wrong" : ", correct"}
+                    </span>
+                  </span>
                 </button>
               </li>
             );

@@ -45,7 +45,8 @@ export function ScopeChart({ run, points, window, yDomain, markers, selectedBit,
   const voltTicks = niceTicks(yDomain[0], yDomain[1], 6);
 
   return (
-    <LineChart data={points} height={height} responsive style={{ width: "100%" }} margin={chartMargin}>
+    // No keyboard layer: the chart is hidden from assistive technology, which reads the summary beside it instead.
+    <LineChart data={points} height={height} responsive style={{ width: "100%" }} margin={chartMargin} accessibilityLayer={false}>
       <CartesianGrid stroke="#eeebe2" />
       <XAxis
         dataKey="t"
@@ -71,7 +72,7 @@ export function ScopeChart({ run, points, window, yDomain, markers, selectedBit,
       <ReferenceArea y1={yDomain[0]} y2={low} fill={bandStyle.low} fillOpacity={0.09} ifOverflow="hidden" />
       <ReferenceLine y={high} stroke={bandStyle.high} strokeWidth={1} label={{ value: `high ${high.toFixed(2)}`, position: "right", fontSize: 11, fill: bandStyle.high }} />
       <ReferenceLine y={low} stroke={bandStyle.low} strokeWidth={1} label={{ value: `low ${low.toFixed(2)}`, position: "right", fontSize: 11, fill: bandStyle.low }} />
-      <ReferenceLine y={vdd / 2} stroke={bandStyle.low} strokeDasharray="2 4" label={{ value: `mid ${(vdd / 2).toFixed(2)}`, position: "right", fontSize: 11, fill: "#6b757b" }} />
+      <ReferenceLine y={vdd / 2} stroke={bandStyle.low} strokeDasharray="2 4" label={{ value: `mid ${(vdd / 2).toFixed(2)}`, position: "right", fontSize: 11, fill: "#5f686e" }} />
       {slots.map((slot) => {
         const wrong = slot.bit.received !== String(slot.bit.sent);
         const selected = slot.index === selectedBit;
@@ -94,7 +95,7 @@ export function ScopeChart({ run, points, window, yDomain, markers, selectedBit,
           stroke={bandStyle.slot}
           strokeDasharray="3 3"
           ifOverflow="hidden"
-          label={slot.index % labelEvery === 0 ? { value: String(slot.index + 1), position: "top", fontSize: 10, fill: "#6b757b" } : undefined}
+          label={slot.index % labelEvery === 0 ? { value: String(slot.index + 1), position: "top", fontSize: 10, fill: "#5f686e" } : undefined}
         />
       ))}
       {markers.map((marker) => (
