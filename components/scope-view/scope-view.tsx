@@ -78,7 +78,9 @@ export function ScopeView({ run, stale = false, caption, height = 300, children 
   const slotLabels = Math.floor((chartWidth - 110) / 22);
   // The same element while only the preview changes, so React leaves the chart as it is.
   const chart = useMemo(() => {
-    const markers: ScopeMarker[] = chartRun.verdict.reasons.flatMap((reason, i) => (reason.at ? [{ number: i + 1, time: reason.at.time }] : []));
+    // The verdict's markers belong to the run drawn in full; while dragging, the summary below already
+    // speaks of the preview, whose reasons may be others.
+    const markers: ScopeMarker[] = dragging ? [] : chartRun.verdict.reasons.flatMap((reason, i) => (reason.at ? [{ number: i + 1, time: reason.at.time }] : []));
     return (
       <ScopeChart
         run={chartRun}
