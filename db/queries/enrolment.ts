@@ -1,7 +1,8 @@
-import { and, count, desc, eq, gt, inArray, isNull, ne, sql } from "drizzle-orm";
+import { and, count, desc, eq, inArray, isNull, ne, sql } from "drizzle-orm";
 import { db } from "../client";
 import type { Transaction } from "../connection";
 import { cohortMemberships, cohorts, invitations, sessions, users, type Invitation, type Role } from "../schema";
+import { isOpenInvitation, isUsableInvitation } from "./invitation-conditions";
 import { awaitingFirstSend } from "./invitation-mail";
 import { unsetPasswordHash } from "./users";
 
@@ -48,9 +49,7 @@ export async function findRosterConflicts(params: {
         and(
           eq(invitations.schoolId, params.schoolId),
           inArray(invitations.email, params.emails),
-          isNull(invitations.usedAt),
-          isNull(invitations.revokedAt),
-          gt(invitations.expiresAt, params.now),
+          isUsableInvitation(params.now),
         ),
       ),
   ]);
@@ -279,8 +278,7 @@ async function revokeOpenInvitations(tx: Transaction, params: { schoolId: string
       and(
         eq(invitations.schoolId, params.schoolId),
         inArray(invitations.email, params.emails),
-        isNull(invitations.usedAt),
-        isNull(invitations.revokedAt),
+        isOpenInvitation(),
       ),
     );
 }
@@ -322,8 +320,7 @@ export async function revokeInvitation(params: { schoolId: string; invitationId:
       and(
         eq(invitations.id, params.invitationId),
         eq(invitations.schoolId, params.schoolId),
-        isNull(invitations.usedAt),
-        isNull(invitations.revokedAt),
+        isOpenInvitation(),
       ),
     )
     .returning({ id: invitations.id });
@@ -370,9 +367,7 @@ export async function listOpenInvitationsBySchool(params: {
 }): Promise<{ invitations: OpenInvitation[]; total: number }> {
   const open = and(
     eq(invitations.schoolId, params.schoolId),
-    isNull(invitations.usedAt),
-    isNull(invitations.revokedAt),
-    gt(invitations.expiresAt, params.now),
+    isUsableInvitation(params.now),
   );
   const [rows, [total]] = await Promise.all([
     db

@@ -1,6 +1,7 @@
-import { and, asc, eq, gt, inArray, isNotNull, isNull, lte, sql } from "drizzle-orm";
+import { and, asc, eq, inArray, isNotNull, lte, sql } from "drizzle-orm";
 import { db } from "../client";
 import { cohorts, invitations, schools, users } from "../schema";
+import { isUsableInvitation } from "./invitation-conditions";
 
 // The invitation e-mail outbox. A new link is marked as waiting for its e-mail; the request that
 // made it sends the e-mail at once and records the outcome, and a background job takes over what
@@ -75,9 +76,7 @@ export async function claimDueInvitationMail(params: {
         and(
           isNotNull(invitations.mailPendingSince),
           lte(invitations.mailNextTryAt, params.now),
-          isNull(invitations.usedAt),
-          isNull(invitations.revokedAt),
-          gt(invitations.expiresAt, params.now),
+          isUsableInvitation(params.now),
         ),
       )
       .orderBy(asc(invitations.mailNextTryAt))

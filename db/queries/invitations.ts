@@ -1,6 +1,7 @@
-import { and, desc, eq, gt, isNull } from "drizzle-orm";
+import { and, desc, eq } from "drizzle-orm";
 import { db } from "../client";
 import { cohortMemberships, cohorts, invitations, schools, users, type Invitation, type Role } from "../schema";
+import { isOpenInvitation, isUsableInvitation } from "./invitation-conditions";
 import { awaitingFirstSend } from "./invitation-mail";
 import { unsetPasswordHash } from "./users";
 
@@ -25,8 +26,7 @@ export async function createInvitation(params: {
         and(
           eq(invitations.schoolId, params.schoolId),
           eq(invitations.email, params.email),
-          isNull(invitations.usedAt),
-          isNull(invitations.revokedAt),
+          isOpenInvitation(),
         ),
       );
     const [invitation] = await tx
@@ -141,9 +141,7 @@ export async function listPendingInvitationsBySchool(params: { schoolId: string;
     .where(
       and(
         eq(invitations.schoolId, params.schoolId),
-        isNull(invitations.usedAt),
-        isNull(invitations.revokedAt),
-        gt(invitations.expiresAt, params.now),
+        isUsableInvitation(params.now),
       ),
     )
     .orderBy(desc(invitations.createdAt));
