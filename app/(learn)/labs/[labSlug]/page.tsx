@@ -3,6 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { LessonMarkdown } from "@/components/lesson/lesson-markdown";
 import { AppFrame } from "@/components/shell/app-frame";
+import { Breadcrumb } from "@/components/ui/breadcrumb";
 import { Workbench } from "@/components/workbench/workbench";
 import { getLab, getLessonOfLab, labVariant } from "@/lessons";
 import { requireRouteAccess } from "@/lib/auth/current-user";
@@ -47,21 +48,13 @@ export default async function LabPage({ params }: Props) {
 
   return (
     <AppFrame user={user}>
-      <nav aria-label="Breadcrumb" className="mb-4 text-sm text-ink-soft">
-        <Link href="/learn" className="font-medium text-accent no-underline hover:underline">
-          Course map
-        </Link>
-        <span aria-hidden="true" className="mx-2 text-ink-faint">
-          /
-        </span>
-        <Link href={`/lessons/${lesson.slug}`} className="font-medium text-accent no-underline hover:underline">
-          Lesson {lesson.number}: {lesson.title}
-        </Link>
-        <span aria-hidden="true" className="mx-2 text-ink-faint">
-          /
-        </span>
-        <span aria-current="page">Lab</span>
-      </nav>
+      <Breadcrumb
+        trail={[
+          { href: "/learn", label: "Course map" },
+          { href: `/lessons/${lesson.slug}`, label: `Lesson ${lesson.number}: ${lesson.title}` },
+        ]}
+        current="Lab"
+      />
       <header className="mb-6">
         <p className="mb-1 text-sm font-semibold uppercase tracking-wide text-copper">Lab {lesson.number} · on the workbench</p>
         <h1 className="text-3xl font-semibold tracking-tight text-ink sm:text-4xl">{lab.title}</h1>

@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { LessonFigure } from "@/components/figures/lesson-figure";
 import { BenchExerciseBrief } from "@/components/lesson/bench-exercise-brief";
@@ -11,6 +10,7 @@ import { LessonRail } from "@/components/lesson/lesson-rail";
 import { QuickCheckForm, type SavedCheck } from "@/components/lesson/quick-check-form";
 import { lessonSections } from "@/components/lesson/section-headings";
 import { AppFrame } from "@/components/shell/app-frame";
+import { Breadcrumb } from "@/components/ui/breadcrumb";
 import { listQuickCheckStatesByLesson } from "@/db/queries/quick-checks";
 import { getCourse, getLesson } from "@/lessons";
 import { describeExpectedEntry } from "@/lib/answers";
@@ -51,15 +51,7 @@ export default async function LessonPage({ params }: Props) {
 
   return (
     <AppFrame user={user}>
-      <nav aria-label="Breadcrumb" className="mb-4 text-sm text-ink-soft">
-        <Link href="/learn" className="font-medium text-accent no-underline hover:underline">
-          Course map
-        </Link>
-        <span aria-hidden="true" className="mx-2 text-ink-faint">
-          /
-        </span>
-        <span aria-current="page">Lesson {lesson.number}</span>
-      </nav>
+      <Breadcrumb trail={[{ href: "/learn", label: "Course map" }]} current={`Lesson ${lesson.number}`} />
       <header className="mb-8 max-w-3xl">
         <p className="text-sm font-semibold uppercase tracking-wide text-copper">
           Lesson {lesson.number} of {course.lessons.length} · about {lesson.minutes} minutes
