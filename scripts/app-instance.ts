@@ -6,7 +6,7 @@ import { execFile, spawn, type ChildProcess } from "node:child_process";
 import { openSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { promisify } from "node:util";
-import { acceptsConnections } from "./ports";
+import { waitForPort } from "./ports";
 
 const root = path.resolve(import.meta.dirname, "..");
 const dataDir = path.join(root, ".data");
@@ -109,14 +109,4 @@ function readEnvFile(file: string): Record<string, string> {
     .filter((line) => line.includes("="))
     .map((line) => [line.slice(0, line.indexOf("=")), line.slice(line.indexOf("=") + 1)] as const);
   return Object.fromEntries(entries);
-}
-
-async function waitForPort(port: number, child: ChildProcess, what: string, timeoutMs = 60_000): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`The ${what} exited with code ${child.exitCode} before listening on port ${port}.`);
-    if (await acceptsConnections(port)) return;
-    await new Promise((resolve) => setTimeout(resolve, 100));
-  }
-  throw new Error(`The ${what} did not listen on 127.0.0.1:${port} within ${timeoutMs / 1000} s.`);
 }

@@ -5,23 +5,14 @@
  * database before it is imported.
  */
 import { execFileSync, spawn } from "node:child_process";
+import { openSync } from "node:fs";
 import path from "node:path";
 import { createSession } from "@/lib/auth/session-store";
-import { acceptsConnections } from "../ports";
+import { waitForPort } from "../ports";
 
 const root = path.resolve(import.meta.dirname, "../..");
 
 export type PageTimes = { times: number[]; bytes: number; cellsShown: boolean };
-
-
-async function waitUntilListening(port: number, exited: () => boolean): Promise<void> {
-  for (const deadline = Date.now() + 60_000; Date.now() < deadline; ) {
-    if (exited()) throw new Error(`next start exited before listening on ${port} (see .data/bench-gradebook-app.log).`);
-    if (await acceptsConnections(port)) return;
-    await new Promise((resolve) => setTimeout(resolve, 100));
-  }
-  throw new Error(`next start did not listen on 127.0.0.1:${port} within 60 s.`);
-}
 
 /**
  * Times `runs` page loads after `warmUp` untimed ones. `lastLearner` is a name the page must hold,
@@ -32,18 +23,16 @@ export async function timeCohortPage(params: { port: number; cohortId: string; i
   const appUrl = `http://127.0.0.1:${params.port}`;
   // The session cookie made here must be the one the server expects for this origin.
   process.env.APP_URL = appUrl;
-  const logFile = path.join(root, ".data/bench-gradebook-app.log");
-  const server = spawn("bash", ["-c", `exec node node_modules/next/dist/bin/next start -H 127.0.0.1 -p ${params.port} >"${logFile}" 2>&1`], {
+  const log = openSync(path.join(root, ".data/bench-gradebook-app.log"), "w");
+  const server = spawn(process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-H", "127.0.0.1", "-p", String(params.port)], {
     cwd: root,
     // The page sends no mail; the mail settings only satisfy the app's start-up check.
     env: { ...process.env, NODE_ENV: "production", APP_URL: appUrl, SMTP_HOST: "127.0.0.1", SMTP_PORT: "9", MAIL_FROM: "Edgewise <bench@edgewise.example.test>", MAIL_SINK_URL: "" },
     detached: true,
-    stdio: "ignore",
+    stdio: ["ignore", log, log],
   });
-  let exited = false;
-  server.once("exit", () => (exited = true));
   try {
-    await waitUntilListening(params.port, () => exited);
+    await waitForPort(params.port, server, "cohort page's server (log: .data/bench-gradebook-app.log)");
     const cookie = await createSession(params.instructorId);
     const load = async () => {
       const response = await fetch(`${appUrl}/cohorts/${params.cohortId}`, { headers: { cookie: `${cookie.name}=${cookie.value}` } });
@@ -61,6 +50,6 @@ export async function timeCohortPage(params: { port: number; cohortId: string; i
     }
     return { times, bytes: Buffer.byteLength(body), cellsShown: body.includes(params.lastLearner) };
   } finally {
-    if (!exited) process.kill(-server.pid!, "SIGTERM");
+    if (server.exitCode === null) process.kill(-server.pid!, "SIGTERM");
   }
 }
