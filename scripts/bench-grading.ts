@@ -72,7 +72,7 @@ async function main(): Promise<void> {
     Object.assign(process.env, instance.env);
     // Imported only now: the app's modules read the instance's DATABASE_URL on first use.
     const { createBenchLearners, closeBenchDatabase } = await import("./bench-load/learners");
-    const { getCourse } = await import("../lessons");
+    const { getCourse, getLab } = await import("../lessons");
     const { gradeWork, variantSeedFor } = await import("../lib/grading");
     const labCount = getCourse().lessons.filter((lesson) => lesson.lab).length;
     const learners = await createBenchLearners(labCount);
@@ -90,7 +90,7 @@ async function main(): Promise<void> {
     const labMedians: number[] = [];
     const rows: string[] = [];
     for (const learner of learners) {
-      const lab = getCourse().lessons.find((lesson) => lesson.lab?.slug === learner.labSlug)!.lab!;
+      const lab = getLab(learner.labSlug)!;
       const seed = variantSeedFor(learner.userId, lab.slug);
       for (const [kind, choices] of [["solution", learner.passing], ["mistake", learner.failing]] as const) {
         const answers: number[] = [];

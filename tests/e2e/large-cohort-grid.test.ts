@@ -8,7 +8,7 @@ import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { cohortMemberships, labAttempts, users } from "@/db/schema";
-import { getCourse, getLab } from "@/lessons";
+import { getCourse } from "@/lessons";
 import { formatInUnit } from "@/lib/answers";
 import { gradeWork, outcomeOf, scoreWork, variantSeedFor } from "@/lib/grading";
 import { launchBrowser, openPage, saveScreenshot, signInAs } from "./support/browser";
@@ -42,7 +42,7 @@ async function createLargeCohort(): Promise<void> {
 
   // Five failed attempts at the first lab, all this week: stuck by the grid's rule, not idle.
   const stuck = learners.find((learner) => learner.name === stuckLearner)!;
-  const lab = getLab(getCourse().lessons[0]!.lab!.slug)!;
+  const lab = getCourse().lessons[0]!.lab!;
   const seed = variantSeedFor(stuck.id, lab.slug);
   const answers = Object.fromEntries(lab.questions.map((q) => [q.id, formatInUnit(q.answer.value, q.answer.unit)]));
   const work = gradeWork({ lab, seed, choices: lab.reference.mistakes[0].choices, answers });
