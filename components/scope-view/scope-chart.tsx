@@ -108,31 +108,22 @@ export function ScopeChart({ run, points, window, yDomain, markers, selectedBit,
           label={{ value: `(${marker.number})`, position: "insideTopLeft", fontSize: 12, fontWeight: 600, fill: bandStyle.marker }}
         />
       ))}
-      {tracesHidden ? null : (
-        <Line
-          dataKey="near"
-          name={traceStyle.near.label}
-          stroke={traceStyle.near.stroke}
-          strokeDasharray={traceStyle.near.dash}
-          strokeWidth={traceStyle.near.width}
-          dot={false}
-          activeDot={false}
-          isAnimationActive={false}
-          type="linear"
-        />
-      )}
-      {tracesHidden ? null : (
-        <Line
-          dataKey="far"
-          name={traceStyle.far.label}
-          stroke={traceStyle.far.stroke}
-          strokeWidth={traceStyle.far.width}
-          dot={false}
-          activeDot={false}
-          isAnimationActive={false}
-          type="linear"
-        />
-      )}
+      {tracesHidden
+        ? null
+        : (["near", "far"] as const).map((end) => (
+            <Line
+              key={end}
+              dataKey={end}
+              name={traceStyle[end].label}
+              stroke={traceStyle[end].stroke}
+              strokeDasharray={traceStyle[end].dash}
+              strokeWidth={traceStyle[end].width}
+              dot={false}
+              activeDot={false}
+              isAnimationActive={false}
+              type="linear"
+            />
+          ))}
     </LineChart>
   );
 }
