@@ -9,22 +9,11 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { gzipSync } from "node:zlib";
-import { z } from "zod";
+import { readRouteBundleStats } from "./route-bundle-stats";
 
 const root = path.resolve(import.meta.dirname, "..");
-const statsFile = path.join(root, ".next/diagnostics/route-bundle-stats.json");
 const WORKBENCH_ROUTE = "/labs/[labSlug]";
 const BUDGET_KB = 250;
-
-const statsSchema = z.array(z.object({ route: z.string(), firstLoadUncompressedJsBytes: z.number(), firstLoadChunkPaths: z.array(z.string()) }));
-
-function readStats() {
-  try {
-    return statsSchema.parse(JSON.parse(readFileSync(statsFile, "utf8")));
-  } catch (error) {
-    throw new Error(`No usable build figures in ${path.relative(root, statsFile)} (run \`npx next build\` first): ${error instanceof Error ? error.message : error}`);
-  }
-}
 
 const gzippedSize = new Map<string, number>();
 function compressed(chunk: string): number {
@@ -34,7 +23,7 @@ function compressed(chunk: string): number {
 
 const kB = (bytes: number) => `${(bytes / 1000).toFixed(1)} kB`.padStart(10);
 
-const rows = readStats()
+const rows = readRouteBundleStats()
   .map((stat) => ({ route: stat.route, raw: stat.firstLoadUncompressedJsBytes, gzip: stat.firstLoadChunkPaths.reduce((sum, chunk) => sum + compressed(chunk), 0) }))
   .sort((a, b) => b.gzip - a.gzip);
 

@@ -6,10 +6,10 @@
  * chromium must fetch before the page works; the scope chart that is loaded lazily after them is
  * reported beside it. A size, not a time: the same build always ships the same bytes.
  */
-import { readFileSync } from "node:fs";
 import path from "node:path";
 import type { Browser, CDPSession } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { readRouteBundleStats } from "@/scripts/route-bundle-stats";
 import { baseUrl, launchBrowser, openPage, signInThroughForm, viewports } from "./support/browser";
 import { createLearnerAtLab } from "./support/learner-at-lab";
 
@@ -32,8 +32,7 @@ afterAll(async () => {
 
 /** The route's first-load chunks as `next build` lists them, by URL path. */
 function firstLoadChunks(): Set<string> {
-  const stats: { route: string; firstLoadChunkPaths: string[] }[] = JSON.parse(readFileSync(path.resolve(".next/diagnostics/route-bundle-stats.json"), "utf8"));
-  const route = stats.find((stat) => stat.route === ROUTE);
+  const route = readRouteBundleStats().find((stat) => stat.route === ROUTE);
   if (!route) throw new Error(`The build lists no ${ROUTE} route.`);
   return new Set(route.firstLoadChunkPaths.map((chunk) => `/_next/${chunk.replace(/^\.next\//, "")}`));
 }
