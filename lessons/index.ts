@@ -31,5 +31,5 @@ export { figureSimInputs } from "./figure-sim-inputs";
 export { labVariant, defaultVariant, type LabVariant, type RunVariant } from "./variant";
 export { buildSimInput } from "./build-run";
 export { labChoicesSchemaFor, runChoicesSchemaFor, resistorValuesOnOffer, lengthsOnOffer, startingChoices, type LabChoices } from "./run-choices";
-export { judgeRun, type RunJudgement, type RuleFailure } from "./pass-rule";
+export { COURSE_CLAMP_CURRENT_LIMIT, JUDGEMENT_PROMISE, judgeRun, ruleMargins, type RunJudgement, type RuleFailure } from "./pass-rule";
 export { scoreRun, scoreAttempt } from "./scoring";

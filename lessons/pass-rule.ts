@@ -1,4 +1,4 @@
-import type { SimResult } from "@/lib/sim";
+import { OUTCOME_WORDS, RECEIVER_DEFAULTS, clampCurrentLimit, type JudgementName, type SimResult } from "@/lib/sim";
 import type { PassRule } from "./schema";
 
 export type RuleFailureCode =
@@ -8,7 +8,6 @@ export type RuleFailureCode =
   | "overshoot"
   | "rise-time"
   | "clamp-current"
-  | "filtered-ringing"
   | "cable-spec";
 
 export interface RuleFailure {
@@ -19,36 +18,61 @@ export interface RuleFailure {
 export interface RunJudgement {
   pass: boolean;
   failures: RuleFailure[];
+  /** Bits read correctly at every switching point of the lab's judgement. */
   bitsCorrect: number;
   bitsSent: number;
 }
 
-/** The simulator's warnings for threshold re-crossings its deglitch filter removed. */
-const FILTERED_RINGING_CODES = ["ringing-filtered-low", "ringing-filtered-high"];
+/**
+ * The course's one clamp-current policy: every lab holds a run under half the pixel input's rated
+ * injection current (the simulator's receiver defaults say where the rating comes from).
+ */
+export const COURSE_CLAMP_CURRENT_LIMIT = clampCurrentLimit(RECEIVER_DEFAULTS.clampCurrentRating);
+
+/** What each judgement promises, in the words of the simulator's verdict. */
+export const JUDGEMENT_PROMISE: Record<JudgementName, string> = {
+  guaranteed: OUTCOME_WORDS.guaranteed,
+  typical: "works on typical pixels",
+};
 
 const ns = (s: number) => `${(s * 1e9).toFixed(0)} ns`;
 const volts = (v: number) => `${v.toFixed(2)} V`;
+const milliamps = (a: number) => `${(a * 1e3).toFixed(1)} mA`;
+
+/** The lab's judgement's margins for a run: what its pass rule and its score read. */
+export function ruleMargins(rule: PassRule, result: SimResult) {
+  const { timingMargin, voltageMargin } = result.verdict[rule.judgement];
+  return { timingMargin, voltageMargin };
+}
 
 /**
- * A run against its lab's pass rule. The simulator's own verdict judges against its defaults;
- * the lab's rule is stricter or adds limits the lesson is about, so both are not mixed here.
+ * A run against its lab's pass rule: the simulator's judgement the lab names, held to the lab's
+ * margins, plus the limits the lesson is about.
  */
 export function judgeRun(rule: PassRule, supplyVoltage: number, result: SimResult): RunJudgement {
   const failures: RuleFailure[] = [];
+  const judgement = result.verdict[rule.judgement];
   const bitsSent = result.bits.length;
-  const bitsCorrect = result.bits.filter((b) => b.received === String(b.sent)).length;
+  const bitsCorrect = bitsSent - judgement.bitErrors;
   const { metrics } = result;
+  const promise = JUDGEMENT_PROMISE[rule.judgement];
 
-  if (bitsCorrect < bitsSent) {
-    failures.push({ code: "bits-not-decoded", message: `${bitsSent - bitsCorrect} of ${bitsSent} bits did not decode as sent` });
+  if (!judgement.pass) {
+    failures.push({
+      code: "bits-not-decoded",
+      message:
+        judgement.bitErrors > 0
+          ? `${judgement.bitErrors} of ${bitsSent} bits are misread at some switching point: the run does not meet "${promise}"`
+          : `ringing re-crosses a switching point: the run does not meet "${promise}"`,
+    });
   }
-  if (metrics.timingMargin === null) {
+  if (judgement.timingMargin === null) {
     failures.push({ code: "timing-margin", message: "no bit slot holds a single complete pulse to measure" });
-  } else if (metrics.timingMargin < rule.minTimingMargin) {
-    failures.push({ code: "timing-margin", message: `timing margin ${ns(metrics.timingMargin)} is below ${ns(rule.minTimingMargin)}` });
+  } else if (judgement.timingMargin < rule.minTimingMargin) {
+    failures.push({ code: "timing-margin", message: `timing margin ${ns(judgement.timingMargin)} is below ${ns(rule.minTimingMargin)}` });
   }
-  if (metrics.voltageMargin < rule.minVoltageMargin) {
-    failures.push({ code: "voltage-margin", message: `voltage margin ${volts(metrics.voltageMargin)} is below ${volts(rule.minVoltageMargin)}` });
+  if (judgement.voltageMargin < rule.minVoltageMargin) {
+    failures.push({ code: "voltage-margin", message: `voltage margin ${volts(judgement.voltageMargin)} is below ${volts(rule.minVoltageMargin)}` });
   }
   if (rule.maxOvershoot !== undefined && metrics.overshoot > rule.maxOvershoot * supplyVoltage) {
     failures.push({
@@ -63,20 +87,11 @@ export function judgeRun(rule: PassRule, supplyVoltage: number, result: SimResul
       failures.push({ code: "rise-time", message: `rise time ${ns(metrics.riseTime)} exceeds ${ns(rule.maxRiseTime)}` });
     }
   }
-  if (rule.maxClampCurrent !== undefined && metrics.clampCurrentPeak > rule.maxClampCurrent) {
+  if (metrics.clampCurrentPeak > COURSE_CLAMP_CURRENT_LIMIT) {
     failures.push({
       code: "clamp-current",
-      message: `clamp current peaks at ${(metrics.clampCurrentPeak * 1e3).toFixed(1)} mA, above ${(rule.maxClampCurrent * 1e3).toFixed(1)} mA`,
+      message: `clamp current peaks at ${milliamps(metrics.clampCurrentPeak)}, above the course's ${milliamps(COURSE_CLAMP_CURRENT_LIMIT)} limit`,
     });
-  }
-  if (rule.rejectFilteredRinging) {
-    const ringing = result.verdict.reasons.filter((r) => FILTERED_RINGING_CODES.includes(r.code));
-    if (ringing.length > 0) {
-      failures.push({
-        code: "filtered-ringing",
-        message: `ringing re-crosses a threshold (${ringing.map((r) => r.message).join(" ")})`,
-      });
-    }
   }
   if (rule.cableSpec) {
     const { z0, perMetre, delay, length } = result.line;

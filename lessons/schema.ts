@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { cableKindSchema } from "./cable-kinds";
 import { figureBlockSchema } from "./figures";
+import { JUDGEMENTS } from "@/lib/sim";
 
 const slug = z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, "must be a kebab-case slug");
 const markdown = z.string().trim().min(1);
@@ -65,7 +66,6 @@ export const receiverSchema = z.strictObject({
   clampDiodes: z.boolean().optional(),
   highThreshold: fraction.optional(),
   lowThreshold: fraction.optional(),
-  deglitchTime: z.number().min(0).optional(),
   minPulse: seconds.optional(),
   decisionTime: seconds.optional(),
 });
@@ -191,18 +191,20 @@ export const labQuestionSchema = z.strictObject({ id: slug, prompt: markdown, an
 
 /**
  * Applied to every run of an attempt (lessons/pass-rule.ts); a lab passes when every run passes.
- * maxOvershoot is the far end's highest excursion above the settled high level, as a fraction of
- * the pixel supply VDD (the simulator's `metrics.overshoot` ÷ supplyVoltage).
+ * `judgement` names which of the simulator's two judgements the lab holds runs to (lib/sim/receiver.ts):
+ * "guaranteed" (every pixel that meets its datasheet) or "typical" (typical pixels), and
+ * `judgementWhy` says why, in the brief's words. The margins are that judgement's. Every lab also
+ * holds the clamp current to the course's one limit (lessons/pass-rule.ts). maxOvershoot is the far
+ * end's highest excursion above the settled high level, as a fraction of the pixel supply VDD.
  */
 export const passRuleSchema = z.strictObject({
+  judgement: z.enum(JUDGEMENTS),
+  judgementWhy: markdown,
   allBitsDecode: z.literal(true),
   minTimingMargin: z.number().min(0),
   minVoltageMargin: z.number().min(0),
   maxOvershoot: z.number().positive().max(1).optional(),
   maxRiseTime: seconds.optional(),
-  maxClampCurrent: z.number().positive().optional(),
-  /** Fail on ringing that re-crosses a threshold even when the pixel's deglitch filter hides it. */
-  rejectFilteredRinging: z.boolean().optional(),
   cableSpec: z
     .strictObject({
       minZ0: ohms,
@@ -215,8 +217,9 @@ export const passRuleSchema = z.strictObject({
 
 /**
  * Scoring of one graded attempt (lessons/scoring.ts):
- * - a passing run scores passBase + (100 − passBase)·m, where m is the mean of the timing and
- *   voltage margins' progress from the pass rule's minimum (0) to fullMarksMargin (1), clipped to 0..1;
+ * - a passing run scores passBase + (100 − passBase)·m, where m is the smaller of the timing and
+ *   voltage margins' progress from the pass rule's minimum (0) to fullMarksMargin (1), each clipped
+ *   to 0..1: the weaker margin counts, so a run never outscores one with more of both;
  * - a failing run scores failCreditMax · (bits decoded correctly ÷ bits sent);
  * - the runs' score is their minimum (every run counts); lab questions, when present, weigh
  *   questionShare of the total (100 · correct ÷ asked);

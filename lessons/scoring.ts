@@ -14,7 +14,7 @@ export function scoreRun(rule: PassRule, scoring: Scoring, judgement: RunJudgeme
   const progress = (value: number, min: number, full: number) => (full > min ? clip01((value - min) / (full - min)) : 1);
   const timing = margins.timingMargin === null ? 0 : progress(margins.timingMargin, rule.minTimingMargin, scoring.fullMarksMargin.timing);
   const voltage = progress(margins.voltageMargin, rule.minVoltageMargin, scoring.fullMarksMargin.voltage);
-  return scoring.passBase + (100 - scoring.passBase) * ((timing + voltage) / 2);
+  return scoring.passBase + (100 - scoring.passBase) * Math.min(timing, voltage);
 }
 
 /**

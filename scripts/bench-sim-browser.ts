@@ -71,7 +71,7 @@ function instrument(page: Page): Promise<void> {
           performance.mark("trace-painted");
           state.redraws += 1;
         });
-      }).observe(document.querySelector('[data-testid="bench-preview"]')!, { subtree: true, childList: true, attributes: true, attributeFilter: ["d"] });
+      }).observe(document.querySelector('[data-testid="workbench-preview"]')!, { subtree: true, childList: true, attributes: true, attributeFilter: ["d"] });
     },
     { traceSelector: FAR_END_TRACE },
   );
@@ -140,7 +140,7 @@ async function dragSteps(page: Page, screenshots: boolean): Promise<{ steps: Ste
   await page.evaluate(() => performance.mark("slider-input"));
   await page.mouse.up();
   const release = await awaitStep(page, before);
-  await page.locator('[data-testid="bench-preview"][data-pending="false"]').waitFor({ timeout: 30_000 });
+  await page.locator('[data-testid="workbench-preview"][data-pending="false"]').waitFor({ timeout: 30_000 });
   if (screenshots) await saveScreenshot(page, "live-drag-released");
   return { steps, release };
 }
@@ -153,7 +153,7 @@ async function keyboardSteps(page: Page): Promise<Step[]> {
     const before = await redraws(page);
     await page.keyboard.press(i % 2 === 0 ? "ArrowLeft" : "ArrowRight");
     steps.push(await awaitStep(page, before));
-    await page.locator('[data-testid="bench-preview"][data-pending="false"]').waitFor({ timeout: 30_000 });
+    await page.locator('[data-testid="workbench-preview"][data-pending="false"]').waitFor({ timeout: 30_000 });
   }
   return steps;
 }
@@ -190,7 +190,7 @@ async function main() {
     await markWorkerMessages(page);
     await signInThroughForm(page, LEARNER);
     const lab = await openFirstUnlockedLab(page);
-    await page.locator('[data-testid="bench-preview"][data-pending="false"]').waitFor({ timeout: 60_000 });
+    await page.locator('[data-testid="workbench-preview"][data-pending="false"]').waitFor({ timeout: 60_000 });
     await page.locator(FAR_END_TRACE).first().waitFor({ timeout: 60_000 });
     await instrument(page);
     // Warm-up: the worker's code and the chart's first layouts.

@@ -7,6 +7,13 @@ import { SimInputError, SimSolveBudgetError, simulateRun } from "@/lib/sim";
 
 const USAGE = "usage: npm run -s sim -- case.json   (or - to read the case from standard input)";
 
+/**
+ * Without output.sampleInterval the command line samples every 0.5 ns (coarser only past 200,000
+ * points), so that ringing which re-crosses a switching point for a few nanoseconds shows in the
+ * printed trace; the workbench draws from its own, coarser grid.
+ */
+const CLI_GRID = { finestInterval: 0.5e-9, maxPoints: 200_000 };
+
 function fail(message: string): never {
   process.stderr.write(`${message}\n`);
   process.exit(1);
@@ -35,7 +42,7 @@ try {
 }
 
 try {
-  const { full: _full, ...result } = simulateRun(input as never);
+  const { full: _full, ...result } = simulateRun(input as never, { grid: CLI_GRID });
   process.stdout.write(`${JSON.stringify(result)}\n`);
 } catch (error) {
   if (error instanceof SimInputError) {

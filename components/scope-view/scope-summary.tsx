@@ -1,9 +1,11 @@
 import type { LiveRun } from "@/components/simulation";
+import type { Judgement } from "@/lib/sim";
+import { reasonHeading } from "@/lib/sim/verdict";
 import { formatMilliamps, formatOptionalTime, formatTime, formatVolts } from "./format";
 
 /**
- * The run in words, for screen readers and for anyone who wants the figures: the simulator's own
- * verdict against the pixel's guaranteed thresholds, the measured edges and margins, and the bits.
+ * The run in words, for screen readers and for anyone who wants the figures: the simulator's
+ * verdict (both judgements, each with its switching band and margins), the measured edges, and the bits.
  */
 export function ScopeSummary({ run, onShowReason }: { run: LiveRun; onShowReason: (index: number) => void }) {
   const { metrics, verdict, bits } = run;
@@ -11,21 +13,17 @@ export function ScopeSummary({ run, onShowReason }: { run: LiveRun; onShowReason
   const sent = bits.map((bit) => bit.sent).join("");
   return (
     <div className="space-y-3 text-sm">
-      <p className="font-semibold">
-        Simulator verdict: {verdict.pass ? "every bit decodes" : `${wrong.length} of ${bits.length} bits do not decode`}
+      <p className="font-semibold" data-testid="scope-verdict">
+        Simulator verdict: {verdict.summary}
         {verdict.reasons.some((r) => r.severity === "warning") ? ", with warnings" : ""}.
       </p>
       <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1">
+        <JudgementRow judgement={verdict.guaranteed} />
+        <JudgementRow judgement={verdict.typical} />
         <dt className="text-ink-soft">Rise time at the pixel</dt>
         <dd>{formatOptionalTime(metrics.riseTime)}</dd>
         <dt className="text-ink-soft">Overshoot</dt>
         <dd>{formatVolts(metrics.overshoot)}</dd>
-        <dt className="text-ink-soft">Timing margin</dt>
-        <dd>{formatOptionalTime(metrics.timingMargin)}</dd>
-        <dt className="text-ink-soft">Voltage margin</dt>
-        <dd>
-          {formatVolts(metrics.voltageMargin)} (against a mid-supply switch point: {formatVolts(metrics.midSupplyVoltageMargin)})
-        </dd>
         <dt className="text-ink-soft">Clamp current peak</dt>
         <dd>{formatMilliamps(metrics.clampCurrentPeak)}</dd>
         <dt className="text-ink-soft">Line delay</dt>
@@ -49,9 +47,7 @@ export function ScopeSummary({ run, onShowReason }: { run: LiveRun; onShowReason
                 ({index + 1})
               </span>
               <span>
-                <span className={`font-semibold ${reason.severity === "fail" ? "text-danger" : "text-copper"}`}>
-                  {reason.severity === "fail" ? "Fails: " : "Warning: "}
-                </span>
+                <span className={`font-semibold ${reason.severity === "fail" ? "text-danger" : "text-copper"}`}>{reasonHeading(reason)}: </span>
                 {reason.message}{" "}
                 {reason.at ? (
                   <button type="button" className="font-medium text-accent underline underline-offset-2" onClick={() => onShowReason(index)}>
@@ -64,5 +60,22 @@ export function ScopeSummary({ run, onShowReason }: { run: LiveRun; onShowReason
         </ol>
       ) : null}
     </div>
+  );
+}
+
+/** One judgement: which pixels it speaks for, whether the run meets it, and its margins. */
+function JudgementRow({ judgement }: { judgement: Judgement }) {
+  const { band } = judgement;
+  const who =
+    judgement.name === "guaranteed"
+      ? `Every pixel that meets its datasheet (switching anywhere from ${formatVolts(band.lowest)} to ${formatVolts(band.highest)})`
+      : `Typical pixels (switching from ${formatVolts(band.lowest)} to ${formatVolts(band.highest)}, ${formatVolts(band.hysteresis)} hysteresis; assumed figures)`;
+  return (
+    <>
+      <dt className="text-ink-soft">{who}</dt>
+      <dd>
+        {judgement.pass ? "works" : "misread"}: timing margin {formatOptionalTime(judgement.timingMargin)}, voltage margin {formatVolts(judgement.voltageMargin)}
+      </dd>
+    </>
   );
 }

@@ -20,7 +20,7 @@ export function AttemptHistory({ runs, attempts, loading, error, shownAttemptId,
   if (error) return <p className="text-sm text-danger">{error}</p>;
   if (loading && !attempts) return <p className="text-sm text-ink-soft">Loading your attempts…</p>;
   if (!attempts || attempts.length === 0) {
-    return <p className="text-sm text-ink-soft">No graded attempts yet. Try your design on the bench, then submit it.</p>;
+    return <p className="text-sm text-ink-soft">No graded attempts yet. Try your design on the workbench, then submit it.</p>;
   }
   return (
     <ol className="divide-y divide-line" aria-label="Your attempts, newest first" data-testid="attempt-history">

@@ -37,14 +37,14 @@ function AttemptResult({ reply, runs }: { reply: SubmitReply; runs: BenchRun[] }
               <p className="font-semibold">
                 {runs.length > 1 ? `${run.label}: ` : ""}
                 {run.pass ? "✓ meets the lab's rule" : "✗ does not meet the lab's rule"} ({run.bitsCorrect} of {run.bitsSent} bits decoded)
+                {run.verdict.outcome ? <span className="block font-normal">Simulator verdict: {run.verdict.summary}.</span> : null}
               </p>
               {lines.length > 0 ? (
                 <ul className="mt-1 list-disc space-y-1 pl-5 text-ink-soft">
                   {lines.map((line, i) => (
                     <li key={i}>
                       <span className={`font-semibold ${line.severity === "fail" ? "text-danger" : "text-copper"}`}>
-                        {line.severity === "fail" ? "Fails" : "Warning"}
-                        {line.source === "rule" ? " (lab rule)" : ""}:
+                        {line.heading}:
                       </span>{" "}
                       {line.message}
                     </li>

@@ -10,7 +10,7 @@ import type { SimInput } from "@/lib/sim";
 import { AttemptHistory } from "./attempt-history";
 import { AttemptRequestError, fetchAttempt, listAttempts, newSubmissionKey, submitAttempt, type Submission, type SubmitReply } from "./attempts-api";
 import type { BenchSetup } from "./bench-types";
-import { BenchPreview } from "./bench-preview";
+import { WorkbenchPreview } from "./workbench-preview";
 import { ChoiceControls } from "./choice-controls";
 import { RunDrawing } from "./run-drawing";
 import { describeChoices, runFacts } from "./run-facts";
@@ -131,9 +131,9 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
           </section>
           <section className={cardClass} aria-labelledby="scope-heading">
             <h2 id="scope-heading" className="mb-3 text-lg font-semibold">
-              {replay ? `Attempt ${replay.attempt.attemptNumber} on the scope` : "Try it on the bench"}
+              {replay ? `Attempt ${replay.attempt.attemptNumber} on the scope` : "Try it on the workbench"}
             </h2>
-            <BenchPreview
+            <WorkbenchPreview
               input={previewInput}
               dragging={dragging}
               rule={setup.passRule}
@@ -156,7 +156,7 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
                         setReplay(null);
                       }}
                     >
-                      Put these choices on the bench
+                      Put these choices on the workbench
                     </button>
                   </div>
                 ) : null

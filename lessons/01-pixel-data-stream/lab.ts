@@ -1,5 +1,6 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
+import { GUARANTEED_WHY } from "../judgement-notes";
 import { buffer5v } from "../drivers";
 
 export const lab = {
@@ -48,7 +49,7 @@ The bit period stays at 1.25 µs. A high time too close to the whole period leav
       hint: "Frames per second: 1 / T_frame.",
     },
   ],
-  passRule: { allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.5 },
+  passRule: { judgement: "guaranteed", judgementWhy: GUARANTEED_WHY, allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.5 },
   scoring: { ...scoringPolicy, fullMarksMargin: { timing: 190e-9, voltage: 1.2 }, questionShare: 0.3 },
   reference: {
     solution: { main: { zeroHigh: 0.4e-6, oneHigh: 0.8e-6 } },
@@ -62,6 +63,11 @@ The bit period stays at 1.25 µs. A high time too close to the whole period leav
         choices: { main: { zeroHigh: 0.4e-6, oneHigh: 0.5e-6 } },
         mechanism: "timing",
         explanation: "A 1 high for 0.5 µs falls before the 0.6 µs decision time, so every 1 is read as a 0.",
+      },
+      {
+        choices: { main: { zeroHigh: 0.4e-6, oneHigh: 1.2e-6 } },
+        mechanism: "timing",
+        explanation: "A 1 high for 1.2 µs leaves only 50 ns of low before the next bit starts, less than the shortest low a pixel is held to tell one bit from the next.",
       },
     ],
   },

@@ -1,5 +1,6 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
+import { GUARANTEED_WHY } from "../judgement-notes";
 
 const direct = { id: "direct-3v3", label: "3.3 V controller pin, wired direct", highVoltage: 3.3, outputResistance: 30, edgeTime: 4e-9 };
 const shifted = { id: "shifter-5v", label: "Through a 5 V level shifter", highVoltage: 5, outputResistance: 20, edgeTime: 3e-9 };
@@ -45,7 +46,7 @@ Then answer the two questions about the margins.
       hint: "The shifter's output swings to its own 5 V supply.",
     },
   ],
-  passRule: { allBitsDecode: true, minTimingMargin: 100e-9, minVoltageMargin: 0.5 },
+  passRule: { judgement: "guaranteed", judgementWhy: GUARANTEED_WHY, allBitsDecode: true, minTimingMargin: 100e-9, minVoltageMargin: 0.5 },
   scoring: { ...scoringPolicy, fullMarksMargin: { timing: 150e-9, voltage: 1.2 }, questionShare: 0.3 },
   reference: {
     solution: { main: { driver: "shifter-5v" } },

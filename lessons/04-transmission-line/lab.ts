@@ -1,5 +1,6 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
+import { TYPICAL_WHY } from "../judgement-notes";
 import { controllerPin3v3 } from "../drivers";
 
 export const lab = {
@@ -14,7 +15,9 @@ The company standard for data runs reads:
 | delay | at most 5.7 ns/m |
 | capacitance C′ | at most 65 pF/m |
 
-The controller output is a 3.3 V pin (30 Ω) with a 33 Ω resistor already fitted; the first pixel runs from 5 V. Choose a cable from the catalogue that meets the standard. The grader checks the cable against the standard and runs the simulator: every bit must decode with at least 100 ns of timing margin and 0.3 V of voltage margin.
+The controller output is a 3.3 V pin (30 Ω) with a 47 Ω resistor already fitted; the first pixel runs from 5 V. Choose a cable from the catalogue that meets the standard. The grader checks the cable against the standard and runs the simulator: on typical pixels every bit must decode with at least 100 ns of timing margin and 0.3 V of voltage margin.
+
+${TYPICAL_WHY}
 
 Then answer the two questions. Use the catalogue table of the lesson.
 `,
@@ -29,7 +32,7 @@ Then answer the two questions. Use the catalogue table of the lesson.
         cable: "lone-lead",
         cableOptions: ["lone-lead", "beside-ground", "twisted-pair", "coax-75", "three-core"],
         length: 8,
-        seriesResistance: 33,
+        seriesResistance: 47,
       },
       choices: { cable: true },
       variant: { length: { min: 6, max: 12, step: 0.5 } },
@@ -50,12 +53,14 @@ Then answer the two questions. Use the catalogue table of the lesson.
     },
   ],
   passRule: {
+    judgement: "typical",
+    judgementWhy: TYPICAL_WHY,
     allBitsDecode: true,
     minTimingMargin: 100e-9,
     minVoltageMargin: 0.3,
     cableSpec: { minZ0: 85, maxZ0: 110, maxDelayPerMetre: 5.7e-9, maxCapacitancePerMetre: 65e-12 },
   },
-  scoring: { ...scoringPolicy, fullMarksMargin: { timing: 160e-9, voltage: 0.6 }, questionShare: 0.2 },
+  scoring: { ...scoringPolicy, fullMarksMargin: { timing: 160e-9, voltage: 0.45 }, questionShare: 0.2 },
   reference: {
     solution: { main: { cable: "beside-ground" } },
     mistakes: [

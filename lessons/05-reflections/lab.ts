@@ -1,5 +1,6 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
+import { GUARANTEED_WHY } from "../judgement-notes";
 import { buffer5v } from "../drivers";
 
 export const lab = {
@@ -33,7 +34,7 @@ Predict first: what source resistance makes Γ_s = (R_src − Z0) / (R_src + Z0)
     },
   ],
   questions: [],
-  passRule: { allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.5, maxOvershoot: 0.1, maxRiseTime: 60e-9 },
+  passRule: { judgement: "guaranteed", judgementWhy: GUARANTEED_WHY, allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.5, maxOvershoot: 0.1, maxRiseTime: 60e-9 },
   scoring: { ...scoringPolicy, fullMarksMargin: { timing: 180e-9, voltage: 1.2 }, questionShare: 0 },
   reference: {
     solution: { main: { seriesResistance: 330 } },

@@ -1,6 +1,6 @@
 import type { BenchStatedValues } from "@/db/queries/bench";
 import { buildSimInput, type Lesson } from "@/lessons";
-import { CABLE_KINDS, parseSimInput, SimInputError, simulateRun, type SimInput } from "@/lib/sim";
+import { CABLE_KINDS, parseSimInput, reasonHeading, SimInputError, simulateRun, type Outcome, type SimInput } from "@/lib/sim";
 
 // What the line simulator predicts for the run a learner says they built, drawn the way a scope
 // photo shows it: one rising edge at the first pixel.
@@ -12,8 +12,10 @@ export type BenchPrediction =
       ok: true;
       riseTime: number | null;
       overshoot: number;
-      pass: boolean;
-      reasons: { severity: "fail" | "warning"; message: string }[];
+      outcome: Outcome;
+      /** The outcome in the simulator's words (lib/sim/verdict.ts). */
+      summary: string;
+      reasons: { heading: string; severity: "fail" | "warning"; message: string }[];
       z0: number;
       delay: number;
       assumed: { driverResistance: number; edgeTime: number; pixelSupply: number; highThreshold: number; lowThreshold: number };
@@ -56,8 +58,9 @@ export function predictBenchRun(lesson: Lesson, stated: BenchStatedValues): Benc
       ok: true,
       riseTime: metrics.riseTime,
       overshoot: metrics.overshoot,
-      pass: verdict.pass,
-      reasons: verdict.reasons.map(({ severity, message }) => ({ severity, message })),
+      outcome: verdict.outcome,
+      summary: verdict.summary,
+      reasons: verdict.reasons.map((reason) => ({ heading: reasonHeading(reason), severity: reason.severity, message: reason.message })),
       z0: line.z0,
       delay: line.delay,
       assumed: {

@@ -2,6 +2,7 @@ import { z } from "zod";
 import type { LabAttempt } from "@/db/schema";
 import type { LabChoices } from "@/lessons";
 import { runChoicesSchema } from "@/lessons/schema";
+import { JUDGEMENTS, OUTCOMES } from "@/lib/sim";
 import type { AttemptGrade } from "./grade-attempt";
 
 /**
@@ -12,9 +13,32 @@ import type { AttemptGrade } from "./grade-attempt";
 const reasonSchema = z.object({
   code: z.string(),
   severity: z.enum(["fail", "warning"]),
+  judgement: z.enum(JUDGEMENTS).optional(),
   message: z.string(),
   at: z.object({ time: z.number(), bit: z.number().optional() }).optional(),
 });
+
+const judgementSchema = z.object({
+  pass: z.boolean(),
+  timingMargin: z.number().nullable(),
+  voltageMargin: z.number(),
+  bitErrors: z.number().int(),
+});
+
+/**
+ * Attempts graded before runs were judged two ways stored only pass and reasons; they are shown
+ * with their reasons and no outcome rather than re-judged.
+ */
+const storedVerdictSchema = z.union([
+  z.object({
+    outcome: z.enum(OUTCOMES),
+    summary: z.string(),
+    guaranteed: judgementSchema,
+    typical: judgementSchema,
+    reasons: z.array(reasonSchema),
+  }),
+  z.object({ pass: z.boolean(), reasons: z.array(reasonSchema) }).transform(({ reasons }) => ({ outcome: null, reasons })),
+]);
 
 const storedRunSchema = z.object({
   runId: z.string(),
@@ -25,7 +49,7 @@ const storedRunSchema = z.object({
   bitsSent: z.number().int(),
   decoded: z.string(),
   failures: z.array(z.object({ code: z.string(), message: z.string() })),
-  verdict: z.object({ pass: z.boolean(), reasons: z.array(reasonSchema) }),
+  verdict: storedVerdictSchema,
   metrics: z.record(z.string(), z.number().nullable()),
 });
 

@@ -1,10 +1,10 @@
-import { buildSimInput, judgeRun, scoreRun, type Lab, type LabVariant, type RuleFailure, type RunChoices } from "@/lessons";
+import { buildSimInput, judgeRun, ruleMargins, scoreRun, type Lab, type LabVariant, type RuleFailure, type RunChoices } from "@/lessons";
 import { simulateRun, type RunMetrics, type Verdict } from "@/lib/sim";
 
 export type GradedRun = {
   runId: string;
   label: string;
-  /** Passes the lab's pass rule (which may be stricter than the simulator's own verdict). */
+  /** Passes the lab's pass rule: the simulator's judgement the lab names, held to the lab's margins and limits. */
   pass: boolean;
   verdict: Verdict;
   metrics: RunMetrics;
@@ -32,7 +32,7 @@ export function gradeRuns(lab: Lab, variant: LabVariant, choices: Record<string,
       bitsCorrect: judgement.bitsCorrect,
       bitsSent: judgement.bitsSent,
       decoded: result.decoded,
-      score: scoreRun(lab.passRule, lab.scoring, judgement, result.metrics),
+      score: scoreRun(lab.passRule, lab.scoring, judgement, ruleMargins(lab.passRule, result)),
     };
   });
 }

@@ -1,10 +1,11 @@
 import type { Waveform } from "./waveform";
 
 /**
- * The receiver rule of docs/simulator.md: a comparator with hysteresis (a pulse starts when the
- * pin rises through the high threshold and ends when it next falls through the low threshold),
- * a deglitch filter (a state that lasts less than the deglitch time neither starts nor ends a
- * pulse), and bit slots that each must hold exactly one pulse.
+ * The receiver rule of docs/simulator.md at one switching point: a comparator (a pulse starts
+ * when the pin rises through its rise level and ends when it next falls through its fall level),
+ * an optional deglitch filter (a state that lasts less than the deglitch time neither starts nor
+ * ends a pulse), and bit slots that each must hold exactly one pulse, at least `minPulse` wide and
+ * followed by a low of at least `minGap`.
  */
 
 export type Pulse = { start: number; end: number | null };
@@ -30,14 +31,20 @@ export type DecodedBit = {
   slotStart: number;
   slotEnd: number;
   pulses: Pulse[];
+  /** The pulse is narrower than `minPulse`. */
   glitch: boolean;
+  /** Low time from this bit's pulse to the next pulse (s); null without a complete pulse or after the last one. */
+  gap: number | null;
+  /** That low is shorter than `minGap`: the pixel cannot tell where this bit ends. */
+  shortGap: boolean;
 };
 
 export type ReceiverRule = {
-  highLevel: number;
-  lowLevel: number;
+  rise: number;
+  fall: number;
   deglitchTime: number;
   minPulse: number;
+  minGap: number;
   decisionTime: number;
 };
 
@@ -50,13 +57,13 @@ export type Decoding = {
 
 type Transition = { time: number; high: boolean };
 
-function comparatorTransitions(wave: Waveform, highLevel: number, lowLevel: number): Transition[] {
+function comparatorTransitions(wave: Waveform, rise: number, fall: number): Transition[] {
   const transitions: Transition[] = [];
-  let high = wave.value[0] >= highLevel;
+  let high = wave.value[0] >= rise;
   if (high) transitions.push({ time: wave.time[0], high: true });
   for (let i = 1; i < wave.count; i += 1) {
     const v = wave.value[i];
-    const level = high ? lowLevel : highLevel;
+    const level = high ? fall : rise;
     if (high ? v <= level : v >= level) {
       const v0 = wave.value[i - 1];
       const t0 = wave.time[i - 1];
@@ -95,24 +102,28 @@ function pulsesFrom(transitions: Transition[]): Pulse[] {
   return pulses;
 }
 
-function readSlot(pulses: Pulse[], rule: ReceiverRule, sent: 0 | 1) {
+function readSlot(pulses: Pulse[], nextStart: number | undefined, rule: ReceiverRule, sent: 0 | 1) {
   const pulse = pulses.length === 1 ? pulses[0] : null;
   if (!pulse || pulse.end === null) {
-    return { received: "x" as const, width: null, timingMargin: null, glitch: false };
+    return { received: "x" as const, width: null, timingMargin: null, glitch: false, gap: null, shortGap: false };
   }
   const width = pulse.end - pulse.start;
   const glitch = width < rule.minPulse;
+  const gap = nextStart === undefined ? null : nextStart - pulse.end;
+  const shortGap = gap !== null && gap < rule.minGap;
   const decisionMargin = sent === 1 ? width - rule.decisionTime : rule.decisionTime - width;
-  const received = glitch ? "x" : width > rule.decisionTime ? "1" : "0";
+  const received = glitch || shortGap ? "x" : width > rule.decisionTime ? "1" : "0";
   return {
     received: received as DecodedBit["received"],
     width,
-    timingMargin: Math.min(decisionMargin, width - rule.minPulse),
+    timingMargin: Math.min(decisionMargin, width - rule.minPulse, gap === null ? Infinity : gap - rule.minGap),
     glitch,
+    gap,
+    shortGap,
   };
 }
 
-/** Decodes the far-end waveform; slot i spans from its bit's start plus `delay` to the next. */
+/** Decodes the far-end waveform at one switching point; slot i spans from its bit's start plus `delay` to the next. */
 export function decodeWaveform(
   wave: Waveform,
   slots: SlotTiming[],
@@ -120,7 +131,7 @@ export function decodeWaveform(
   delay: number,
   rule: ReceiverRule,
 ): Decoding {
-  const { accepted, filtered } = deglitch(comparatorTransitions(wave, rule.highLevel, rule.lowLevel), rule.deglitchTime);
+  const { accepted, filtered } = deglitch(comparatorTransitions(wave, rule.rise, rule.fall), rule.deglitchTime);
   const pulses = pulsesFrom(accepted);
   const bits: DecodedBit[] = [];
   let next = 0;
@@ -132,7 +143,8 @@ export function decodeWaveform(
       inSlot.push(pulses[next]);
       next += 1;
     }
-    bits.push({ sent: slots[i].sent, start: slots[i].start, slotStart, slotEnd, pulses: inSlot, ...readSlot(inSlot, rule, slots[i].sent) });
+    const reading = readSlot(inSlot, pulses[next]?.start, rule, slots[i].sent);
+    bits.push({ sent: slots[i].sent, start: slots[i].start, slotStart, slotEnd, pulses: inSlot, ...reading });
   }
   return { bits, extraPulses: pulses.slice(next), filtered };
 }

@@ -1,10 +1,27 @@
 import type { DecodedBit } from "./decoder";
+import { EDGE_BUMP_SHARE, JUDGEMENTS, bandCorners, type JudgementName, type SwitchingBand } from "./receiver";
 import { extremes, firstReach, indexAt, valueAt, type Waveform } from "./waveform";
 
 /**
  * Measurements of the far-end waveform. Windows are placed by the driver's timing shifted by
  * the line delay: the far end cannot answer an edge sooner.
  */
+
+export type Extreme = { value: number; time: number };
+
+/** A bit's voltage margins over one switching band (V): negative where some switching point in the band misreads it. */
+export type BandMargins = {
+  /** Peak of the high period above the highest rise level. */
+  reach: number;
+  /** Inside the pulse: the worst distance above the fall level of the switching points the pulse has already started at; null without a turn back. */
+  hold: Extreme | null;
+  /** The lowest fall level above the low period's lowest voltage. */
+  fall: number;
+  /** After the fall: the worst distance below the rise level of the switching points the pulse has already ended at; null without a turn back. */
+  ringBack: Extreme | null;
+  /** The smallest of the four. */
+  voltageMargin: number;
+};
 
 export type BitLevels = {
   /** Highest far-end voltage while the bit is driven high (V). */
@@ -13,16 +30,7 @@ export type BitLevels = {
   /** Lowest far-end voltage while the bit is driven low (V). */
   lowTrough: number;
   lowTroughTime: number;
-  /** Against the guaranteed thresholds: the deepest dip once the pulse has risen through the high threshold and turned down; null without one. */
-  highDip: Extreme | null;
-  /** Against the guaranteed thresholds: the highest ring-back once the far end has fallen through the low threshold and turned up; null without one. */
-  ringBack: Extreme | null;
-  /** The same two, with the periods starting at the mid-supply crossing. */
-  midHighDip: Extreme | null;
-  midRingBack: Extreme | null;
-  /** This bit's margins against the guaranteed thresholds and against a single threshold at VDD/2 (V). */
-  voltageMargin: number;
-  midSupplyVoltageMargin: number;
+  margins: Record<JudgementName, BandMargins>;
 };
 
 export type RunMetrics = {
@@ -36,84 +44,103 @@ export type RunMetrics = {
   undershoot: number;
   /** Worst time from the driver's rising edge until the far end stays within ±5 % of the settled level (s); null if it never settles within a high time. */
   settlingTime: number | null;
-  /** Widest pulse of a 0 bit at the thresholds (s). */
+  /** Widest pulse of a 0 bit, read at the typical switching point (s). */
   zeroHighTime: number | null;
-  /** Narrowest pulse of a 1 bit at the thresholds (s). */
+  /** Narrowest pulse of a 1 bit, read at the typical switching point (s). */
   oneHighTime: number | null;
-  timingMargin: number | null;
-  /** Worst bit's margin against the guaranteed thresholds (V); see BitLevels. */
-  voltageMargin: number;
-  /** Worst bit's margin against a single threshold at VDD/2 (V). */
-  midSupplyVoltageMargin: number;
-  bitErrors: number;
   clampCurrentPeak: number;
   delay: number;
 };
 
-export type Extreme = { value: number; time: number };
-
-export type Thresholds = { high: number; low: number; mid: number; supply: number };
-
-/**
- * An edge has ended, and ringing begun, once the far end turns back by more than this share of
- * the supply. The bumps a capacitive pin puts on each step of a staircase (tens of millivolts)
- * stay below it; ringing that matters to a threshold is far above it. A turn smaller than this
- * can overstate a margin by less than this much.
- */
-const TURN_SHARE = 0.02;
 const SETTLING_BAND = 0.05;
 
 /**
- * The ringing after an edge: once the far end has crossed `level` (sign +1: upward, −1:
- * downward) and turned back by more than `turn`, its extreme on the way back (the lowest value
- * after a rise, the highest after a fall). Fed the window's points in time order.
+ * Inside a high period: for every switching point s of the band the pulse has started at (the
+ * far end has risen through s + h/2), how far the far end stays above s − h/2. At a moment when
+ * the running peak is M, the switching points started at reach up to min(highest, M − h/2), so the
+ * worst fall level is min(highest − h/2, M − h). Turns back from the peak by less than the edge
+ * bump (receiver.ts) are not counted. Fed the window's points in time order.
  */
-class RingingAfterEdge {
-  private entered = false;
-  private turned = false;
-  private front: number;
+class HoldScan {
+  private peak = -Infinity;
   private worst = Infinity;
   private worstTime = 0;
+  private readonly firstRise: number;
+  private readonly lastRise: number;
+  private readonly lastFall: number;
 
   constructor(
-    private readonly sign: number,
-    level: number,
-    private readonly turn: number,
+    band: SwitchingBand,
+    private readonly bump: number,
   ) {
-    this.front = sign * level;
-  }
-
-  /** The window's first value: already past the level means the edge crossed before the window. */
-  begin(v: number): void {
-    if (this.sign * v >= this.front) this.entered = true;
+    this.firstRise = band.lowest + band.hysteresis / 2;
+    this.lastRise = band.highest + band.hysteresis / 2;
+    this.lastFall = band.highest - band.hysteresis / 2;
   }
 
   visit(t: number, v: number): void {
-    const x = this.sign * v;
-    if (!this.entered) {
-      if (x < this.front) return;
-      this.entered = true;
+    if (v >= this.peak) {
+      this.peak = v;
+      return;
     }
-    if (!this.turned) {
-      if (x > this.front) this.front = x;
-      else if (x < this.front - this.turn) this.turned = true;
-    }
-    if (this.turned && x < this.worst) {
-      this.worst = x;
+    if (this.peak < this.firstRise) return;
+    if (this.peak - v < this.bump) return;
+    const margin = v - Math.min(this.lastFall, this.peak - (this.lastRise - this.lastFall));
+    if (margin < this.worst) {
+      this.worst = margin;
       this.worstTime = t;
     }
   }
 
   result(): Extreme | null {
-    return this.turned ? { value: this.sign * this.worst, time: this.worstTime } : null;
+    return this.worst === Infinity ? null : { value: this.worst, time: this.worstTime };
   }
 }
 
+/** The mirror of HoldScan for a low period: after the fall, how far the far end stays below the rise level of each switching point the pulse has ended at. */
+class RingBackScan {
+  private trough = Infinity;
+  private worst = Infinity;
+  private worstTime = 0;
+  private readonly firstFall: number;
+  private readonly lastFall: number;
+  private readonly lastRise: number;
+
+  constructor(
+    band: SwitchingBand,
+    private readonly bump: number,
+  ) {
+    this.firstFall = band.highest - band.hysteresis / 2;
+    this.lastFall = band.lowest - band.hysteresis / 2;
+    this.lastRise = band.lowest + band.hysteresis / 2;
+  }
+
+  visit(t: number, v: number): void {
+    if (v <= this.trough) {
+      this.trough = v;
+      return;
+    }
+    if (this.trough > this.firstFall) return;
+    if (v - this.trough < this.bump) return;
+    const margin = Math.max(this.lastRise, this.trough + (this.lastRise - this.lastFall)) - v;
+    if (margin < this.worst) {
+      this.worst = margin;
+      this.worstTime = t;
+    }
+  }
+
+  result(): Extreme | null {
+    return this.worst === Infinity ? null : { value: this.worst, time: this.worstTime };
+  }
+}
+
+type Visitor = { visit(t: number, v: number): void };
+
 /**
  * One pass over [from, to]: the extreme value (sign +1: highest, −1: lowest; endpoints
- * interpolated, the start winning ties, then the end) and the ringing after two edges.
+ * interpolated, the start winning ties, then the end), every visitor fed each point in order.
  */
-function scanWindow(wave: Waveform, from: number, to: number, sign: number, edge: RingingAfterEdge, midEdge: RingingAfterEdge): Extreme {
+function scanWindow(wave: Waveform, from: number, to: number, sign: number, visitors: Visitor[]): Extreme {
   const first = valueAt(wave, from);
   const last = valueAt(wave, to);
   let best = sign * first;
@@ -122,8 +149,7 @@ function scanWindow(wave: Waveform, from: number, to: number, sign: number, edge
     best = sign * last;
     bestTime = to;
   }
-  edge.begin(first);
-  midEdge.begin(first);
+  for (const visitor of visitors) visitor.visit(from, first);
   const { time, value, count } = wave;
   for (let i = indexAt(wave, from) + 1; i < count && time[i] < to; i += 1) {
     const v = value[i];
@@ -131,63 +157,53 @@ function scanWindow(wave: Waveform, from: number, to: number, sign: number, edge
       best = sign * v;
       bestTime = time[i];
     }
-    edge.visit(time[i], v);
-    midEdge.visit(time[i], v);
+    for (const visitor of visitors) visitor.visit(time[i], v);
   }
-  edge.visit(to, last);
-  midEdge.visit(to, last);
+  for (const visitor of visitors) visitor.visit(to, last);
   return { value: sign * best, time: bestTime };
 }
 
 /**
- * The far end's levels over one bit, and its voltage margins: how far the wave clears each
- * threshold it must cross, and how close the ringing after each edge comes to undoing it
- * (see lib/sim/README.md, "Voltage margins").
+ * The far end's levels over one bit, and its voltage margins over each switching band: how far
+ * the wave clears the band on each edge, and how close the ringing after each edge comes to
+ * undoing it at some switching point (see lib/sim/README.md, "Voltage margins").
  */
-export function measureBitLevels(wave: Waveform, bit: DecodedBit, fall: number, delay: number, thresholds: Thresholds): BitLevels {
-  const { high, low, mid, supply } = thresholds;
+export function measureBitLevels(
+  wave: Waveform,
+  bit: DecodedBit,
+  fall: number,
+  delay: number,
+  bands: Record<JudgementName, SwitchingBand>,
+  supply: number,
+): BitLevels {
   const fallArrives = fall + delay;
-  const turn = TURN_SHARE * supply;
-  const afterRise = new RingingAfterEdge(1, high, turn);
-  const afterRiseMid = new RingingAfterEdge(1, mid, turn);
-  const afterFall = new RingingAfterEdge(-1, low, turn);
-  const afterFallMid = new RingingAfterEdge(-1, mid, turn);
-  const peak = scanWindow(wave, bit.slotStart, fallArrives, 1, afterRise, afterRiseMid);
-  const trough = scanWindow(wave, fallArrives, bit.slotEnd, -1, afterFall, afterFallMid);
-  const highDip = afterRise.result();
-  const ringBack = afterFall.result();
-  const midHighDip = afterRiseMid.result();
-  const midRingBack = afterFallMid.result();
-  // Under hysteresis a dip ends the pulse only below the low threshold; the ring-back is held to the guaranteed low level (docs/simulator.md).
-  const voltageMargin = Math.min(
-    peak.value - high,
-    highDip === null ? Infinity : highDip.value - low,
-    low - (ringBack?.value ?? trough.value),
-  );
-  const midSupplyVoltageMargin = Math.min(
-    peak.value - mid,
-    midHighDip === null ? Infinity : midHighDip.value - mid,
-    mid - (midRingBack?.value ?? trough.value),
-  );
-  return {
-    highPeak: peak.value,
-    highPeakTime: peak.time,
-    lowTrough: trough.value,
-    lowTroughTime: trough.time,
-    highDip,
-    ringBack,
-    midHighDip,
-    midRingBack,
-    voltageMargin,
-    midSupplyVoltageMargin,
-  };
+  const bump = EDGE_BUMP_SHARE * supply;
+  const holds = JUDGEMENTS.map((name) => new HoldScan(bands[name], bump));
+  const ringBacks = JUDGEMENTS.map((name) => new RingBackScan(bands[name], bump));
+  const peak = scanWindow(wave, bit.slotStart, fallArrives, 1, holds);
+  const trough = scanWindow(wave, fallArrives, bit.slotEnd, -1, ringBacks);
+  const margins = {} as Record<JudgementName, BandMargins>;
+  JUDGEMENTS.forEach((name, i) => {
+    const corners = bandCorners(bands[name]);
+    const hold = holds[i].result();
+    const ringBack = ringBacks[i].result();
+    const reach = peak.value - corners.highest.rise;
+    const fallMargin = corners.lowest.fall - trough.value;
+    margins[name] = {
+      reach,
+      hold,
+      fall: fallMargin,
+      ringBack,
+      voltageMargin: Math.min(reach, hold?.value ?? Infinity, fallMargin, ringBack?.value ?? Infinity),
+    };
+  });
+  return { highPeak: peak.value, highPeakTime: peak.time, lowTrough: trough.value, lowTroughTime: trough.time, margins };
 }
 
 type MeasureContext = {
   wave: Waveform;
   bits: DecodedBit[];
   falls: number[];
-  levels: BitLevels[];
   delay: number;
   settledHigh: number;
   clampCurrentPeak: number;
@@ -249,7 +265,7 @@ const minOrNull = (values: (number | null)[]) => (present(values).length > 0 ? s
 const maxOrNull = (values: (number | null)[]) => (present(values).length > 0 ? largest(present(values)) : null);
 
 export function measureRun(context: MeasureContext): RunMetrics {
-  const { wave, bits, levels, settledHigh } = context;
+  const { wave, bits, settledHigh } = context;
   const { min, max } = extremes(wave);
   const widthsOf = (sent: 0 | 1) => bits.filter((bit) => bit.sent === sent && bit.received !== "x").map((bit) => bit.width);
   return {
@@ -258,10 +274,6 @@ export function measureRun(context: MeasureContext): RunMetrics {
     undershoot: Math.max(0, -min),
     zeroHighTime: maxOrNull(widthsOf(0)),
     oneHighTime: minOrNull(widthsOf(1)),
-    timingMargin: minOrNull(bits.map((bit) => bit.timingMargin)),
-    voltageMargin: smallest(levels.map((level) => level.voltageMargin)),
-    midSupplyVoltageMargin: smallest(levels.map((level) => level.midSupplyVoltageMargin)),
-    bitErrors: bits.filter((bit) => bit.received !== String(bit.sent)).length,
     clampCurrentPeak: context.clampCurrentPeak,
     delay: context.delay,
   };

@@ -17,8 +17,37 @@ const fraction = () =>
     error: "must be less than 1 (a fraction of the supply)",
   });
 
-/** Assumed deglitch time of a pixel input: no published figure exists (see lib/sim/README.md). */
-export const DEFAULT_DEGLITCH_TIME = 10e-9;
+/**
+ * The receiver's defaults (lib/sim/receiver.ts, docs/simulator.md "The receiver"), each with its basis:
+ * - thresholds: VIH = 0.7·VDD, VIL = 0.3·VDD, the guaranteed input levels of CMOS-input pixel
+ *   datasheets (common datasheet figures, from memory);
+ * - typical switching point 0.5·VDD ± 0.1·VDD with 0.05·VDD of hysteresis: an assumption (a CMOS
+ *   input switches near mid-supply; spread over parts and temperature and hysteresis are not
+ *   published for this class of part);
+ * - deglitch time 0: no datasheet promises an input filter, so none is assumed;
+ * - shortest high and low: the protocol's shortest nominal high (0.40 µs) and low (0.45 µs) less
+ *   their ±0.15 µs tolerance (the 800 kHz protocol's timing table, from memory), less a further
+ *   0.10 µs and 0.15 µs that a receiver is assumed to accept: 0.15 µs each; a shorter pulse or low is
+ *   not a bit the protocol defines;
+ * - clamp injection rating 20 mA: the absolute maximum input clamp current of standard CMOS logic
+ *   inputs (±20 mA, JEDEC JESD7A for the high-speed CMOS family, from memory), assumed for pixel
+ *   inputs whose datasheets do not state one; a design keeps under half of it (common derating).
+ */
+export const RECEIVER_DEFAULTS = {
+  highThreshold: 0.7,
+  lowThreshold: 0.3,
+  typicalSwitchingPoint: 0.5,
+  typicalSpread: 0.1,
+  typicalHysteresis: 0.05,
+  deglitchTime: 0,
+  minPulse: 0.15e-6,
+  minGap: 0.15e-6,
+  decisionTime: 0.6e-6,
+  clampCurrentRating: 20e-3,
+} as const;
+
+/** The clamp current a design keeps under: half the input's rated injection current (common derating practice). */
+export const clampCurrentLimit = (rating: number) => rating / 2;
 
 const driverSchema = z.strictObject({
   highVoltage: quantity("V", 0.5, 24).default(5),
@@ -59,11 +88,16 @@ const receiverSchema = z
     supplyVoltage: quantity("V", 1, 24).default(5),
     inputCapacitance: quantity("F", 0, 1e-9).default(5e-12),
     clampDiodes: z.boolean({ error: "must be true or false" }).default(true),
-    highThreshold: fraction().default(0.7),
-    lowThreshold: fraction().default(0.3),
-    deglitchTime: quantity("s", 0, 1e-6).default(DEFAULT_DEGLITCH_TIME),
-    minPulse: quantity("s", 0, 10e-6).default(0.15e-6),
-    decisionTime: quantity("s", 0, 10e-6, { exclusiveMin: true }).default(0.6e-6),
+    highThreshold: fraction().default(RECEIVER_DEFAULTS.highThreshold),
+    lowThreshold: fraction().default(RECEIVER_DEFAULTS.lowThreshold),
+    typicalSwitchingPoint: fraction().default(RECEIVER_DEFAULTS.typicalSwitchingPoint),
+    typicalSpread: quantity("of the supply", 0, 0.5).default(RECEIVER_DEFAULTS.typicalSpread),
+    typicalHysteresis: quantity("of the supply", 0, 0.5).default(RECEIVER_DEFAULTS.typicalHysteresis),
+    deglitchTime: quantity("s", 0, 1e-6).default(RECEIVER_DEFAULTS.deglitchTime),
+    minPulse: quantity("s", 0, 10e-6).default(RECEIVER_DEFAULTS.minPulse),
+    minGap: quantity("s", 0, 10e-6).default(RECEIVER_DEFAULTS.minGap),
+    decisionTime: quantity("s", 0, 10e-6, { exclusiveMin: true }).default(RECEIVER_DEFAULTS.decisionTime),
+    clampCurrentRating: quantity("A", 0, 1, { exclusiveMin: true }).default(RECEIVER_DEFAULTS.clampCurrentRating),
   })
   .check((ctx) => {
     const receiver = ctx.value;
@@ -73,6 +107,15 @@ const receiverSchema = z
         input: receiver.lowThreshold,
         path: ["lowThreshold"],
         message: "must be below highThreshold",
+      });
+    }
+    const { typicalSwitchingPoint: centre, typicalSpread: spread, typicalHysteresis: hysteresis } = receiver;
+    if (centre - spread - hysteresis / 2 <= 0 || centre + spread + hysteresis / 2 >= 1) {
+      ctx.issues.push({
+        code: "custom",
+        input: receiver.typicalSpread,
+        path: ["typicalSpread"],
+        message: "the typical switching band with its hysteresis must lie inside the supply",
       });
     }
     if (receiver.minPulse >= receiver.decisionTime) {

@@ -4,25 +4,34 @@ import type { DriveSchedule } from "./drive-source";
 import { SimSolveBudgetError } from "./errors";
 import { pinEquilibrium } from "./far-node";
 import { planSolve, solveLine, type LineTotals, type SolveOutput, type SolveQuality } from "./line-solver";
+import { judgeBand, publicJudgement, type Judgement } from "./judgement";
 import { measureBitLevels, measureRun, type RunMetrics } from "./metrics";
-import { parseSimInput, type ResolvedSimInput, type SimInput } from "./schema";
+import { bandCentre, switchingBands } from "./receiver";
+import { clampCurrentLimit, parseSimInput, type ResolvedSimInput, type SimInput } from "./schema";
 import { bitSlots, colourBits } from "./signal";
 import { judgeVerdict, type Verdict } from "./verdict";
 import { RunRecord } from "./run-record";
 import { Trace } from "./trace";
 import { expandNearEnd, expandTrace, sampleNearEnd, sampleTrace, waveformFromTrace, type Waveform } from "./waveform";
 
+/** One bit's margins under one judgement: the worst over the judgement's switching band. */
+export type BitMargins = {
+  /** Distance from a wrong reading in time (s), negative when wrong; null when the slot holds no single complete pulse at one of the band's extremes. */
+  timingMargin: number | null;
+  /** Distance from a wrong reading in voltage (V); see lib/sim/README.md, "Voltage margins". */
+  voltageMargin: number;
+};
+
 export type SimBit = {
   sent: 0 | 1;
+  /** As read at the middle of the typical switching band. */
   received: "0" | "1" | "x";
-  /** Pulse width at the thresholds (s); null when the slot holds no single complete pulse. */
+  /** Pulse width at that switching point (s); null when the slot holds no single complete pulse. */
   width: number | null;
-  /** Distance from a wrong decision (s), negative when wrong; null when the slot holds no single complete pulse. */
-  timingMargin: number | null;
   /** The driver's rising edge of this bit (s). */
   start: number;
-  /** Against the guaranteed thresholds, worst of: peak above the high threshold, deepest dip inside the pulse above the low threshold, low threshold minus the ring-back (V); see lib/sim/README.md. */
-  voltageMargin: number;
+  guaranteed: BitMargins;
+  typical: BitMargins;
 };
 
 export type SimLine = { z0: number; delay: number; perMetre: PerMetre; length: number; segments: number; timeStep: number };
@@ -49,6 +58,11 @@ export type SimulateOptions = {
    * long pattern while a control is dragged. Its verdict speaks only of those bits.
    */
   firstBits?: number;
+  /**
+   * The default output grid when the input sets no `output.sampleInterval`: a readable interval
+   * no finer than `finestInterval`, giving at most `maxPoints` points. Defaults: 4,000 points, enough to draw.
+   */
+  grid?: { finestInterval: number; maxPoints: number };
 };
 
 /** What a run found, apart from its traces. */
@@ -62,7 +76,7 @@ export type DrawnRun = RunAnalysis & {
 };
 
 /** How finely a drawn run is sampled: `finestInterval` apart, or coarser so that a long run stays within `maxPoints`. */
-export type DrawingOptions = Omit<SimulateOptions, "keepFullResolution"> & { finestInterval: number; maxPoints: number };
+export type DrawingOptions = Omit<SimulateOptions, "keepFullResolution" | "grid"> & { finestInterval: number; maxPoints: number };
 
 const MAX_DRAWN_POINTS = 4000;
 
@@ -148,18 +162,21 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
   const far = waveformFromTrace(solved.far, solved.dt, farScratch);
   farScratch = far;
 
-  const highLevel = receiver.highThreshold * receiver.supplyVoltage;
-  const lowLevel = receiver.lowThreshold * receiver.supplyVoltage;
-  const decoding = decodeWaveform(far, slots, signal.bitPeriod, totals.delay, {
-    highLevel,
-    lowLevel,
+  const bands = switchingBands(receiver);
+  const rule = {
     deglitchTime: receiver.deglitchTime,
     minPulse: receiver.minPulse,
+    minGap: receiver.minGap,
     decisionTime: receiver.decisionTime,
-  });
+  };
+  const decoding = decodeWaveform(far, slots, signal.bitPeriod, totals.delay, { ...rule, ...bandCentre(bands.typical) });
   const falls = slots.map((slot) => slot.fall);
-  const thresholds = { high: highLevel, low: lowLevel, mid: receiver.supplyVoltage / 2, supply: receiver.supplyVoltage };
-  const levels = decoding.bits.map((bit, i) => measureBitLevels(far, bit, falls[i], totals.delay, thresholds));
+  const levels = decoding.bits.map((bit, i) => measureBitLevels(far, bit, falls[i], totals.delay, bands, receiver.supplyVoltage));
+  const bandContext = { wave: far, slots, bitPeriod: signal.bitPeriod, delay: totals.delay, rule, levels };
+  const judgements = {
+    guaranteed: judgeBand("guaranteed", bands.guaranteed, bandContext),
+    typical: judgeBand("typical", bands.typical, bandContext),
+  };
   const settledHigh = pinEquilibrium(
     driver.highVoltage,
     1 / Math.max(resistanceHigh + totals.resistance, 1e-3),
@@ -170,12 +187,11 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
     wave: far,
     bits: decoding.bits,
     falls,
-    levels,
     delay: totals.delay,
     settledHigh,
     clampCurrentPeak: solved.clampCurrentPeak,
   });
-  const verdict = judgeVerdict(decoding, levels, metrics, {
+  const verdict = judgeVerdict(judgements, decoding, levels, metrics, {
     highVoltage: driver.highVoltage,
     sourceResistanceHigh: resistanceHigh,
     sourceResistanceLow: resistanceLow,
@@ -184,15 +200,17 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
     cableCapacitance: totals.capacitance,
     inputCapacitance: receiver.inputCapacitance,
     supply: receiver.supplyVoltage,
-    highLevel,
-    lowLevel,
     settledHigh,
-    deglitchTime: receiver.deglitchTime,
-    minPulse: receiver.minPulse,
-    decisionTime: receiver.decisionTime,
+    ...rule,
     latchGap: signal.latchGap,
     falls,
     clampCurrentPeakTime: solved.clampCurrentPeakTime,
+    clampCurrentRating: receiver.clampCurrentRating,
+    clampCurrentLimit: clampCurrentLimit(receiver.clampCurrentRating),
+  });
+  const marginsOf = (judgement: keyof typeof judgements, i: number) => ({
+    timingMargin: judgements[judgement].bitTimingMargins[i],
+    voltageMargin: levels[i].margins[judgement].voltageMargin,
   });
 
   const analysis: RunAnalysis = {
@@ -201,12 +219,12 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
       sent: bit.sent,
       received: bit.received,
       width: bit.width,
-      timingMargin: bit.timingMargin,
       start: bit.start,
-      voltageMargin: levels[i].voltageMargin,
+      guaranteed: marginsOf("guaranteed", i),
+      typical: marginsOf("typical", i),
     })),
     metrics,
-    verdict,
+    verdict: { ...verdict, guaranteed: publicJudgement(judgements.guaranteed), typical: publicJudgement(judgements.typical) },
     line: {
       z0: totals.z0,
       delay: totals.delay,
@@ -238,7 +256,8 @@ function uniformTimes(interval: number, points: number): Float64Array {
 /** Simulates one run: waveforms, decoded bits, metrics and verdict. */
 export function simulateRun(input: SimInput | ResolvedSimInput, options: SimulateOptions = {}): SimResult {
   const { resolved, solved, endTime, analysis } = solveAndJudge(input, options);
-  const interval = resolved.output.sampleInterval ?? niceInterval(endTime / (MAX_DRAWN_POINTS - 1));
+  const grid = options.grid ?? { finestInterval: 0, maxPoints: MAX_DRAWN_POINTS };
+  const interval = resolved.output.sampleInterval ?? niceInterval(Math.max(grid.finestInterval, endTime / (grid.maxPoints - 1)));
   const points = pointCount(endTime, interval);
   const result: SimResult = {
     time: roundedArray(uniformTimes(interval, points), 1e15),

@@ -1,19 +1,52 @@
 import type { Decoding, DecodedBit } from "./decoder";
+import type { Corner, JudgedBand, Judgement } from "./judgement";
 import type { BitLevels, RunMetrics } from "./metrics";
+import type { Comparator, JudgementName } from "./receiver";
 
 /**
- * The verdict: pass when every bit decodes as sent and nothing extra is read. Each reason names
- * the physics behind the waveform feature it points at, using the circuit's own numbers.
+ * The verdict: the run judged two ways (receiver.ts), an outcome in plain words, and reasons that
+ * name the physics behind each waveform feature they point at, using the circuit's own numbers.
  */
 
 export type VerdictReason = {
   code: string;
   severity: "fail" | "warning";
+  /** The judgement a failing reason belongs to: it is why the run fails on typical pixels, or why it is not guaranteed. */
+  judgement?: JudgementName;
   message: string;
   at?: { time: number; bit?: number };
 };
 
-export type Verdict = { pass: boolean; reasons: VerdictReason[] };
+/** guaranteed: works on every pixel that meets its datasheet; typical: works on typical pixels only; fails: typical pixels misread it. */
+export const OUTCOMES = ["guaranteed", "typical", "fails"] as const;
+export type Outcome = (typeof OUTCOMES)[number];
+
+export type Verdict = {
+  outcome: Outcome;
+  /** The outcome in the words every lesson, lab and message uses. */
+  summary: string;
+  guaranteed: Judgement;
+  typical: Judgement;
+  reasons: VerdictReason[];
+};
+
+/** The outcome's words, the same everywhere a run is judged. */
+export const OUTCOME_WORDS: Record<Outcome, string> = {
+  guaranteed: "works on every pixel that meets its datasheet",
+  typical: "works on typical pixels, not guaranteed",
+  fails: "fails: typical pixels misread it",
+};
+
+/** A reason's heading, the same on the workbench, in attempt results and in the lessons. */
+export function reasonHeading(reason: Pick<VerdictReason, "severity" | "judgement">): string {
+  if (reason.severity === "warning") return "Warning";
+  return reason.judgement === "guaranteed" ? "Not guaranteed" : "Fails";
+}
+
+export function outcomeOf(guaranteed: Pick<Judgement, "pass">, typical: Pick<Judgement, "pass">): Outcome {
+  if (guaranteed.pass && typical.pass) return "guaranteed";
+  return typical.pass ? "typical" : "fails";
+}
 
 export type CircuitFacts = {
   highVoltage: number;
@@ -26,19 +59,19 @@ export type CircuitFacts = {
   cableCapacitance: number;
   inputCapacitance: number;
   supply: number;
-  highLevel: number;
-  lowLevel: number;
   settledHigh: number;
   deglitchTime: number;
   minPulse: number;
+  minGap: number;
   decisionTime: number;
   latchGap: number | undefined;
   falls: number[];
   clampCurrentPeakTime: number;
+  /** The clamp current a design keeps under (A): half the input's rated injection current. */
+  clampCurrentLimit: number;
+  clampCurrentRating: number;
 };
 
-/** Pixel inputs are commonly rated for about 20 mA of clamp current (common datasheet figure, from memory). */
-const CLAMP_CURRENT_WARNING = 10e-3;
 /** Shortest low period that latches the colours (docs/simulator.md, "Signal"). */
 const MIN_LATCH_GAP = 50e-6;
 const THIN_TIMING_MARGIN = 50e-9;
@@ -83,23 +116,50 @@ function ringingCause(facts: CircuitFacts, resistance: number, swing: "down" | "
   return `the line's inductance and the capacitance at its end ring, and too little resistance damps them`;
 }
 
-function neverHighMessage(facts: CircuitFacts, kinds: string): string {
-  const head = `the far end never rises above the high threshold (${volts(facts.highLevel)}) during ${kinds}`;
+/** How a reason names the levels of the switching point it was read at. */
+type Levels = { rise: string; fall: string; riseVolts: number; fallVolts: number };
+
+function levelWords(name: JudgementName, corner: Corner, comparator: Comparator): Levels {
+  if (name === "guaranteed") {
+    const which = corner === "highest" ? "high" : "low";
+    return {
+      rise: `the datasheet's ${which} threshold (${volts(comparator.rise)})`,
+      fall: `the datasheet's ${which} threshold (${volts(comparator.fall)})`,
+      riseVolts: comparator.rise,
+      fallVolts: comparator.fall,
+    };
+  }
+  const end = corner === "highest" ? "top" : "bottom";
+  return {
+    rise: `${volts(comparator.rise)} (where a typical pixel switching at the ${end} of its range reads a rise)`,
+    fall: `${volts(comparator.fall)} (where that pixel reads a fall)`,
+    riseVolts: comparator.rise,
+    fallVolts: comparator.fall,
+  };
+}
+
+function neverHighMessage(facts: CircuitFacts, kinds: string, levels: Levels): string {
+  const head = `the far end never rises above ${levels.rise} during ${kinds}`;
   const resistance = facts.sourceResistanceHigh;
-  if (facts.settledHigh < facts.highLevel) {
+  if (facts.settledHigh < levels.riseVolts) {
     const firstArrival = facts.delay > 0 ? (2 * facts.highVoltage * facts.z0) / (resistance + facts.z0) : facts.highVoltage;
     const lift =
       facts.delay > 0 && firstArrival > facts.settledHigh * 1.02
         ? `the reflection at the open end lifts the first arrival only to about ${volts(Math.min(firstArrival, facts.supply + 0.7))}, and not for long`
         : `a source of ${ohms(resistance)} against the line's ${ohms(facts.z0)} gives no overshoot to lift it`;
-    return `${head}: the driver's ${volts(facts.highVoltage)} high level sits below that threshold, and ${lift}`;
+    return `${head}: the driver's ${volts(facts.highVoltage)} high level sits below that level, and ${lift}`;
   }
   return `${head}: ${slowEdgeCause(facts, resistance, "rising")}`;
 }
 
+/** A pulse that clears the rise level only on the doubled wave's overshoot and then settles below the fall level: the driver's high level itself is too low. */
+function lowLevelMessage(facts: CircuitFacts, levels: Levels): string {
+  return `the far end rises through ${levels.rise} only on the overshoot of the doubled wave, then settles at ${volts(facts.settledHigh)}, below ${levels.fall}, and the pulse breaks: the driver's ${volts(facts.highVoltage)} high level is too low for a ${volts(facts.supply)} pixel; a level shifter to the pixel's supply fixes the cause`;
+}
+
 type Finding = { code: string; index: number; time: number };
 
-function classifyBit(bit: DecodedBit, index: number, previous: DecodedBit | undefined, facts: CircuitFacts, levels: BitLevels): Finding | null {
+function classifyBit(bit: DecodedBit, index: number, previous: DecodedBit | undefined, facts: CircuitFacts, level: BitLevels): Finding | null {
   if (bit.received === String(bit.sent)) return null;
   const fallArrives = facts.falls[index] + facts.delay;
   const lastBefore = previous?.pulses.at(-1);
@@ -107,7 +167,7 @@ function classifyBit(bit: DecodedBit, index: number, previous: DecodedBit | unde
     if (lastBefore && (lastBefore.end === null || lastBefore.end > bit.slotStart)) {
       return { code: "slow-fall", index, time: bit.slotStart };
     }
-    return { code: "never-high", index, time: levels.highPeakTime };
+    return { code: "never-high", index, time: level.highPeakTime };
   }
   if (bit.pulses.length > 1) {
     const first = bit.pulses[0];
@@ -121,43 +181,62 @@ function classifyBit(bit: DecodedBit, index: number, previous: DecodedBit | unde
     if (pulse.start >= fallArrives) return { code: "ring-after-fall", index, time: pulse.start };
     return { code: "narrow-pulse", index, time: pulse.start };
   }
+  if (bit.shortGap) return { code: "short-low", index, time: pulse.end };
   return bit.sent === 0
     ? { code: "stretched-zero", index, time: pulse.end }
     : { code: "shortened-one", index, time: pulse.start };
 }
 
-function failMessage(code: string, bits: DecodedBit[], indices: number[], facts: CircuitFacts): string {
+/** A bit whose high time the sender chose so long (or short) that the driver's own pulse decides it, whatever the line does. */
+function timingCause(facts: CircuitFacts, bit: DecodedBit, index: number): string | null {
+  const driven = facts.falls[index] - bit.start;
+  if (bit.sent === 1 && driven <= facts.decisionTime) return `the driver's own high time (${duration(driven)}) is no longer than the ${duration(facts.decisionTime)} decision time`;
+  if (bit.sent === 0 && driven >= facts.decisionTime) return `the driver's own high time (${duration(driven)}) is no shorter than the ${duration(facts.decisionTime)} decision time`;
+  return null;
+}
+
+function failMessage(code: string, bits: DecodedBit[], indices: number[], facts: CircuitFacts, levels: Levels): string {
   const first = bits[indices[0]];
   const kinds = bitKinds(bits, indices);
   const high = facts.sourceResistanceHigh;
   const low = facts.sourceResistanceLow;
+  const sent = timingCause(facts, first, indices[0]);
   switch (code) {
     case "never-high":
-      return neverHighMessage(facts, kinds);
+      return neverHighMessage(facts, kinds, levels);
+    case "high-level-too-low":
+      return lowLevelMessage(facts, levels);
     case "slow-fall":
-      return `the far end does not fall below the low threshold (${volts(facts.lowLevel)}) before the next bit starts, so that bit's pulse is missed: ${slowEdgeCause(facts, low, "falling")}`;
+      return `the far end does not fall below ${levels.fall} before the next bit starts, so that bit's pulse is missed: ${slowEdgeCause(facts, low, "falling")}`;
     case "ring-after-rise":
-      return `ringing after the rising edge re-crosses the low threshold (${volts(facts.lowLevel)}) and breaks the pulse: ${ringingCause(facts, high, "down")}`;
+      return `ringing after the rising edge falls back through ${levels.fall} and breaks the pulse: ${ringingCause(facts, high, "down")}`;
     case "ring-after-fall":
-      return `ringing after the falling edge rises back above the high threshold (${volts(facts.highLevel)}) and the pixel reads an extra pulse: ${ringingCause(facts, low, "up")}`;
+      return `ringing after the falling edge rises back through ${levels.rise} and the pixel reads an extra pulse: ${ringingCause(facts, low, "up")}`;
     case "stuck-high":
-      return `the far end never falls below the low threshold (${volts(facts.lowLevel)}) after the pulse: ${slowEdgeCause(facts, low, "falling")}`;
+      return `the far end never falls below ${levels.fall} after the pulse: ${slowEdgeCause(facts, low, "falling")}`;
     case "narrow-pulse":
-      return `a pulse only ${duration(first.width ?? 0)} wide at the thresholds counts as a glitch (shorter than ${duration(facts.minPulse)}): the far end crosses the high threshold late and leaves it early, because ${slowEdgeCause(facts, high, "rising")}`;
+      return `a pulse only ${duration(first.width ?? 0)} wide counts as a glitch (shorter than ${duration(facts.minPulse)}): the far end crosses ${levels.rise} late and leaves it early, because ${slowEdgeCause(facts, high, "rising")}`;
+    case "short-low":
+      return `the low after the pulse lasts only ${duration(first.gap ?? 0)}, shorter than the ${duration(facts.minGap)} the protocol leaves between pulses, so the pixel cannot tell where the bit ends: ${sent ?? "the driver's high time leaves too little low time, and the slow edges at the far end take the rest"}`;
     case "stretched-zero":
-      return `0 bits read as 1: the pulse is ${duration(first.width ?? 0)} wide at the thresholds, longer than the ${duration(facts.decisionTime)} decision time, because the far end falls below the low threshold late: ${slowEdgeCause(facts, low, "falling")}`;
+      return `0 bits read as 1: the pulse is ${duration(first.width ?? 0)} wide, longer than the ${duration(facts.decisionTime)} decision time, because ${sent ?? `the far end falls below ${levels.fall} late: ${slowEdgeCause(facts, low, "falling")}`}`;
     case "shortened-one":
-      return `1 bits read as 0: the pulse is only ${duration(first.width ?? 0)} wide at the thresholds, shorter than the ${duration(facts.decisionTime)} decision time, because the far end reaches the high threshold late: ${slowEdgeCause(facts, high, "rising")}`;
+      return `1 bits read as 0: the pulse is only ${duration(first.width ?? 0)} wide, shorter than the ${duration(facts.decisionTime)} decision time, because ${sent ?? `the far end reaches ${levels.rise} late: ${slowEdgeCause(facts, high, "rising")}`}`;
     default:
       return `${kinds} do not decode`;
   }
 }
 
-function failReasons(decoding: Decoding, levels: BitLevels[], facts: CircuitFacts): VerdictReason[] {
+
+function decodingReasons(judged: JudgedBand, corner: Corner, levels: BitLevels[], facts: CircuitFacts): VerdictReason[] {
+  const { comparator, decoding } = judged.readings[corner];
+  const words = levelWords(judged.name, corner, comparator);
   const { bits } = decoding;
   const groups = new Map<string, Finding[]>();
+  const settlesBelow = facts.settledHigh < comparator.fall;
   bits.forEach((bit, i) => {
     const finding = classifyBit(bit, i, bits[i - 1], facts, levels[i]);
+    if (finding?.code === "ring-after-rise" && settlesBelow) finding.code = "high-level-too-low";
     if (finding) groups.set(finding.code, [...(groups.get(finding.code) ?? []), finding]);
   });
   const reasons: VerdictReason[] = [...groups].map(([code, findings]) => {
@@ -165,7 +244,8 @@ function failReasons(decoding: Decoding, levels: BitLevels[], facts: CircuitFact
     return {
       code,
       severity: "fail",
-      message: `${failMessage(code, bits, indices, facts)} (${countNote(indices, bits.length)}).`,
+      judgement: judged.name,
+      message: `${failMessage(code, bits, indices, facts, words)} (${countNote(indices, bits.length)}).`,
       at: { time: findings[0].time, bit: findings[0].index },
     };
   });
@@ -173,7 +253,8 @@ function failReasons(decoding: Decoding, levels: BitLevels[], facts: CircuitFact
     reasons.push({
       code: "extra-pulse",
       severity: "fail",
-      message: `after the last bit the far end rises above the high threshold (${volts(facts.highLevel)}) again and the pixel reads an extra bit: ${ringingCause(facts, facts.sourceResistanceLow, "up")}.`,
+      judgement: judged.name,
+      message: `after the last bit the far end rises back through ${words.rise} and the pixel reads an extra bit: ${ringingCause(facts, facts.sourceResistanceLow, "up")}.`,
       at: { time: decoding.extraPulses[0].start, bit: bits.length - 1 },
     });
   }
@@ -190,77 +271,101 @@ function bitAt(bits: DecodedBit[], time: number): number {
   return index === -1 ? bits.length - 1 : index;
 }
 
-function warningReasons(decoding: Decoding, levels: BitLevels[], metrics: RunMetrics, facts: CircuitFacts, failing: boolean): VerdictReason[] {
+/**
+ * Ringing that turns back through a switching point between the band's extremes: both extremes
+ * read every bit, yet a part switching in between would see a pulse break or an extra one.
+ */
+function recrossingReason(judged: JudgedBand, levels: BitLevels[], facts: CircuitFacts): VerdictReason | null {
+  const name = judged.name;
+  const holdBit = worstBit(levels, (level) => -(level.margins[name].hold?.value ?? Infinity));
+  const ringBit = worstBit(levels, (level) => -(level.margins[name].ringBack?.value ?? Infinity));
+  const hold = levels[holdBit].margins[name].hold;
+  const ringBack = levels[ringBit].margins[name].ringBack;
+  const band = `${volts(judged.band.lowest)}–${volts(judged.band.highest)}`;
+  if (hold !== null && hold.value < 0 && (ringBack === null || hold.value <= ringBack.value)) {
+    const top = judged.band.highest - judged.band.hysteresis / 2;
+    if (facts.settledHigh < top) {
+      const levels = levelWords(name, "highest", judged.readings.highest.comparator);
+      return { code: "high-level-too-low", severity: "fail", judgement: name, message: `${lowLevelMessage(facts, levels)}.`, at: { time: hold.time, bit: holdBit } };
+    }
+    return {
+      code: "ring-after-rise",
+      severity: "fail",
+      judgement: name,
+      message: `ringing after the rising edge turns back down through switching points in the ${band} band and breaks the pulse there (by ${volts(-hold.value)}): ${ringingCause(facts, facts.sourceResistanceHigh, "down")}.`,
+      at: { time: hold.time, bit: holdBit },
+    };
+  }
+  if (ringBack !== null && ringBack.value < 0) {
+    return {
+      code: "ring-after-fall",
+      severity: "fail",
+      judgement: name,
+      message: `ringing after the falling edge swings back up through switching points in the ${band} band and starts an extra pulse there (by ${volts(-ringBack.value)}): ${ringingCause(facts, facts.sourceResistanceLow, "up")}.`,
+      at: { time: ringBack.time, bit: ringBit },
+    };
+  }
+  return null;
+}
+
+/** Why a judgement fails: the bits misread at the band's extremes, or else ringing through a switching point in between. */
+function judgementReasons(judged: JudgedBand, levels: BitLevels[], facts: CircuitFacts): VerdictReason[] {
+  if (judged.pass) return [];
+  for (const corner of ["lowest", "highest"] as const) {
+    const reasons = decodingReasons(judged, corner, levels, facts);
+    if (reasons.length > 0) return reasons;
+  }
+  const recrossing = recrossingReason(judged, levels, facts);
+  if (recrossing) return [recrossing];
+  return [
+    {
+      code: "thin-margin",
+      severity: "fail",
+      judgement: judged.name,
+      message: `the far end comes within reach of the switching band (voltage margin ${volts(judged.voltageMargin)}, timing margin ${judged.timingMargin === null ? "none" : duration(judged.timingMargin)}).`,
+    },
+  ];
+}
+
+function warningReasons(decoding: Decoding, metrics: RunMetrics, judgements: Record<JudgementName, JudgedBand>, facts: CircuitFacts): VerdictReason[] {
   const reasons: VerdictReason[] = [];
   const { bits, filtered } = decoding;
   for (const kind of ["dip", "spike"] as const) {
     const events = filtered.filter((event) => event.kind === kind);
     if (events.length === 0) continue;
     const longest = events.reduce((a, b) => (b.duration > a.duration ? b : a));
-    const what =
-      kind === "dip"
-        ? `ringing after the rising edge dips below the low threshold (${volts(facts.lowLevel)})`
-        : `ringing after the falling edge rises above the high threshold (${volts(facts.highLevel)})`;
+    const what = kind === "dip" ? "ringing after the rising edge dips back through the switching point" : "ringing after the falling edge rises back through the switching point";
     reasons.push({
       code: kind === "dip" ? "ringing-filtered-low" : "ringing-filtered-high",
       severity: "warning",
-      message: `${what} for up to ${duration(longest.duration)}; the pixel's ${duration(facts.deglitchTime)} deglitch filter (an assumed figure) removes it, but an input with a shorter filter would read a broken pulse.`,
+      message: `${what} for up to ${duration(longest.duration)}; the ${duration(facts.deglitchTime)} input filter set for this run hides it from the decoded bits, but no datasheet promises such a filter, so the judgements count it.`,
       at: { time: events[0].start, bit: bitAt(bits, events[0].start) },
     });
   }
-  if (metrics.clampCurrentPeak > CLAMP_CURRENT_WARNING) {
+  if (metrics.clampCurrentPeak > facts.clampCurrentLimit) {
     reasons.push({
       code: "clamp-current",
       severity: "warning",
-      message: `the clamp diodes at the pixel input carry up to ${(metrics.clampCurrentPeak * 1e3).toFixed(0)} mA: the overshoot beyond the supply rails is pushed into the pixel; inputs are commonly rated for about 20 mA (check the part's datasheet).`,
+      message: `the clamp diodes at the pixel input carry up to ${(metrics.clampCurrentPeak * 1e3).toFixed(1)} mA, above the ${(facts.clampCurrentLimit * 1e3).toFixed(0)} mA a design keeps under (half the ${(facts.clampCurrentRating * 1e3).toFixed(0)} mA injection rating assumed for the input): the overshoot beyond the supply rails is pushed into the pixel's input.`,
       at: { time: facts.clampCurrentPeakTime, bit: bitAt(bits, facts.clampCurrentPeakTime) },
     });
   }
-  const ringBack = worstBit(levels, (level) => level.ringBack?.value ?? -Infinity);
-  const ringBackPeak = levels[ringBack].ringBack;
-  if (!failing && ringBackPeak !== null && ringBackPeak.value > facts.lowLevel) {
-    const mid = facts.supply / 2;
-    const peak = ringBackPeak.value;
-    const consequence =
-      peak >= facts.highLevel
-        ? `above the high threshold (${volts(facts.highLevel)}); only the deglitch filter keeps it from starting an extra pulse`
-        : `above the guaranteed low level (${volts(facts.lowLevel)}); it stays below the high threshold so the pulse count is right, but ${peak > mid ? `a pixel switching near mid-supply (${volts(mid)}) would read it as a high` : "the noise margin is gone"}`;
-    reasons.push({
-      code: "ringing-undefined-zone",
-      severity: "warning",
-      message: `ringing after the falling edge swings back up to ${volts(peak)}, ${consequence}: ${ringingCause(facts, facts.sourceResistanceLow, "up")}.`,
-      at: { time: ringBackPeak.time, bit: ringBack },
-    });
-  } else if (!failing && metrics.voltageMargin >= 0 && metrics.voltageMargin < THIN_VOLTAGE_SHARE * facts.supply) {
-    reasons.push({
-      code: "thin-voltage-margin",
-      severity: "warning",
-      message: `the far end clears the pixel's thresholds by only ${volts(metrics.voltageMargin)}: a little more cable or a weaker driver and bits will be lost.`,
-    });
-  }
-  const midDip = worstBit(levels, (level) => -(level.midHighDip?.value ?? Infinity));
-  const midDipLevel = levels[midDip].midHighDip;
-  if (!failing && midDipLevel !== null && midDipLevel.value < facts.supply / 2) {
-    reasons.push({
-      code: "mid-supply-dip",
-      severity: "warning",
-      message: `ringing after the rising edge dips to ${volts(midDipLevel.value)} inside the pulse, below mid-supply (${volts(facts.supply / 2)}): a pixel whose input switches near mid-supply, as real inputs usually do, would see the pulse break and misread the bit: ${ringingCause(facts, facts.sourceResistanceHigh, "down")}.`,
-      at: { time: midDipLevel.time, bit: midDip },
-    });
-  }
-  if (!failing && metrics.timingMargin !== null && metrics.timingMargin < THIN_TIMING_MARGIN) {
-    reasons.push({
-      code: "thin-timing-margin",
-      severity: "warning",
-      message: `a pulse comes within ${duration(metrics.timingMargin)} of being read as the other bit: the edges at the far end are slow compared with the protocol's timing.`,
-    });
-  }
-  if (failing && metrics.midSupplyVoltageMargin > 0) {
-    reasons.push({
-      code: "passes-at-mid-supply",
-      severity: "warning",
-      message: `a pixel whose input actually switches near mid-supply (${volts(facts.supply / 2)}) would likely decode this run: it may work on one bench and fail on another, because only the ${volts(facts.highLevel)} / ${volts(facts.lowLevel)} thresholds are guaranteed.`,
-    });
+  const guaranteed = judgements.guaranteed;
+  if (guaranteed.pass) {
+    if (guaranteed.voltageMargin < THIN_VOLTAGE_SHARE * facts.supply) {
+      reasons.push({
+        code: "thin-voltage-margin",
+        severity: "warning",
+        message: `the far end clears the datasheet's thresholds by only ${volts(guaranteed.voltageMargin)}: a little more cable or a weaker driver and it is no longer guaranteed.`,
+      });
+    }
+    if (guaranteed.timingMargin !== null && guaranteed.timingMargin < THIN_TIMING_MARGIN) {
+      reasons.push({
+        code: "thin-timing-margin",
+        severity: "warning",
+        message: `a pulse comes within ${duration(guaranteed.timingMargin)} of being read as the other bit by a pixel switching somewhere its datasheet allows.`,
+      });
+    }
   }
   if (facts.latchGap !== undefined && facts.latchGap < MIN_LATCH_GAP) {
     reasons.push({
@@ -272,8 +377,22 @@ function warningReasons(decoding: Decoding, levels: BitLevels[], metrics: RunMet
   return reasons;
 }
 
-export function judgeVerdict(decoding: Decoding, levels: BitLevels[], metrics: RunMetrics, facts: CircuitFacts): Verdict {
-  const fails = failReasons(decoding, levels, facts);
-  const warnings = warningReasons(decoding, levels, metrics, facts, fails.length > 0);
-  return { pass: fails.length === 0, reasons: [...fails, ...warnings] };
+/**
+ * The verdict on a run judged both ways. The reasons explain the judgement that decides the
+ * outcome: why typical pixels fail it, or else why it is not guaranteed; then the warnings.
+ */
+export function judgeVerdict(
+  judgements: Record<JudgementName, JudgedBand>,
+  centre: Decoding,
+  levels: BitLevels[],
+  metrics: RunMetrics,
+  facts: CircuitFacts,
+): Omit<Verdict, "guaranteed" | "typical"> {
+  const outcome = outcomeOf(judgements.guaranteed, judgements.typical);
+  const deciding = outcome === "fails" ? judgements.typical : judgements.guaranteed;
+  return {
+    outcome,
+    summary: OUTCOME_WORDS[outcome],
+    reasons: [...judgementReasons(deciding, levels, facts), ...warningReasons(centre, metrics, judgements, facts)],
+  };
 }

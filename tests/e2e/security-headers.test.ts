@@ -161,7 +161,7 @@ describe("security headers and the Content-Security-Policy", () => {
     await simulated.locator(farEndTrace).first().waitFor({ timeout: 60_000 });
 
     await page.goto(`/labs/${LAB}`);
-    const preview = page.locator('[data-testid="bench-preview"][data-pending="false"]');
+    const preview = page.locator('[data-testid="workbench-preview"][data-pending="false"]');
     await preview.waitFor({ timeout: 60_000 });
     await page.locator(farEndTrace).first().waitFor({ timeout: 60_000 });
     const before = await page.locator(farEndTrace).first().getAttribute("d");

@@ -26,7 +26,7 @@ afterAll(async () => {
 
 /** Waits until the preview shows the run for the controls as they are now. */
 async function settled(page: Page): Promise<void> {
-  await page.locator('[data-testid="bench-preview"][data-pending="false"]').waitFor({ timeout: 60_000 });
+  await page.locator('[data-testid="workbench-preview"][data-pending="false"]').waitFor({ timeout: 60_000 });
   await page.locator(farEndTrace).first().waitFor({ timeout: 60_000 });
 }
 

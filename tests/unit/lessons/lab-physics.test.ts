@@ -14,14 +14,20 @@ const farEndMax = (run: GradedRun) => Math.max(...run.result.farEnd);
 const codes = (run: GradedRun) => run.judgement.failures.map((f) => f.code);
 const verdictCodes = (run: GradedRun) => run.result.verdict.reasons.map((r) => r.code);
 
-/** What a failing run must show for each mechanism a mistake names. */
+/**
+ * What a failing run must show for each mechanism a mistake names. The verdict's reasons explain
+ * the judgement that decides the outcome (lib/sim/verdict.ts): why typical pixels misread the run,
+ * or else why it is not guaranteed.
+ */
 const shows: Record<Mechanism, (run: GradedRun, supply: number) => boolean> = {
-  ringing: (run) =>
-    codes(run).some((c) => c === "filtered-ringing" || c === "clamp-current") || verdictCodes(run).some((c) => c.startsWith("ring-")),
+  ringing: (run) => codes(run).includes("clamp-current") || verdictCodes(run).some((c) => c.startsWith("ring-")),
   overshoot: (run) => codes(run).some((c) => c === "overshoot" || c === "clamp-current"),
   "slow-edge": (run) => codes(run).includes("rise-time") || verdictCodes(run).includes("slow-fall"),
-  staircase: (run, supply) => verdictCodes(run).includes("never-high") && run.result.metrics.overshoot < 0.05 && farEndMax(run) < 0.7 * supply,
-  "low-level": (run, supply) => verdictCodes(run).includes("never-high") && farEndMax(run) < 0.7 * supply,
+  staircase: (run, supply) =>
+    verdictCodes(run).some((c) => c === "never-high" || c === "shortened-one" || c === "narrow-pulse") &&
+    run.result.metrics.overshoot < 0.05 &&
+    farEndMax(run) < 0.7 * supply,
+  "low-level": (run, supply) => verdictCodes(run).some((c) => c === "never-high" || c === "high-level-too-low") && run.result.metrics.overshoot < 0.05 * supply,
   timing: (run) => codes(run).includes("timing-margin"),
   "off-spec-cable": (run) => codes(run).includes("cable-spec"),
 };

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { simulateRun } from "@/lib/sim";
-import { buildSimInput, getLab, judgeRun, scoreAttempt, scoreRun, type PassRule, type RunJudgement, type Scoring } from "@/lessons";
+import { buildSimInput, COURSE_CLAMP_CURRENT_LIMIT, getLab, judgeRun, scoreAttempt, scoreRun, type PassRule, type RunJudgement, type Scoring } from "@/lessons";
 
 const scoring: Scoring = {
   fullMarksMargin: { timing: 180e-9, voltage: 1.0 },
@@ -10,7 +10,7 @@ const scoring: Scoring = {
   penaltyPerAttemptBeyond: 3,
   penalty: 5,
 };
-const rule: PassRule = { allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.3 };
+const rule: PassRule = { judgement: "typical", judgementWhy: "a test rule", allBitsDecode: true, minTimingMargin: 120e-9, minVoltageMargin: 0.3 };
 const passed: RunJudgement = { pass: true, failures: [], bitsCorrect: 16, bitsSent: 16 };
 
 describe("scoreRun", () => {
@@ -20,9 +20,10 @@ describe("scoreRun", () => {
     expect(scoreRun(rule, scoring, passed, { timingMargin: 250e-9, voltageMargin: 3 })).toBeCloseTo(100, 9);
   });
 
-  it("credits each margin's progress half each", () => {
-    expect(scoreRun(rule, scoring, passed, { timingMargin: 180e-9, voltageMargin: 0.3 })).toBeCloseTo(80, 9);
+  it("credits the weaker margin's progress: a run never outscores one with more of both", () => {
+    expect(scoreRun(rule, scoring, passed, { timingMargin: 180e-9, voltageMargin: 0.3 })).toBeCloseTo(60, 9);
     expect(scoreRun(rule, scoring, passed, { timingMargin: 150e-9, voltageMargin: 0.65 })).toBeCloseTo(80, 9);
+    expect(scoreRun(rule, scoring, passed, { timingMargin: 150e-9, voltageMargin: 1.0 })).toBeCloseTo(80, 9);
   });
 
   it("gives a failing run partial credit for the bits it got right, below any pass", () => {
@@ -53,24 +54,32 @@ describe("judgeRun on simulated runs", () => {
   const scenario = lab.runs[0].scenario;
   const run = (seriesResistance: number) => simulateRun(buildSimInput(scenario, { seriesResistance }));
 
-  it("passes a matched-below resistor and fails an over-matched one for bits and margins", () => {
-    expect(judgeRun(lab.passRule, 5, run(150)).pass).toBe(true);
+  it("passes a resistor inside the 3.3 V window and fails the ones either side for the reasons the lesson gives", () => {
+    expect(judgeRun(lab.passRule, 5, run(240)).pass).toBe(true);
+    const under = judgeRun(lab.passRule, 5, run(100));
+    expect(under.failures.map((f) => f.code)).toEqual(expect.arrayContaining(["bits-not-decoded", "voltage-margin"]));
+    expect(under.bitsCorrect).toBe(0);
+    // Above Z0: typical pixels read it, but with less than the 0.3 V the rule asks.
     const over = judgeRun(lab.passRule, 5, run(470));
-    expect(over.pass).toBe(false);
-    expect(over.failures.map((f) => f.code)).toEqual(expect.arrayContaining(["bits-not-decoded", "timing-margin", "voltage-margin"]));
-    expect(over.bitsCorrect).toBe(0);
+    expect(over.failures.map((f) => f.code)).toContain("voltage-margin");
+    expect(over.failures.map((f) => f.code)).not.toContain("bits-not-decoded");
+  });
+
+  it("holds every run to the course's one clamp-current limit", () => {
+    const hard = simulateRun(buildSimInput({ ...scenario, cable: "beside-ground" }, { seriesResistance: 0 }));
+    expect(hard.metrics.clampCurrentPeak).toBeGreaterThan(COURSE_CLAMP_CURRENT_LIMIT);
+    expect(judgeRun(lab.passRule, 5, hard).failures.map((f) => f.code)).toContain("clamp-current");
   });
 
   it("applies each optional limit of the rule", () => {
-    const result = run(150);
+    const result = run(240);
     const { metrics } = result;
     const tight: PassRule = {
       ...lab.passRule,
       maxOvershoot: (0.5 * metrics.overshoot) / 5,
       maxRiseTime: 0.5 * metrics.riseTime!,
-      maxClampCurrent: 0.5 * metrics.clampCurrentPeak,
       cableSpec: { minZ0: 80, maxZ0: 120, maxDelayPerMetre: 6e-9, maxCapacitancePerMetre: 70e-12 },
     };
-    expect(judgeRun(tight, 5, result).failures.map((f) => f.code).sort()).toEqual(["cable-spec", "clamp-current", "overshoot", "rise-time"]);
+    expect(judgeRun(tight, 5, result).failures.map((f) => f.code).sort()).toEqual(["cable-spec", "overshoot", "rise-time"]);
   });
 });

@@ -13,7 +13,7 @@ function wave(points: [number, number][]): Waveform {
 
 const ns = 1e-9;
 const us = 1e-6;
-const rule: ReceiverRule = { highLevel: 3.5, lowLevel: 1.5, deglitchTime: 10 * ns, minPulse: 0.15 * us, decisionTime: 0.6 * us };
+const rule: ReceiverRule = { rise: 3.5, fall: 1.5, deglitchTime: 10 * ns, minPulse: 0.15 * us, minGap: 0.15 * us, decisionTime: 0.6 * us };
 const slots = (bits: string): SlotTiming[] =>
   Array.from(bits, (bit, i) => {
     const start = 1 * us + i * 1.25 * us;

@@ -58,50 +58,54 @@ describe("the step budget", () => {
 });
 
 describe("verdicts name the physics", () => {
-  it("passes a clean run with no reasons", () => {
+  it("a clean 5 V run is guaranteed, with no reasons", () => {
     const result = run({ driver: { highVoltage: 5, outputResistance: 20 }, seriesResistance: 33, cable: { kind: "beside-ground", length: 10 } });
     expect(result.decoded).toBe(pattern);
-    expect(result.verdict).toEqual({ pass: true, reasons: [] });
-    expect(result.metrics.bitErrors).toBe(0);
+    expect(result.verdict.outcome).toBe("guaranteed");
+    expect(result.verdict.reasons).toEqual([]);
+    expect(result.verdict.guaranteed.bitErrors).toBe(0);
   });
 
-  it("fails a 3.3 V driver with a large resistor beside ground: the far end never reaches the threshold", () => {
+  it("a 3.3 V driver with a large resistor beside ground: the far end never reaches where typical pixels switch", () => {
     const result = run({
       driver: { highVoltage: 3.3, outputResistance: 30 },
       seriesResistance: 249,
       cable: { kind: "beside-ground", length: 10 },
     });
-    expect(result.verdict.pass).toBe(false);
+    expect(result.verdict.outcome).toBe("fails");
+    const reasons = result.verdict.reasons.filter((r) => r.judgement === "typical");
+    expect(reasons.length).toBeGreaterThan(0);
+    expect(reasons.some((r) => r.code === "never-high" || r.code === "shortened-one")).toBe(true);
+    expect(reasons[0].at?.time).toBeGreaterThan(1e-6);
+  });
+
+  it("a 3.3 V driver behind a near match: typical pixels read it, and the reason it is not guaranteed is the driver's level", () => {
+    const result = run({ driver: { highVoltage: 3.3, outputResistance: 30 }, seriesResistance: 68, cable: { kind: "beside-ground", length: 10 } });
+    expect(result.verdict.outcome).toBe("typical");
     const reason = result.verdict.reasons.find((r) => r.code === "never-high");
-    expect(reason?.message).toContain("never rises above the high threshold");
-    expect(reason?.message).toContain("3.30 V high level sits below that threshold");
-    expect(reason?.at?.bit).toBe(0);
-    expect(reason?.at?.time).toBeGreaterThan(1e-6);
-    // Against a mid-supply threshold the same run would decode: said as a warning.
-    expect(result.metrics.midSupplyVoltageMargin).toBeGreaterThan(0);
-    expect(result.verdict.reasons.some((r) => r.code === "passes-at-mid-supply")).toBe(true);
+    expect(reason?.judgement).toBe("guaranteed");
+    expect(reason?.message).toContain("never rises above the datasheet's high threshold (3.50 V)");
+    expect(reason?.message).toContain("3.30 V high level sits below that level");
   });
 
   it("blames the resistor and the cable capacitance when a 5 V edge is too slow", () => {
     const result = run({ seriesResistance: 2200, cable: { kind: "three-core", length: 20 } });
     const reason = result.verdict.reasons.find((r) => r.code === "never-high");
-    expect(result.verdict.pass).toBe(false);
+    expect(result.verdict.outcome).toBe("fails");
     expect(reason?.message).toContain("the resistor and the cable capacitance make the rising edge too slow");
     expect(reason?.message).toContain("staircase");
   });
 
-  it("warns, without failing, about ringing that the deglitch filter removes", () => {
+  it("blames the wrong-signed reflection for ringing through the band, and warns of a filter set for the run without passing it", () => {
     const input = { driver: { highVoltage: 3.3, outputResistance: 30 }, seriesResistance: 33, cable: { kind: "lone-lead" as const, length: 10 } };
-    const filtered = run(input);
-    expect(filtered.verdict.pass).toBe(true);
-    const warning = filtered.verdict.reasons.find((r) => r.code === "ringing-filtered-low");
-    expect(warning?.severity).toBe("warning");
-
-    const unfiltered = run({ ...input, receiver: { deglitchTime: 0 } });
-    expect(unfiltered.verdict.pass).toBe(false);
+    const unfiltered = run(input);
+    expect(unfiltered.verdict.outcome).toBe("fails");
     const reason = unfiltered.verdict.reasons.find((r) => r.code === "ring-after-rise");
     expect(reason?.message).toContain("the reflection returns with the wrong sign");
-    expect(reason?.at?.time).toBeCloseTo(warning!.at!.time, 12);
+
+    const filtered = run({ ...input, receiver: { deglitchTime: 40e-9 } });
+    expect(filtered.verdict.outcome).toBe("fails");
+    expect(filtered.verdict.reasons.some((r) => r.code.startsWith("ringing-filtered") && r.severity === "warning")).toBe(true);
   });
 
   it("reports the clamp current and overshoot of a hard-driven unterminated line", () => {

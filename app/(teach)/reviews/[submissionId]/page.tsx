@@ -101,13 +101,15 @@ export default async function ReviewPage({ params }: { params: Promise<{ submiss
                     </tr>
                   </tbody>
                 </table>
-                <p className={`mt-4 rounded-lg px-3 py-2 text-sm font-medium ${prediction.pass ? "bg-ok-soft text-ok" : "bg-danger-soft text-danger"}`}>
-                  Verdict: {prediction.pass ? "every bit decodes" : "bits fail to decode"} on a line of {Math.round(prediction.z0)} Ω, {time(prediction.delay)} long.
+                <p className={`mt-4 rounded-lg px-3 py-2 text-sm font-medium ${prediction.outcome === "fails" ? "bg-danger-soft text-danger" : "bg-ok-soft text-ok"}`}>
+                  Simulator verdict: {prediction.summary}, on a line of {Math.round(prediction.z0)} Ω, {time(prediction.delay)} long.
                 </p>
                 {prediction.reasons.length > 0 ? (
                   <ul className="mt-2 list-disc space-y-1 pl-5 text-sm text-ink-soft">
                     {prediction.reasons.slice(0, 3).map((reason, index) => (
-                      <li key={index}>{reason.message}</li>
+                      <li key={index}>
+                        {reason.heading}: {reason.message}
+                      </li>
                     ))}
                   </ul>
                 ) : null}

@@ -34,12 +34,12 @@ function DragPreviewNote({ run }: { run: LiveRun }) {
 }
 
 /**
- * "Try on the bench": the run re-simulated in the browser's worker as the controls move, drawn on
+ * "Try it on the workbench": the run re-simulated in the browser's worker as the controls move, drawn on
  * the scope view, with the lab's pass rule applied to it as a preview. While a control is dragged
  * the worker solves a quicker preview (DRAG_SPAN) so that the drawing keeps up; once it is let go,
  * the full run at grading accuracy, which alone is held against the rule. Grading happens only on submit.
  */
-export function BenchPreview({
+export function WorkbenchPreview({
   input,
   dragging = false,
   rule,
@@ -72,7 +72,7 @@ export function BenchPreview({
   );
 
   return (
-    <div data-testid="bench-preview" data-pending={live.pending}>
+    <div data-testid="workbench-preview" data-pending={live.pending}>
       {live.error ? (
         <p role="alert" className="mb-3 rounded-lg border border-danger/30 bg-danger-soft px-3 py-2 text-sm text-danger">
           The simulator could not run this: {live.error}
@@ -89,7 +89,7 @@ export function BenchPreview({
               data-testid="rule-preview"
             >
               <p className="font-semibold">
-                {judgement.pass ? "✓ On the bench this run meets the lab's rule." : "✗ On the bench this run does not yet meet the lab's rule:"}{" "}
+                {judgement.pass ? "✓ On the workbench this run meets the lab's rule." : "✗ On the workbench this run does not yet meet the lab's rule:"}{" "}
                 <span className="font-normal text-ink-soft">(a preview; only a submitted attempt is graded)</span>
               </p>
               {judgement.failures.length > 0 ? (
