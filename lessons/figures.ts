@@ -9,7 +9,7 @@ import { cableKindSchema } from "./cable-kinds";
  * with an E-series given, the series values (IEC 60063) within min..max.
  *
  * Analytic figures (no simulator): pulse-train, threshold-bands, rc-edge, bounce-diagram, probe-ground.
- * Simulator figures: series-termination, cable-compare — build their input with `figureSimInputs`.
+ * Simulator figures: series-termination, cable-compare, clamp-compare — build their input with `figureSimInputs`.
  */
 
 const seconds = z.number().positive();
@@ -133,6 +133,22 @@ export const cableCompareParamsSchema = z.strictObject({
 });
 
 /**
+ * One run drawn twice: with the pixel's clamp diodes (as every pixel input has them) and without
+ * (the textbook's bounce arithmetic), far ends on shared axes with the guaranteed thresholds and
+ * the typical switching band, and beside them each run's peak, clamp current and verdict.
+ */
+export const clampCompareParamsSchema = z.strictObject({
+  cable: cableKindSchema,
+  length: z.number().positive().max(100),
+  seriesResistance: ohms,
+  highVoltage: volts,
+  outputResistance: ohms,
+  edgeTime: seconds,
+  supplyVoltage: volts,
+  bits,
+});
+
+/**
  * What a passive probe shows of a clean edge: the probe tip capacitance and the ground lead's
  * inductance form a series RLC with the source resistance. Step response of that circuit (edge of
  * `edgeTime`, height `stepVoltage`) against the true edge; the UI labels the ring frequency
@@ -157,6 +173,7 @@ export const figureBlockSchema = z.discriminatedUnion("figure", [
   figureShape("bounce-diagram", bounceDiagramParamsSchema),
   figureShape("series-termination", seriesTerminationParamsSchema),
   figureShape("cable-compare", cableCompareParamsSchema),
+  figureShape("clamp-compare", clampCompareParamsSchema),
   figureShape("probe-ground", probeGroundParamsSchema),
 ]);
 

@@ -81,7 +81,7 @@ export function CableCompareFigure({ params, caption, cables }: { params: Params
                 <th scope="col" className="py-1 pr-3 font-semibold">C′ per metre</th>
                 <th scope="col" className="py-1 pr-3 font-semibold">Delay per metre</th>
                 <th scope="col" className="py-1 pr-3 font-semibold">Overshoot at {length} m</th>
-                <th scope="col" className="py-1 font-semibold">Pixel reads</th>
+                <th scope="col" className="py-1 font-semibold">Simulator verdict</th>
               </tr>
             </thead>
             <tbody>
@@ -95,7 +95,7 @@ export function CableCompareFigure({ params, caption, cables }: { params: Params
                     <td className="py-1 pr-3">{row ? formatQuantity(row.capacitancePerMetre, "F/m") : "—"}</td>
                     <td className="py-1 pr-3">{row ? formatQuantity(row.delayPerMetre, "s/m") : "—"}</td>
                     <td className="py-1 pr-3">{run ? formatVolts(run.metrics.overshoot) : "…"}</td>
-                    <td className="py-1 font-mono">{run ? `${run.decoded}${run.decoded === params.bits ? " ✓" : " ✗"}` : "…"}</td>
+                    <td className="py-1">{run ? run.verdict.summary : "…"}</td>
                   </tr>
                 );
               })}

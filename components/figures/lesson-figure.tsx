@@ -2,6 +2,7 @@ import { cableCatalogue, eSeriesValues } from "@/lib/sim";
 import type { FigureBlock } from "@/lessons";
 import { BounceDiagramFigure } from "./bounce-diagram-figure";
 import { CableCompareFigure } from "./cable-compare-figure";
+import { ClampCompareFigure } from "./clamp-compare-figure";
 import { ProbeGroundFigure } from "./probe-ground-figure";
 import { PulseTrainFigure } from "./pulse-train-figure";
 import { RcEdgeFigure } from "./rc-edge-figure";
@@ -24,6 +25,8 @@ export function LessonFigure({ block }: { block: FigureBlock }) {
       return <BounceDiagramFigure params={block.params} caption={block.caption} />;
     case "probe-ground":
       return <ProbeGroundFigure params={block.params} caption={block.caption} />;
+    case "clamp-compare":
+      return <ClampCompareFigure params={block.params} caption={block.caption} />;
     case "series-termination": {
       const slider = block.params.slider;
       const resistorValues = "series" in slider ? eSeriesValues(slider.series, slider.min, slider.max) : [];

@@ -35,6 +35,7 @@ export function ScopeChart({ run, points, window, yDomain, markers, selectedBit,
   const vdd = run.receiver.supplyVoltage;
   const high = run.receiver.highThreshold * vdd;
   const low = run.receiver.lowThreshold * vdd;
+  const typical = run.verdict.typical.band;
   const span = window.to - window.from;
   const slotWidth = run.timing.bitPeriod;
   const slots = run.bits
@@ -72,7 +73,16 @@ export function ScopeChart({ run, points, window, yDomain, markers, selectedBit,
       <ReferenceArea y1={yDomain[0]} y2={low} fill={bandStyle.low} fillOpacity={0.09} ifOverflow="hidden" />
       <ReferenceLine y={high} stroke={bandStyle.high} strokeWidth={1} label={{ value: `high ${high.toFixed(2)}`, position: "right", fontSize: 11, fill: bandStyle.high }} />
       <ReferenceLine y={low} stroke={bandStyle.low} strokeWidth={1} label={{ value: `low ${low.toFixed(2)}`, position: "right", fontSize: 11, fill: bandStyle.low }} />
-      <ReferenceLine y={vdd / 2} stroke={bandStyle.low} strokeDasharray="2 4" label={{ value: `mid ${(vdd / 2).toFixed(2)}`, position: "right", fontSize: 11, fill: "#5f686e" }} />
+      <ReferenceArea
+        y1={typical.lowest}
+        y2={typical.highest}
+        fill={bandStyle.slot}
+        fillOpacity={0.12}
+        stroke={bandStyle.slot}
+        strokeDasharray="2 4"
+        ifOverflow="hidden"
+        label={{ value: `typical ${typical.lowest.toFixed(2)}–${typical.highest.toFixed(2)}`, position: "insideRight", fontSize: 11, fill: "#5f686e" }}
+      />
       {slots.map((slot) => {
         const wrong = slot.bit.received !== String(slot.bit.sent);
         const selected = slot.index === selectedBit;

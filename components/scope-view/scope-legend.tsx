@@ -21,7 +21,11 @@ export function ScopeLegend() {
       ))}
       <li className="flex items-center gap-1.5">
         <span className="inline-block h-3 w-5 rounded-sm border border-line" style={{ background: `${bandStyle.high}22` }} aria-hidden="true" />
-        <span>shaded bands: where the pixel is guaranteed to read high (top) or low (bottom)</span>
+        <span>shaded bands: where every pixel that meets its datasheet reads high (top) or low (bottom)</span>
+      </li>
+      <li className="flex items-center gap-1.5">
+        <span className="inline-block h-3 w-5 rounded-sm border border-dashed border-line" style={{ background: `${bandStyle.slot}1f` }} aria-hidden="true" />
+        <span>dotted band in the middle: where typical pixels switch (an assumed range)</span>
       </li>
       <li className="flex items-center gap-1.5">
         <span className="font-semibold text-danger" aria-hidden="true">

@@ -1,6 +1,7 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
 import { GUARANTEED_WHY } from "../judgement-notes";
+import { RECEIVER_DEFAULTS } from "@/lib/sim";
 import { buffer5v } from "../drivers";
 
 export const lab = {
@@ -10,7 +11,9 @@ export const lab = {
 A controller output feeds a chain of pixels over a short lead with ground beside the data conductor. Someone has changed its pulse timing: as delivered, the high time of a 0 is 0.55 µs and of a 1 is 0.65 µs, both within 50 ns of the pixel's 0.6 µs decision time.
 
 1. Answer the two questions about the frame budget.
-2. Set the high time of a 0 and of a 1 so that the first pixel decodes every bit of the colour word, with at least 120 ns of timing margin on every bit.
+2. Set the high time of a 0 and of a 1 so that the first pixel decodes every bit of the colour word, with at least 120 ns of timing margin on every bit, on every pixel that meets its datasheet. Every pulse also needs a low after it: a pixel cannot tell one bit from the next across a low shorter than ${RECEIVER_DEFAULTS.minGap * 1e9} ns.
+
+${GUARANTEED_WHY}
 
 The bit period stays at 1.25 µs. A high time too close to the whole period leaves almost no low time before the next bit starts; watch the scope view for what that does.
 `,

@@ -1,5 +1,8 @@
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
+import { RECEIVER_MODEL_MARKDOWN, receiverLevels } from "../receiver-model";
+
+const typical5 = receiverLevels(5);
 
 export const lesson = {
   slug: "logic-levels",
@@ -102,13 +105,15 @@ The high margin is **negative**. Even with a perfect wire, the driver cannot rea
       markdown: `
 ## "But it works on my bench"
 
-Installers wire 3.3 V controllers straight into 5 V pixels every day, and often it works. Both facts are true, and the reason is the undefined band. The pixel's input really switches somewhere around mid-supply, say near 2.5 V for a 5 V part. Against that *actual* switching point, the 3.3 V driver has about
+Installers wire 3.3 V controllers straight into 5 V pixels every day, and often it works. Both facts are true, and the reason is the undefined band. The pixel's input really switches somewhere inside it, usually not far from mid-supply. A part that switches exactly at mid-supply, 2.5 V for a 5 V part, would give the 3.3 V driver
 
 3.3 V − 2.5 V = 0.8 V
 
-of margin, which is plenty on a short lead. The course simulator reports this figure as the **mid-supply margin** next to the guaranteed one, so you can see both.
+of margin. But parts differ, so the course does not judge against one imagined part.
+${RECEIVER_MODEL_MARKDOWN}
+A 3.3 V driver into a 5 V pixel can therefore at best **work on typical pixels**: its high level sits ${(3.3 - typical5.topFall).toFixed(3)} V above the level (${typical5.topFall.toFixed(3)} V) where a pixel switching at the top of the typical band reads a fall, and ${(3.3 - typical5.highestRise).toFixed(3)} V above where it reads a rise (${typical5.highestRise.toFixed(3)} V), but ${(typical5.high - 3.3).toFixed(1)} V below the guaranteed ${typical5.high.toFixed(1)} V. That is fine on many benches and still not a promise.
 
-The trouble is that 0.8 V is not a promise. The next batch of pixels may switch at 2.9 V. A warm strip may switch a little higher. The supply may be set to 5.25 V, which lifts the guaranteed threshold to 0.7 × 5.25 V = 3.675 V and the real switching point with it. And once the signal travels down a few metres of cable, the edge slows and rings, and the 0.8 V has to absorb that too. The run that worked on the bench, on a short lead with one batch of pixels, fails on site on a long cable with another. That is exactly the kind of intermittent fault that wastes days.
+The trouble is that even the 0.8 V is not a promise. The next batch of pixels may switch at 2.9 V. A warm strip may switch a little higher. The supply may be set to 5.25 V, which lifts the guaranteed threshold to 0.7 × 5.25 V = 3.675 V and the real switching point with it. And once the signal travels down a few metres of cable, the edge slows and rings, and the 0.8 V has to absorb that too. The run that worked on the bench, on a short lead with one batch of pixels, fails on site on a long cable with another. That is exactly the kind of intermittent fault that wastes days.
 
 Later in the course (lesson 6) you will see that on some cables the far end of a long run briefly rises *above* the driver's level, and that this can lift a 3.3 V signal over a 5 V pixel's threshold. That effect is real and useful, but it depends on the cable and the resistor. It is not a reason to ignore the levels.
 
@@ -213,23 +218,24 @@ Good practice that protects the margin (common practice of the trade):
 
 - A pixel reads **regions**: high above 0.7 × VDD, low below 0.3 × VDD, nothing guaranteed between. For a 5 V pixel: 3.5 V and 1.5 V.
 - **Noise margin** is what the driver delivers beyond the threshold. A 5 V driver into a 5 V pixel has 1.5 V in both states; a 3.3 V driver has −0.2 V in the high state.
-- A 3.3 V driver "works" because the real switching point sits near mid-supply, 0.8 V below 3.3 V; that margin is luck, not design.
+- Every run is judged two ways: it **works on every pixel that meets its datasheet** (guaranteed), it **works on typical pixels, not guaranteed**, or it **fails**.
+- A 3.3 V driver "works" because typical parts switch well below 3.3 V; it can never be guaranteed into a 5 V pixel. That is luck, not design.
 - A **5 V buffer with TTL-level inputs** at the controller restores large margins at every step.
 - Thresholds are relative to the pixel's ground; supply current in a shared ground conductor moves it, and with it the margin.
 
 ## The lab
 
-The workbench shows a controller with two outputs to choose from: its own 3.3 V pin wired direct, and the same signal through a 5 V level shifter. The run to the first pixel is short, and the series resistor fitted suits its cable, so the far end is a clean copy of the driver's level. Pick the driver that decodes every bit with at least 0.5 V of voltage margin, and answer the two questions about its margins. Try the other option too, on the bench preview: the scope view shows where the far end settles and the decoded bits show what the pixel makes of it.
+The workbench shows a controller with two outputs to choose from: its own 3.3 V pin wired direct, and the same signal through a 5 V level shifter. The run to the first pixel is short, and the series resistor fitted suits its cable, so the far end is a clean copy of the driver's level. Pick the driver that decodes every bit with at least 0.5 V of voltage margin, and answer the two questions about its margins. Try the other option too, on the workbench: the scope view shows where the far end settles and the decoded bits show what the pixel makes of it.
 `,
     },
     {
       kind: "check",
       id: "mid-supply-margin",
       prompt:
-        "A 5 V pixel's input actually switches at mid-supply. How much margin does a 3.3 V high have against that real switching point?",
+        "Take a 5 V pixel whose input happens to switch exactly at mid-supply, with no hysteresis. How much margin does a 3.3 V high have against that switching point?",
       answer: { value: 0.8, unit: "V", tolerance: 0.02 },
       hint: "Mid-supply is VDD / 2.",
-      explanation: "5.0 V / 2 = 2.5 V; 3.3 V − 2.5 V = 0.8 V. It is real, but no datasheet guarantees it.",
+      explanation: "5.0 V / 2 = 2.5 V; 3.3 V − 2.5 V = 0.8 V. It is real for that one part, but no datasheet guarantees it: the next part may switch anywhere up to 3.5 V.",
     },
   ],
   lab,

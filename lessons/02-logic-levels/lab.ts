@@ -13,6 +13,8 @@ A controller whose logic runs at 3.3 V feeds a 5 V pixel over a short lead with 
 
 Choose the driver: the controller's 3.3 V pin wired direct, or the same signal through a 5 V level shifter. The pixel must decode every bit with at least 0.5 V of voltage margin against its guaranteed thresholds (0.7 × VDD high, 0.3 × VDD low).
 
+${GUARANTEED_WHY}
+
 Then answer the two questions about the margins.
 `,
   runs: [

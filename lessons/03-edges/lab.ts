@@ -1,6 +1,7 @@
 import type { LabInput } from "../schema";
 import { scoringPolicy } from "../scoring-policy";
 import { GUARANTEED_WHY } from "../judgement-notes";
+import { COURSE_CLAMP_CURRENT_LIMIT } from "../pass-rule";
 import { buffer5v } from "../drivers";
 
 export const lab = {
@@ -9,9 +10,11 @@ export const lab = {
   brief: `
 A 5 V buffered output (20 Ω) feeds the first pixel over a short lead with ground beside the data conductor. Fit a series resistor from the E12 series (IEC 60063) so that:
 
-- every bit decodes with at least 120 ns of timing margin and 0.5 V of voltage margin;
+- on every pixel that meets its datasheet, every bit decodes with at least 120 ns of timing margin and 0.5 V of voltage margin;
 - the far-end rise time (10–90 %) is no more than 120 ns;
-- the current through the pixel's clamp diodes never exceeds 10 mA.
+- the current through the pixel's clamp diodes never exceeds the course's limit, ${(COURSE_CLAMP_CURRENT_LIMIT * 1e3).toFixed(0)} mA (half the input's rated injection current; lesson 5 says why).
+
+${GUARANTEED_WHY}
 
 Too little resistance and the edge overshoots the pixel's supply, driving current into its clamp diodes; too much and the edge crawls. Use the RC rule of this lesson (rise ≈ 2.2 × R × C, with C the cable's capacitance plus the pixel's 5 pF) to find the top of the window before you try it.
 `,

@@ -1,5 +1,22 @@
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
+import { cableCatalogue, OUTCOME_WORDS, RECEIVER_DEFAULTS } from "@/lib/sim";
+import { controllerPin3v3 } from "../drivers";
+import { COURSE_CLAMP_CURRENT_LIMIT } from "../pass-rule";
+import { RECEIVER_MODEL_MARKDOWN, receiverLevels } from "../receiver-model";
+
+const typical5 = receiverLevels(5);
+const milliamps = (amps: number) => `${(amps * 1e3).toFixed(0)} mA`;
+
+/** The classic failing run, by this lesson's bounce arithmetic (no clamps). */
+const classic = (() => {
+  const series = 33;
+  const source = controllerPin3v3.outputResistance + series;
+  const z0 = cableCatalogue["lone-lead"].z0;
+  const gamma = (source - z0) / (source + z0);
+  const arrivals = [1, 2, 3, 4].map((n) => controllerPin3v3.highVoltage * (1 - gamma ** n));
+  return { driver: controllerPin3v3.outputResistance, series, source, z0, gamma, arrivals };
+})();
 
 export const lesson = {
   slug: "reflections",
@@ -155,7 +172,7 @@ A fourth case, one wave at a time: the 3.3 V controller pin (30 Ω, from the cou
 
 **When has it settled?** After n arrivals the far end is 3.3 V × |Γ_s|^n from its final level. Within 1 % (our choice, not a standard) needs n > ln 0.01 / ln 0.459 = 5.9: the sixth arrival, at 11 × T_d = 402 ns. A 0 bit is high for only 400 ns (lesson 1), so the falling edge starts its own, upside-down bounce diagram before this one has died; the line is linear and the two simply add.
 
-**Does it decode?** The lowest plateau, 2.60 V, is far above the 1.5 V low threshold, so every bit decodes. But it is only 0.1 V above mid-supply, where real inputs usually switch (lesson 2). In the simulator the pixel's 5 pF input reflects a small spike at each step, one of which pulls the trace briefly to about 2.47 V, and the verdict warns of a mid-supply dip.
+**Does it decode?** The 2.60 V plateau lies inside the band where pixels switch (lesson 2). A pixel that switches anywhere above it, up to the 3.5 V its datasheet allows, sees the pulse start at 36.5 ns, end at 110 ns and start again at 183 ns: two pulses in one bit slot. Typical pixels switch up to ${typical5.typicalTop.toFixed(2)} V and read the fall at ${typical5.topFall.toFixed(3)} V, so they misread it too: the workbench says "${OUTCOME_WORDS.fails}".
 `,
     },
     {
@@ -177,25 +194,57 @@ A fourth case, one wave at a time: the 3.3 V controller pin (30 Ω, from the cou
 Neither happens in full, because the pixel's input has **clamp diodes** (lesson 3): once the pin rises above its supply by a diode drop, roughly 5.7 V on a 5 V pixel (taking 0.7 V as the textbook silicon forward drop), the upper diode conducts and holds it there. A falling edge's undershoot is caught the same way by the lower diode, at about −0.7 V. The clamps do two things:
 
 1. They cap the voltage, and with it some of the ringing: the energy the clamp absorbs does not reflect back.
-2. They carry current into the pixel's supply or ground pin, outside the pixel's normal operation. That current is not free: it heats a tiny structure that was designed for occasional static discharge, not for eight hundred thousand hits a second.
+2. They carry current into the pixel's supply or ground pin, outside the pixel's normal operation. Heat is not the issue: the pulses are a few nanoseconds long, so the average current is tiny. What limits it is the input's rated **injection current**, the most current the clamp structure may carry before it upsets the chip around it (latch-up, disturbed neighbouring inputs). Logic datasheets state it as an absolute maximum input clamp current, ±${milliamps(RECEIVER_DEFAULTS.clampCurrentRating)} for standard CMOS logic (JEDEC JESD7A, from memory); pixel datasheets often give none. The course assumes the same ${milliamps(RECEIVER_DEFAULTS.clampCurrentRating)} for a pixel input and, as common practice derates absolute maximums, holds every lab to half of it: ${milliamps(COURSE_CLAMP_CURRENT_LIMIT)}.
 
 A useful estimate of the clamp current comes from looking back into the line from the far end. For the first arrival, the line looks like a source of 2 × V_launched behind a resistance Z0 (a textbook Thevenin equivalent of a line at its end). With the pin held at 5.7 V:
 
 - case 2: I ≈ (6.39 V − 5.7 V) / 93.8 Ω ≈ 7 mA;
 - case 1: I ≈ (9.46 V − 5.7 V) / 351 Ω ≈ 11 mA, and it keeps coming back each cycle of the ringing.
 
-The course simulator models the diodes with the exponential diode law and reports the peak clamp current of every run.
+The course simulator models the diodes with the exponential diode law and reports the peak clamp current of every run; case 1's estimate is already above the course's ${milliamps(COURSE_CLAMP_CURRENT_LIMIT)}.
 
 ## Ringing that the pixel counts
 
-Overshoot by itself is a stress problem. Ringing becomes a *data* problem when it re-crosses a threshold. Recall the receiver rule (lesson 1 and the workbench): a pulse starts when the far end rises through the high threshold and ends when it next falls through the low threshold. The gap between the two thresholds is a hysteresis band; ringing inside it does nothing. Two kinds of ringing cross it:
+Overshoot by itself is a stress problem. Ringing becomes a *data* problem when it turns back through the point where a pixel switches. Recall from lesson 2 how the course judges a run:
+${RECEIVER_MODEL_MARKDOWN}
+Two kinds of ringing break a run:
 
-- **During a high**, the far end rings down below the low threshold (1.5 V on a 5 V pixel). In case 1 it drops to 1.02 V at 110 ns. The pixel sees the pulse end after about 70 ns, and then a new one start when the ringing comes back up: the slot holds two pulses, or one glitch and one pulse, and decodes as "x".
-- **During a low**, after the falling edge, the far end rings up above the high threshold (3.5 V). The pixel sees a pulse where none was sent.
+- **During a high**, the far end rings back down through a switching point: the pixel sees the pulse end early and a new one start when the ringing comes back up. The slot holds two pulses, or a glitch and a pulse, and the bit is lost.
+- **During a low**, after the falling edge, the far end rings back up through a switching point: the pixel sees a pulse where none was sent.
 
-A real pixel input ignores very short disturbances; the course simulator models this with a **deglitch time** (10 ns by default, an assumption because no published figure exists). Crossings shorter than that neither end nor start a pulse. The verdict still warns you about ringing that crosses a threshold, because a deglitch filter you cannot see is not something to rely on.
+### The classic failing run
 
-The **voltage margin** the simulator reports measures how close you came: during each high, how far the peak rises above the high threshold; during each low, how far the highest ringing stays below the low threshold. The run's margin is the smallest over all its bits. A negative low-period margin means ringing has climbed out of the guaranteed-low region into the undefined band.
+The trade's best-known failure (common practice of the trade, lesson 6): a 3.3 V controller pin (${classic.driver} Ω) with ${classic.series} Ω in series, into 10 m of lone lead, to a 5 V pixel. R_src = ${classic.source} Ω against Z0 = ${classic.z0.toFixed(0)} Ω, so Γ_s = ${classic.gamma.toFixed(3).replace("-", "−")}. Without clamps, the bounce arithmetic gives the far end after each arrival:
+
+| arrival n | far end, V × (1 − Γ_s^n) |
+| --- | --- |
+${classic.arrivals.map((v, i) => `| ${i + 1} | ${v.toFixed(2)} V |`).join("\n")}
+
+The first arrival lifts the 3.3 V driver over the 3.5 V threshold, and the second drops it to ${classic.arrivals[1].toFixed(2)} V: below every point where a typical pixel reads a fall (the lowest is ${typical5.lowestFall.toFixed(3)} V). Every pulse breaks. The first arrival stays below the roughly 5.7 V where the upper clamp conducts hard, so here the clamps change little: with them or without, the workbench says "${OUTCOME_WORDS.fails}". The figure draws both.
+`,
+    },
+    {
+      kind: "figure",
+      figure: "clamp-compare",
+      caption:
+        "The classic failing run (3.3 V pin, 33 Ω, 10 m of lone lead, 5 V pixel) with the pixel's clamp diodes and without: both far ends fall back through the typical band after the first arrival.",
+      params: { cable: "lone-lead", length: 10, seriesResistance: 33, highVoltage: 3.3, outputResistance: 30, edgeTime: 4e-9, supplyVoltage: 5, bits: "0110" },
+    },
+    {
+      kind: "figure",
+      figure: "clamp-compare",
+      caption:
+        "Case 1 (5 V buffer, no resistor, 10 m of lone lead) with the clamp diodes and without: the clamps hold the first arrival near 5.7 V and the ringing never comes back through the band, at the cost of current into the pixel's input.",
+      params: { cable: "lone-lead", length: 10, seriesResistance: 0, highVoltage: 5, outputResistance: 20, edgeTime: 3e-9, supplyVoltage: 5, bits: "0110" },
+    },
+    {
+      kind: "text",
+      markdown: `
+### When the clamps rescue the data
+
+Case 1 looks worse on paper: a 5 V buffer with no resistor on the same lead, the arithmetic swinging between about 9.5 V and 1 V. But every real pixel input has its clamp diodes. They catch the first arrival near 5.7 V and absorb most of its energy, so what travels back is far smaller than the arithmetic assumes, and the far end no longer swings down through the band. On the workbench this run **works on every pixel that meets its datasheet**, while driving more current into the clamps than the course's limit allows. The clamps rescue the data at the expense of the input's injection rating; a series resistor (lesson 6) fixes both.
+
+The **voltage margin** of each judgement measures how close a run came: how far the far end stays above the switching points during each high and below them during each low, at the worst switching point of the judgement's band. The run's margin is the smallest over all its bits.
 
 ## What decides the ringing
 
@@ -247,7 +296,7 @@ In the bounce diagram every voltage of the fourth case's table depends only on t
 - Returning waves reflect again at the driver with Γ_s = (R_src − Z0) / (R_src + Z0).
 - The far end after n arrivals is V × (1 − Γ_s^n): ringing when R_src < Z0, a clean step when R_src = Z0, a staircase when R_src > Z0.
 - Ringing has a period of four one-way delays; overshoot is caught by the pixel's clamp diodes, at the cost of current through them.
-- Ringing that re-crosses a threshold makes the pixel count pulses that were never sent.
+- Ringing that turns back through a switching point makes the pixel lose pulses or count pulses that were never sent; the clamp diodes can absorb some of it, at the cost of current into the input.
 
 ## The lab
 

@@ -13,7 +13,9 @@ Fit a series resistor from the E24 series (IEC 60063) so that:
 
 - the far end overshoots its settled level by no more than 10 % of the pixel's supply (0.5 V);
 - the far end's rise time (10–90 %) is no more than 60 ns;
-- every bit decodes with at least 120 ns of timing margin and 0.5 V of voltage margin.
+- on every pixel that meets its datasheet, every bit decodes with at least 120 ns of timing margin and 0.5 V of voltage margin.
+
+${GUARANTEED_WHY}
 
 Predict first: what source resistance makes Γ_s = (R_src − Z0) / (R_src + Z0) small? How far below Z0 may it go before the first arrival, V × (1 − Γ_s), overshoots by more than 0.5 V? How far above before the staircase takes more than one round trip to pass 90 %?
 `,

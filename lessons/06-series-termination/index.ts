@@ -1,5 +1,40 @@
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
+import { cableCatalogue, RECEIVER_DEFAULTS, type CableKind } from "@/lib/sim";
+import { receiverLevels } from "../receiver-model";
+import { PIN_3V3_WINDOW, zFraction } from "../source-window";
+
+const levels = receiverLevels(5);
+const minPulseNs = Math.round(RECEIVER_DEFAULTS.minPulse * 1e9);
+const PIN = 30;
+const window = { ...PIN_3V3_WINDOW, highestGamma: (PIN_3V3_WINDOW.upper - 1) / (PIN_3V3_WINDOW.upper + 1), deepestGamma: (PIN_3V3_WINDOW.lower - 1) / (PIN_3V3_WINDOW.lower + 1) };
+const ohms = (value: number) => `${Math.max(0, value).toFixed(0)} Ω`;
+
+const fieldRule: Partial<Record<CableKind, string>> = { "lone-lead": "≈ 250 Ω: inside", "beside-ground": "≈ 33 Ω: at the lower edge" };
+const windowRows = (["lone-lead", "beside-ground", "twisted-pair", "coax-75", "three-core"] as const).map((kind) => {
+  const z0 = cableCatalogue[kind].z0;
+  return { label: cableCatalogue[kind].label, z0, from: ohms(window.lower * z0 - PIN), to: ohms(window.upper * z0 - PIN), fieldRule: fieldRule[kind] ?? "" };
+});
+
+/** The four field-rule cases at 3.3 V by the bounce arithmetic: first and second arrival at the open end. */
+const cases = [
+  { label: "Beside ground with 250 Ω", kind: "beside-ground" as const, series: 250 },
+  { label: "Beside ground with 33 Ω", kind: "beside-ground" as const, series: 33 },
+  { label: "Lone lead with 250 Ω", kind: "lone-lead" as const, series: 250 },
+  { label: "Lone lead with 33 Ω", kind: "lone-lead" as const, series: 33 },
+].map(({ label, kind, series }) => {
+  const z0 = cableCatalogue[kind].z0;
+  const gamma = (PIN + series - z0) / (PIN + series + z0);
+  const arrival = (n: number) => 3.3 * (1 - gamma ** n);
+  const gammaText = `${gamma > 0 ? "+" : "−"}${Math.abs(gamma).toFixed(2)}`;
+  const story =
+    gamma > 0
+      ? `No overshoot: the far end climbs a staircase from below, ${[1, 2, 3, 4].map((n) => `${arrival(n).toFixed(2)} V`).join(", ")}, … towards 3.3 V, so slowly that a 1 bit's pulse starts too late to read as a 1 at the top of the typical band. That is the "slow, rounded edge" installers see on a scope; at 3.3 V it is fatal.`
+      : arrival(2) < levels.lowestFall
+        ? `The first arrival reaches ${arrival(1).toFixed(2)} V, but the second falls to ${arrival(2).toFixed(2)} V, below every level where a typical pixel reads a fall: every pulse breaks (lesson 5's classic failing run).`
+        : `First arrival ${arrival(1).toFixed(2)} V, ${(arrival(1) - levels.highestRise).toFixed(2)} V above the highest typical rise level; second arrival ${arrival(2).toFixed(2)} V, ${(arrival(2) - levels.topFall).toFixed(2)} V above the highest typical fall level. It works on typical pixels.`;
+  return { label, gammaText, story };
+});
 
 export const lesson = {
   slug: "series-termination",
@@ -67,25 +102,24 @@ So each half of the rule is "choose the resistor that roughly matches the cable"
 
 Here is the part the rule of thumb leaves out. The pattern above is *decisive*, the difference between working and not working, mainly when the driver's high level sits near or below the pixel's high threshold. The everyday case is a 3.3 V controller pin feeding a 5 V pixel whose guaranteed high threshold is 3.5 V (lesson 2).
 
-On a long run, the far end of the line eventually settles at the driver's level, 3.3 V, which is below 3.5 V. The only thing that can lift the pixel's input over its threshold is the **first arrival**, the doubled incident wave:
+On a long run the far end settles at the driver's level, 3.3 V, below 3.5 V: such a run can never **work on every pixel that meets its datasheet**. The most it can do is **work on typical pixels**, which switch somewhere between ${levels.typicalBottom.toFixed(2)} V and ${levels.typicalTop.toFixed(2)} V (lesson 2). A typical pixel switching at the top of that range reads a rise only above ${levels.highestRise.toFixed(3)} V and a fall below ${levels.topFall.toFixed(3)} V. The settled 3.3 V clears the rise level by just ${(3.3 - levels.highestRise).toFixed(3)} V; what gives the run real margin is the **first arrival**, the doubled incident wave:
 
 V_far(1) = 2 × V × Z0 / (R_src + Z0) = V × (1 − Γ_s).
 
-For this to exceed 3.5 V with V = 3.3 V we need 1 − Γ_s > 3.5 / 3.3 = 1.061, so Γ_s must be **negative**, below −0.061. That means R_src < 0.886 × Z0: the source must be a little *below* a match. A perfect match delivers exactly 3.3 V, which fails.
+For it to clear ${levels.highestRise.toFixed(3)} V by 0.3 V with V = 3.3 V, we need 1 − Γ_s ≥ ${((levels.highestRise + 0.3) / 3.3).toFixed(3)}, so Γ_s must be **negative**, below ${window.highestGamma.toFixed(3).replace("-", "−")}: R_src ≤ ${zFraction(window.upper)} × Z0. The source must sit a little *below* a match. A perfect match delivers exactly 3.3 V.
 
-Now look at the two cables again with 3.3 V:
+Now look at the four cases again with 3.3 V (the bounce arithmetic of lesson 5, no clamps):
 
-- **Beside ground with 250 Ω**: Γ_s = +0.50. The far end climbs a staircase from below, 3.3 × (1 − 0.5^n): 1.65 V, 2.48 V, 2.89 V, … towards 3.3 V. It **never crosses 3.5 V**. Every bit decodes as "x". That is the "slow, rounded edge" installers see on a scope, and with a 3.3 V driver it is fatal.
-- **Beside ground with 33 Ω**: Γ_s = −0.20. First arrival 3.3 × 1.20 = 3.95 V. Above 3.5 V by 0.45 V: the pixel reads the pulse.
-- **Lone lead with 250 Ω**: Γ_s = −0.11. First arrival 3.3 × 1.11 = 3.67 V. Over the threshold, by 0.17 V. It works, but with a thin margin.
-- **Lone lead with 33 Ω**: Γ_s = −0.70. The first arrival tries for 5.6 V (the clamp diodes catch it near 5.7 V), then the ring swings back down. In the linear picture the dip during the high reaches 3.3 × (1 − 0.49) = 1.70 V and the ring-back during the low reaches 3.3 × 0.49 = 1.60 V, above the 1.5 V low threshold. The clamps absorb some of that energy, so in the course simulator the ringing crosses the thresholds only briefly, for less than the pixel's deglitch time. The bits may decode on your bench and fail on a pixel with a shorter filter. "Poorly" is the right word.
+${cases.map((c) => `- **${c.label}**: Γ_s = ${c.gammaText}. ${c.story}`).join("\n")}
+
+The second arrival matters as much as the first: after the doubled wave lifts the far end, the wave returning from the driver pulls it down by V × Γ_s², and it must not fall back through ${levels.topFall.toFixed(3)} V, where a typical pixel switching at the top of its range reads the end of the pulse.
 `,
     },
     {
       kind: "figure",
       figure: "series-termination",
       caption:
-        "A 3.3 V controller pin (30 Ω) drives 10 m of lone lead into a 5 V pixel. Step through the E24 resistors: below about 40 Ω the far end rings through the thresholds; above about 280 Ω the first arrival no longer reaches 3.5 V.",
+        "A 3.3 V controller pin (30 Ω) drives 10 m of lone lead into a 5 V pixel. Step through the E24 resistors and watch the verdict: with small resistors the far end rings back down through the typical band; near a match the first arrival no longer lifts the far end clear of it.",
       params: {
         cable: "lone-lead",
         length: 10,
@@ -102,7 +136,7 @@ Now look at the two cables again with 3.3 V:
       kind: "figure",
       figure: "series-termination",
       caption:
-        "The same pin and pixel on 10 m of data beside ground. Now the working values are small: above about 50 Ω the first arrival no longer clears the 3.5 V threshold, and above about 64 Ω the far end climbs a staircase towards 3.3 V that never reaches it.",
+        "The same pin and pixel on 10 m of data beside ground. Now the working values are small: near and above a match the far end climbs a staircase towards 3.3 V, too slowly for the 1 bits to read as 1 where a typical pixel switches high in its range.",
       params: {
         cable: "beside-ground",
         length: 10,
@@ -122,42 +156,37 @@ Now look at the two cables again with 3.3 V:
         "A 3.3 V pin (30 Ω) drives a 351 Ω lone lead through 250 Ω. What voltage does the first arrival reach at the open far end?",
       answer: { value: (2 * 3.3 * 351) / (280 + 351), unit: "V", tolerance: 0.02 },
       hint: "V_far(1) = 2 × V × Z0 / (R_src + Z0).",
-      explanation: "2 × 3.3 V × 351 / (280 + 351) = 2316.6 / 631 ≈ 3.67 V: over a 5 V pixel's 3.5 V threshold by only 0.17 V.",
+      explanation: "2 × 3.3 V × 351 / (280 + 351) = 2316.6 / 631 ≈ 3.67 V: over a 5 V pixel's 3.5 V threshold by only 0.17 V, and for a few nanoseconds; what the run can count on is the 0.54 V it clears where typical pixels read a rise.",
     },
     {
       kind: "text",
       markdown: `
 ## The 3.3 V design window
 
-The analysis gives a window with two edges, one from each failure.
+The analysis gives a window with two edges, one from each failure, for typical pixels with a margin m of 0.3 V.
 
-**Upper edge (the first arrival must clear the threshold with margin m):** 3.3 × (1 − Γ_s) ≥ 3.5 + m. With m = 0.3 V this gives Γ_s ≤ −0.152, which is R_src ≤ 0.737 × Z0.
+**Upper edge (the first arrival must clear the highest typical rise level with margin m):** 3.3 × (1 − Γ_s) ≥ ${levels.highestRise.toFixed(3)} + m. This gives Γ_s ≤ ${window.highestGamma.toFixed(3).replace("-", "−")}, which is R_src ≤ ${zFraction(window.upper)} × Z0.
 
-**Lower edge (the ringing must not climb back out of the low region with margin m):** in the linear picture the ring-back after a falling edge peaks near 3.3 × Γ_s². Asking 3.3 × Γ_s² ≤ 1.5 − m = 1.2 V gives |Γ_s| ≤ 0.60, which is R_src ≥ 0.248 × Z0.
+**Lower edge (the second arrival must stay above the highest typical fall level with margin m):** 3.3 × (1 − Γ_s²) ≥ ${levels.topFall.toFixed(3)} + m gives |Γ_s| ≤ ${(-window.deepestGamma).toFixed(3)}, which is R_src ≥ ${zFraction(window.lower)} × Z0.
 
-So, at 3.3 V into a 5 V pixel, **R_src between about a quarter and three-quarters of Z0**. Subtract the driver's 30 Ω:
+So, at 3.3 V into a 5 V pixel, **R_src between about ${zFraction(window.lower)} and ${zFraction(window.upper)} of Z0**: a little below a match. Subtract the driver's 30 Ω:
 
-| cable | Z0 | R_s window (0.3 V margin) | field rule |
+| cable | Z0 | R_s window (0.3 V margin, typical pixels) | field rule |
 | --- | --- | --- | --- |
-| lone lead | 351 Ω | about 57 Ω to 229 Ω | 250 Ω: just outside the 0.3 V margin, still decodes |
-| data beside ground | 93.8 Ω | 0 Ω to about 39 Ω | 33 Ω: inside |
-| twisted pair | 99.4 Ω | 0 Ω to about 43 Ω | |
-| 75 Ω coax | 75.0 Ω | 0 Ω to about 25 Ω | |
-| three-core | 70.3 Ω | 0 Ω to about 22 Ω | |
+${windowRows.map((row) => `| ${row.label} | ${row.z0.toFixed(1)} Ω | ${row.from} to ${row.to} | ${row.fieldRule} |`).join("\n")}
 
-In this arithmetic the windows for lone lead and data beside ground **do not overlap**, and in the simulator they meet at most at one value on the edge of both, with no margin to spare on either. That is the sentence to take away: **no single resistor suits every cable** at 3.3 V. A controller sold with a 33 Ω resistor on its outputs is right for a cable with a ground beside the data and wrong for a lone lead, and vice versa for one fitted with 270 Ω.
+The windows for lone lead and data beside ground **do not overlap**. That is the sentence to take away: **no single resistor suits every cable** at 3.3 V. A controller sold with a 33 Ω resistor on its outputs is right for a cable with a ground beside the data and wrong for a lone lead, and vice versa for one fitted with 270 Ω.
 
-The course simulator agrees with this arithmetic closely on data beside ground. On the lone lead it finds the window a little wider at the bottom (about 39 Ω at 10 m), because the clamp diodes absorb part of the ringing that the linear formula ignores. That is a gift of the pixel's protection circuit, not something to design for.
+The arithmetic leaves out the pixel's input capacitance, the clamp diodes and the cable's loss; the workbench has them all, and on these runs it lands within one E24 step of the window (the course's tests hold it to that). And a window for typical pixels is still not a guarantee: on every cable, a level shifter to 5 V (lesson 2) is what makes the run **work on every pixel that meets its datasheet**.
 `,
     },
     {
       kind: "check",
       id: "beside-ground-limit",
-      prompt:
-        "At 3.3 V into a 5 V pixel, the first arrival clears 3.5 V only while R_src < 0.886 × Z0. For data beside ground (Z0 = 93.8 Ω) and a 30 Ω pin, what is the largest series resistor that still lets the pixel see a high at all?",
-      answer: { value: 0.886 * 93.8 - 30, unit: "ohm", tolerance: 0.03 },
-      hint: "Largest R_src = 0.886 × Z0; then subtract the pin's 30 Ω.",
-      explanation: "0.886 × 93.8 Ω = 83.1 Ω; 83.1 Ω − 30 Ω ≈ 53 Ω. With zero margin, that is; for 0.3 V of margin the limit is about 39 Ω.",
+      prompt: `At 3.3 V into a 5 V pixel, the first arrival clears the highest typical rise level by 0.3 V only while R_src ≤ ${zFraction(window.upper)} × Z0. For data beside ground (Z0 = 93.8 Ω) and a 30 Ω pin, what is the largest series resistor that keeps that margin?`,
+      answer: { value: window.upper * 93.8 - 30, unit: "ohm", tolerance: 0.03 },
+      hint: `Largest R_src = ${zFraction(window.upper)} × Z0; then subtract the pin's 30 Ω.`,
+      explanation: `${zFraction(window.upper)} × 93.8 Ω = ${(window.upper * 93.8).toFixed(1)} Ω; ${(window.upper * 93.8).toFixed(1)} Ω − 30 Ω ≈ ${(window.upper * 93.8 - 30).toFixed(0)} Ω. Above it the far end still reaches 3.3 V, but with less than 0.3 V to spare at the top of the typical band.`,
     },
     {
       kind: "text",
@@ -166,17 +195,19 @@ The course simulator agrees with this arithmetic closely on data beside ground. 
 
 Repeat the argument with a 5 V driver (a level shifter, lesson 2) into the same 5 V pixel. Now the far end settles at 5 V, well above 3.5 V. The first arrival no longer has to do the work alone: if it falls short, the staircase climbs past the threshold a round trip or two later. The pixel still reads the pulse; it just reads it late.
 
-How late does not matter, as long as the *falling* edge is delayed by about the same amount, and with thresholds at 0.7 and 0.3 of a 5 V swing it is (lesson 3): the staircase down crosses 1.5 V after as many round trips as the staircase up needed to cross 3.5 V. The pulse width survives. So with a 5 V driver most 10 m runs decode across the whole range of 33 Ω to 249 Ω, on every cable in the catalogue.
+How late matters less than you might fear, as long as the *falling* edge is delayed by about the same amount, and with thresholds at 0.7 and 0.3 of a 5 V swing it is (lesson 3): the staircase down crosses 1.5 V after as many round trips as the staircase up needed to cross 3.5 V. The pulse width largely survives. So with a 5 V driver every cable of the catalogue **works on every pixel that meets its datasheet** at 10 m with 33 Ω, and the lone lead, near its match, still does with 249 Ω.
+
+With 249 Ω on the low-impedance cables the staircase is slow enough to cost the guarantee. Its steps cross the band over several round trips, and a 0 bit's fall starts while the last steps of its rise are still arriving: the two staircases add, and the far end falls in steps that turn a little back up on the way. A pixel switching just there could see an extra edge. Those runs still **work on typical pixels**; the three-core cable, slowest of all, fails.
 
 The limit comes back only when the staircase becomes too slow to finish within a 0 bit. Count it: the far end after n arrivals is 5 × (1 − Γ_s^n), which passes 3.5 V when Γ_s^n < 0.3. The nth arrival comes (2n − 1) one-way delays after the switch. The driver's fall, 0.4 µs after the switch for a 0 bit, reaches the far end one delay later, at 0.4 µs + T_d. The crossing must come before that, and early enough to leave a pulse the pixel can measure.
 
 ### Worked example: three-core, 15 m, 5 V
 
 - one-way delay: T_d = 15 m × 5.58 ns/m = 83.7 ns; the fall of a 0 bit reaches the far end at 400 ns + 83.7 ns ≈ 484 ns
-- with 330 Ω: R_src = 350 Ω, Γ_s = (350 − 70.3) / (350 + 70.3) = 0.665; 0.665² = 0.44, 0.665³ = 0.29 < 0.3, so the third arrival crosses, at 5 × 83.7 ns ≈ 419 ns. The pulse starts only 65 ns before the far end turns down: it decodes, with a thin timing margin.
+- with 330 Ω: R_src = 350 Ω, Γ_s = (350 − 70.3) / (350 + 70.3) = 0.665; 0.665² = 0.44, 0.665³ = 0.29 < 0.3, so the third arrival crosses, at 5 × 83.7 ns ≈ 419 ns. The pulse starts only 65 ns before the far end turns down: shorter than the ${minPulseNs} ns a pixel needs to count a pulse at all, so the 0 bits are lost.
 - with 390 Ω: R_src = 410 Ω, Γ_s = (410 − 70.3) / (410 + 70.3) = 0.707; 0.707³ = 0.35, 0.707⁴ = 0.25, so only the fourth arrival would cross, at 7 × 83.7 ns ≈ 586 ns. The fall has arrived at 484 ns. A 0 bit never clears the threshold: the 0s decode as "x".
 
-This is the same physics as lesson 3's large RC (15 m of three-core is 1,190 pF), and the reason the high-capacitance three-core cable and runs of 15 m and more can still fail at a few hundred ohms even with a 5 V driver. This is the **opposite pull** of a long, high-capacitance, low-impedance cable: the ringing argument wants R_src up near Z0, which is small; anything much bigger, and the cable's capacitance makes the edge too slow.
+On the workbench the limit lies lower still, because the falling staircase also takes round trips to get down through the band (step through the resistors in the figure of this lesson with a three-core cable in mind, or try it in the capstone). This is the same physics as lesson 3's large RC (15 m of three-core is 1,190 pF), and the reason the high-capacitance three-core cable and runs of 15 m and more can still fail at a few hundred ohms even with a 5 V driver. This is the **opposite pull** of a long, high-capacitance, low-impedance cable: the ringing argument wants R_src up near Z0, which is small; anything much bigger, and the cable's capacitance makes the edge too slow.
 `,
     },
     {
@@ -186,7 +217,7 @@ This is the same physics as lesson 3's large RC (15 m of three-core is 1,190 pF)
         "A 5 V driver with R_src = 350 Ω drives 15 m of three-core cable (Z0 = 70.3 Ω, 5.58 ns/m). The third arrival is the first above 3.5 V. How long after the driver switches does it arrive?",
       answer: { value: 5 * 15 * 5.58e-9, unit: "ns", tolerance: 0.02 },
       hint: "The nth arrival comes (2n − 1) one-way delays after the switch.",
-      explanation: "One way: 15 m × 5.58 ns/m = 83.7 ns. Third arrival: 5 × 83.7 ns ≈ 419 ns. The 0 bit's fall reaches the far end at 400 ns + 83.7 ns ≈ 484 ns, so the pixel sees a pulse of barely 65 ns before the far end turns down.",
+      explanation: `One way: 15 m × 5.58 ns/m = 83.7 ns. Third arrival: 5 × 83.7 ns ≈ 419 ns. The 0 bit's fall reaches the far end at 400 ns + 83.7 ns ≈ 484 ns, so the pixel sees a pulse of barely 65 ns before the far end turns down: shorter than the ${minPulseNs} ns it needs to count a pulse.`,
     },
     {
       kind: "text",
@@ -196,16 +227,16 @@ This is the same physics as lesson 3's large RC (15 m of three-core is 1,190 pF)
 Put it all together and the rule of thumb gets its fine print:
 
 1. It is **series termination**: ≈ 250 Ω is near a match for a lone lead (351 Ω with a 30 Ω driver), ≈ 33 Ω is near a match for a cable with ground beside the data (94 Ω). Choose by the cable's Z0, not by habit.
-2. It is **decisive at 3.3 V into a 5 V pixel**, where only the doubled first arrival clears the threshold. Then the source must be a little below the match (R_src between about 0.25 and 0.74 of Z0 for a 0.3 V margin), and a resistor meant for another cable fails outright.
-3. With a **5 V driver** most runs of about 10 m decode across 33 Ω to 249 Ω; the choice then mostly sets the overshoot and clamp current, not whether bits arrive.
+2. It is **decisive at 3.3 V into a 5 V pixel**, which can at best work on typical pixels. Then the source must be a little below the match (R_src between about ${zFraction(window.lower)} and ${zFraction(window.upper)} of Z0 for a 0.3 V margin), and a resistor meant for another cable fails outright. A level shifter makes the run guaranteed.
+3. With a **5 V driver** runs of about 10 m are guaranteed with resistors up to about a match; well above it, a slow staircase costs the guarantee on low-impedance cables. The choice then mostly sets the overshoot and clamp current, and how much margin the guarantee keeps.
 4. **Long, high-capacitance runs** (three-core, 15 m and more) can still fail at a few hundred ohms even at 5 V, because the staircase is too slow for a 0 bit: it must clear the threshold before the driver's fall reaches the far end.
-5. Up to **2–3 m**, one-way delays are around 10–15 ns; a little ringing dies out long before the pixel decides, and nearly anything works.
+5. Up to **2–3 m**, one-way delays are around 10–15 ns, and with a 5 V driver nearly anything works. At 3.3 V the simulator is less kind to a short *lone lead* with a small resistor: the lead's inductance and the pixel's few picofarads ring for tens of nanoseconds, through the typical band. A short cable with ground beside the data, or the resistor the window asks for, settles it.
 
 The course simulator is a teaching model. Before an installation is signed off, the run is confirmed on the bench with an oscilloscope at the first pixel (lesson 8).
 
 ## The lab
 
-A 3.3 V controller pin drives a long run of a lone data lead to a 5 V pixel. Choose an E24 resistor that decodes every bit with at least 0.3 V of voltage margin and 120 ns of timing margin, without ringing that crosses a threshold (even if the pixel's deglitch filter would hide it) and with less than 5 mA driven into the pixel's clamp diodes. Use the window arithmetic first, then confirm it on the workbench. Your variant's length differs from your neighbour's; the window barely moves with length on this cable, and it is worth asking yourself why.
+A 3.3 V controller pin drives a long run of a lone data lead to a 5 V pixel. Choose an E24 resistor with which the run works on typical pixels, every bit with at least 0.3 V of voltage margin and 120 ns of timing margin, and with the clamp current under the course's limit. A 3.3 V pin cannot make it guaranteed, and the lab says so. Use the window arithmetic first, then confirm it on the workbench. Your variant's length differs from your neighbour's; the window barely moves with length on this cable, and it is worth asking yourself why.
 `,
     },
   ],

@@ -1,6 +1,26 @@
 import type { LessonInput } from "../schema";
 import { bench } from "./bench";
 import { lab } from "./lab";
+import { receiverLevels } from "../receiver-model";
+import { PIN_3V3_WINDOW, zFraction } from "../source-window";
+
+const levels = receiverLevels(5);
+const signed = (x: number) => `${x < 0 ? "−" : "+"}${Math.abs(x).toFixed(3)}`;
+
+/** A 3.3 V pin (30 Ω) through `series` into an open line of `z0`: lesson 5's first two arrivals. */
+function pinRun(series: number, z0: number) {
+  const source = 30 + series;
+  const gamma = (source - z0) / (source + z0);
+  return { series, source, gamma, first: 3.3 * (1 - gamma), second: 3.3 * (1 - gamma ** 2) };
+}
+
+const runA = {
+  ...pinRun(47, 99.4),
+  windowFrom: PIN_3V3_WINDOW.lower * 99.4,
+  windowTo: PIN_3V3_WINDOW.upper * 99.4,
+  middle: ((PIN_3V3_WINDOW.lower + PIN_3V3_WINDOW.upper) / 2) * 99.4,
+};
+const runC = pinRun(47, 93.8);
 
 export const lesson = {
   slug: "designing-a-run",
@@ -37,16 +57,16 @@ From the catalogue (lesson 4) or the cable's datasheet: Z0, delay per metre and 
 
 ### Step 4: fix the driver
 
-If the pixels run at 5 V, use a 5 V driver: a level shifter at the controller (lesson 2). It turns the resistor choice from a knife edge into a wide window (lesson 6). If you must drive 5 V pixels from a 3.3 V pin, the run only works through the doubled first arrival, and the resistor window is narrow.
+If the pixels run at 5 V, use a 5 V driver: a level shifter at the controller (lesson 2). It turns the resistor choice from a knife edge into a wide window (lesson 6). If you must drive 5 V pixels from a 3.3 V pin, the run can at best work on typical pixels, only through the doubled first arrival, and the resistor window is narrow.
 
 ### Step 5: compute the resistor window
 
 - **5 V driver into 5 V pixels**: aim for R_src ≈ Z0 (R_s = Z0 − R_out), which removes the ringing; anything from about half to about twice that decodes on ordinary lengths. Check the staircase (step 6) if R_src is well above Z0.
-- **3.3 V driver into 5 V pixels**: R_src between about 0.25 × Z0 and 0.74 × Z0 for 0.3 V of voltage margin (lesson 6). Below it the ringing crosses the thresholds; above it the first arrival falls short of 3.5 V.
+- **3.3 V driver into 5 V pixels**: R_src between about ${zFraction(PIN_3V3_WINDOW.lower)} × Z0 and ${zFraction(PIN_3V3_WINDOW.upper)} × Z0 for 0.3 V of voltage margin on typical pixels (lesson 6). Below it the ringing falls back through the typical band; above it the first arrival no longer lifts the far end clear of it. No resistor makes it guaranteed; write "works on typical pixels" in the installation file and recommend a level shifter.
 
 ### Step 6: check the slow side
 
-Wherever R_src is larger than Z0, the far end climbs a staircase: after n arrivals it stands at V × (1 − Γ_s^n), and the nth arrival comes (2n − 1) × T_d after the switch. A 0 bit's fall reaches the far end at 0.4 µs + T_d; the pixel threshold must be crossed well before that, and with a 3.3 V driver it must be crossed by the first arrival or not at all.
+Wherever R_src is larger than Z0, the far end climbs a staircase: after n arrivals it stands at V × (1 − Γ_s^n), and the nth arrival comes (2n − 1) × T_d after the switch. A 0 bit's fall reaches the far end at 0.4 µs + T_d; the pixel threshold must be crossed well before that, and with a 3.3 V driver the first arrival must do it.
 
 ### Step 7: choose the standard value, then confirm on the bench
 
@@ -56,11 +76,10 @@ Pick the E-series value (IEC 60063) nearest the middle of the window, not neares
     {
       kind: "check",
       id: "twisted-pair-limit",
-      prompt:
-        "A 3.3 V pin (30 Ω) drives one pair of a twisted-pair cable (Z0 = 99.4 Ω) into a 5 V pixel. Using the upper edge R_src ≤ 0.737 × Z0 (0.3 V margin), what is the largest series resistor you may fit?",
-      answer: { value: 0.737 * 99.4 - 30, unit: "ohm", tolerance: 0.03 },
+      prompt: `A 3.3 V pin (30 Ω) drives one pair of a twisted-pair cable (Z0 = 99.4 Ω) into a 5 V pixel. Using the upper edge R_src ≤ ${zFraction(PIN_3V3_WINDOW.upper)} × Z0 (0.3 V margin on typical pixels), what is the largest series resistor you may fit?`,
+      answer: { value: PIN_3V3_WINDOW.upper * 99.4 - 30, unit: "ohm", tolerance: 0.03 },
       hint: "Largest R_src first, then subtract the pin's own resistance.",
-      explanation: "0.737 × 99.4 Ω = 73.3 Ω; minus 30 Ω gives about 43 Ω. E24 values up to 43 Ω qualify; 20 Ω to 27 Ω sit near the middle of the window.",
+      explanation: `${zFraction(PIN_3V3_WINDOW.upper)} × 99.4 Ω = ${(PIN_3V3_WINDOW.upper * 99.4).toFixed(1)} Ω; minus 30 Ω gives about ${(PIN_3V3_WINDOW.upper * 99.4 - 30).toFixed(0)} Ω. The lower edge is ${zFraction(PIN_3V3_WINDOW.lower)} × 99.4 Ω − 30 Ω ≈ ${(PIN_3V3_WINDOW.lower * 99.4 - 30).toFixed(0)} Ω, so 47 Ω sits near the middle.`,
     },
     {
       kind: "text",
@@ -72,9 +91,9 @@ A shop display has one controller with 3.3 V outputs and three strips of 5 V pix
 ### Run A: 12 m of twisted pair, 3.3 V pin direct
 
 - Line: Z0 = 99.4 Ω, 5.20 ns/m; T_d = 12 × 5.20 ns = 62.4 ns; C = 12 × 52.3 pF ≈ 628 pF.
-- Window at 3.3 V: R_src from 0.248 × 99.4 = 24.7 Ω to 0.737 × 99.4 = 73.3 Ω, so R_s from 0 Ω to 43 Ω. The middle of the window is R_src ≈ 49 Ω, R_s ≈ 19 Ω.
-- Choice: 22 Ω (E24). R_src = 52 Ω; Γ_s = (52 − 99.4) / (52 + 99.4) = −0.313.
-- First arrival: 3.3 × 1.313 = 4.33 V, 0.83 V over 3.5 V. Ring-back after a fall: about 3.3 × 0.313² = 0.32 V, 1.18 V under 1.5 V. Both margins are healthy.
+- Window at 3.3 V (typical pixels, 0.3 V margin): R_src from ${zFraction(PIN_3V3_WINDOW.lower)} × 99.4 = ${runA.windowFrom.toFixed(1)} Ω to ${zFraction(PIN_3V3_WINDOW.upper)} × 99.4 = ${runA.windowTo.toFixed(1)} Ω, so R_s from ${(runA.windowFrom - 30).toFixed(0)} Ω to ${(runA.windowTo - 30).toFixed(0)} Ω. The middle of the window is R_src ≈ ${runA.middle.toFixed(0)} Ω, R_s ≈ ${(runA.middle - 30).toFixed(0)} Ω.
+- Choice: ${runA.series} Ω (E24). R_src = ${runA.source} Ω; Γ_s = (${runA.source} − 99.4) / (${runA.source} + 99.4) = ${signed(runA.gamma)}.
+- First arrival: 3.3 × (1 − Γ_s) = ${runA.first.toFixed(2)} V, ${(runA.first - levels.highestRise).toFixed(2)} V over the highest level where a typical pixel reads a rise. Second arrival: 3.3 × (1 − Γ_s²) = ${runA.second.toFixed(2)} V, ${(runA.second - levels.topFall).toFixed(2)} V over the highest level where it reads a fall. Both margins clear 0.3 V: the run works on typical pixels. It is not guaranteed; a level shifter would make it so.
 
 ### Run B: 18 m of data beside ground, through a 5 V level shifter
 
@@ -86,27 +105,27 @@ The installer fits a one-direction 5 V buffer at the controller for the longest 
 
 ### Run C: 2.5 m of data beside ground, 3.3 V pin direct
 
-- T_d = 2.5 × 5.58 ns ≈ 14 ns. A short run: reflections die out long before the pixel decides, and "nearly anything works" (lesson 6). The 3.3 V driver still needs its first arrival above 3.5 V: R_s ≤ 39 Ω for 0.3 V of margin.
-- Choice: 33 Ω, the same as a beside-ground run of any length.
+- T_d = 2.5 × 5.58 ns ≈ 14 ns. A short run: reflections settle quickly. The 3.3 V driver still needs the window of lesson 6: R_s from ${(PIN_3V3_WINDOW.lower * 93.8 - 30).toFixed(0)} Ω to ${(PIN_3V3_WINDOW.upper * 93.8 - 30).toFixed(0)} Ω for 0.3 V of margin on typical pixels.
+- Choice: ${runC.series} Ω, near the middle, the same as a beside-ground run of any length.
 
 Writing the three results in a table for the installation file is part of the job:
 
-| run | cable | length | driver | resistor | predicted first arrival |
-| --- | --- | --- | --- | --- | --- |
-| A | twisted pair | 12 m | 3.3 V pin | 22 Ω | 4.33 V |
-| B | data beside ground | 18 m | 5 V buffer | 68 Ω | 5.16 V |
-| C | data beside ground | 2.5 m | 3.3 V pin | 33 Ω | 3.95 V |
+| run | cable | length | driver | resistor | predicted first arrival | promise |
+| --- | --- | --- | --- | --- | --- | --- |
+| A | twisted pair | 12 m | 3.3 V pin | ${runA.series} Ω | ${runA.first.toFixed(2)} V | works on typical pixels |
+| B | data beside ground | 18 m | 5 V buffer | 68 Ω | 5.16 V | works on every pixel that meets its datasheet |
+| C | data beside ground | 2.5 m | 3.3 V pin | ${runC.series} Ω | ${runC.first.toFixed(2)} V | works on typical pixels |
 `,
     },
     {
       kind: "figure",
       figure: "series-termination",
       caption:
-        "Run A as designed: a 3.3 V pin, 22 Ω and twisted pair into a 5 V pixel. Stretch the run and watch the first arrival and the margins: the resistor window hardly depends on length, but loss and every imperfection the model leaves out grow with it.",
+        "Run A as designed: a 3.3 V pin, 47 Ω and twisted pair into a 5 V pixel. Stretch the run and watch the first arrival and the margins: the resistor window hardly depends on length, but loss and every imperfection the model leaves out grow with it.",
       params: {
         cable: "twisted-pair",
         length: 12,
-        seriesResistance: 22,
+        seriesResistance: 47,
         highVoltage: 3.3,
         outputResistance: 30,
         edgeTime: 4e-9,
@@ -165,7 +184,7 @@ Everything so far is **single-ended** signalling: one data conductor, its voltag
 
 - **Ground offsets grow with distance and current.** The pixel reads the data against its own ground. Over tens of metres, with supply currents flowing somewhere in the ground system, the two ends' grounds drift apart by tenths of a volt or more, straight out of the noise margin (lesson 2).
 - **Noise pickup grows with length.** Every metre beside a mains cable or a switching supply adds a little.
-- **The 3.3 V window closes.** The first arrival is the only thing that clears the threshold, and the smallest loss or mismatch eats the margin.
+- **The 3.3 V window closes.** The first arrival is all that lifts the far end clear of where typical pixels switch, and the smallest loss or mismatch eats the margin.
 
 For a 5 V driver on a good cable, trade practice puts the comfortable limit of a single-ended run somewhere around 10 to 20 metres; beyond that installers reach for other tools (common practice of the trade, not a standard). There are two.
 

@@ -93,3 +93,25 @@ export function decodeWaveform(wave: Waveform, settings: DecodeSettings): { deco
   });
   return { decoded: bits.map((bit) => bit.received).join(""), bits };
 }
+
+/**
+ * The judgements of docs/simulator.md ("The receiver: two judgements") by brute force: the run
+ * decodes as sent at every switching point s of the band, stepped every `step` volts, each read
+ * with rise level s + h/2 and fall level s − h/2. With no hysteresis, `edgeBump` (V) stands in for
+ * it, as the simulator ignores turns smaller than that on an edge.
+ */
+export function decodesAcrossBand(
+  wave: Waveform,
+  settings: DecodeSettings,
+  sent: string,
+  band: { lowest: number; highest: number; hysteresis: number },
+  options: { step: number; edgeBump: number },
+): boolean {
+  const half = Math.max(band.hysteresis, options.edgeBump) / 2;
+  const vdd = settings.supplyVoltage;
+  for (let s = band.lowest; s <= band.highest + 1e-9; s += options.step) {
+    const at = { ...settings, highThreshold: (s + half) / vdd, lowThreshold: (s - half) / vdd };
+    if (decodeWaveform(wave, at).decoded !== sent) return false;
+  }
+  return true;
+}

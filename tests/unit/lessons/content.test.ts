@@ -77,7 +77,7 @@ describe("the course", () => {
     const used = new Set(course.lessons.flatMap((l) => l.blocks.flatMap((b) => (b.kind === "figure" ? [b.figure] : []))));
     expect([...used].sort()).toEqual([...FIGURE_IDS].sort());
     expect(FIGURE_IDS.length).toBeGreaterThanOrEqual(4);
-    expect(FIGURE_IDS.length).toBeLessThanOrEqual(7);
+    expect(FIGURE_IDS.length).toBeLessThanOrEqual(8);
   });
 });
 

@@ -3,7 +3,8 @@
  * the labs (the lessons cite it as their source). Each case names the lesson that makes the claim.
  */
 import { describe, expect, it } from "vitest";
-import { CABLE_KINDS, cableCatalogue, parseSimInput, simulateRun, type CableKind, type SimResult } from "@/lib/sim";
+import { CABLE_KINDS, cableCatalogue, eSeriesValues, parseSimInput, simulateRun, type CableKind, type SimResult } from "@/lib/sim";
+import { PIN_3V3_WINDOW } from "@/lessons/source-window";
 import { buffer5v, controllerPin3v3 } from "@/lessons/drivers";
 
 const BITS = "0100110101100010";
@@ -20,69 +21,91 @@ function run(options: { volts: number; cable: CableKind; length: number; seriesR
 }
 
 const decodes = (result: SimResult) => result.decoded === BITS;
+const outcome = (result: SimResult) => result.verdict.outcome;
 const codes = (result: SimResult) => result.verdict.reasons.map((r) => r.code);
+const window3v3 = (z0: number) => ({ from: PIN_3V3_WINDOW.lower * z0 - 30, to: PIN_3V3_WINDOW.upper * z0 - 30 });
+const E24 = eSeriesValues("E24", 10, 1000);
+/** Meets lesson 6's 3.3 V criterion on the workbench: works on typical pixels with 0.3 V of margin. */
+const typicalWithMargin = (result: SimResult) => result.verdict.typical.pass && result.verdict.typical.voltageMargin >= 0.3;
 
 describe("lesson 6: the field rule at 3.3 V into a 5 V pixel, 10 m", () => {
-  it("lone lead: about 33 Ω rings through the thresholds and into the clamps", () => {
+  it("lone lead: about 33 Ω fails, typical pixels misread it (lesson 5's classic failing run)", () => {
     const result = run({ volts: 3.3, cable: "lone-lead", length: 10, seriesResistance: 33 });
-    expect(codes(result).some((c) => c.startsWith("ringing-filtered") || c.startsWith("ring-"))).toBe(true);
-    expect(result.metrics.clampCurrentPeak).toBeGreaterThan(5e-3);
+    expect(outcome(result)).toBe("fails");
+    expect(codes(result).some((c) => c.startsWith("ring-"))).toBe(true);
   });
 
-  it("lone lead: 150 Ω decodes with 0.3 V to spare, and about 250 Ω still decodes on a thin margin", () => {
-    const middle = run({ volts: 3.3, cable: "lone-lead", length: 10, seriesResistance: 150 });
-    expect(decodes(middle)).toBe(true);
-    expect(middle.metrics.voltageMargin).toBeGreaterThan(0.3);
-    const fieldValue = run({ volts: 3.3, cable: "lone-lead", length: 10, seriesResistance: 240 });
-    expect(decodes(fieldValue)).toBe(true);
-    expect(fieldValue.metrics.voltageMargin).toBeLessThan(0.3);
+  it("lone lead: about 250 Ω works on typical pixels with 0.3 V to spare, and is not guaranteed", () => {
+    const result = run({ volts: 3.3, cable: "lone-lead", length: 10, seriesResistance: 240 });
+    expect(outcome(result)).toBe("typical");
+    expect(typicalWithMargin(result)).toBe(true);
   });
 
-  it("lone lead: a near match (330 Ω) delivers 3.3 V and never a guaranteed high", () => {
-    expect(codes(run({ volts: 3.3, cable: "lone-lead", length: 10, seriesResistance: 330 }))).toContain("never-high");
+  it("beside ground: about 250 Ω fails on typical pixels (the staircase), about 33 Ω works on them", () => {
+    expect(outcome(run({ volts: 3.3, cable: "beside-ground", length: 10, seriesResistance: 240 }))).toBe("fails");
+    expect(outcome(run({ volts: 3.3, cable: "beside-ground", length: 10, seriesResistance: 33 }))).toBe("typical");
   });
 
-  it("beside ground: about 33 Ω decodes, about 250 Ω never clears 3.5 V", () => {
-    const small = run({ volts: 3.3, cable: "beside-ground", length: 10, seriesResistance: 33 });
-    expect(decodes(small)).toBe(true);
-    expect(small.metrics.voltageMargin).toBeGreaterThan(0.3);
-    const large = run({ volts: 3.3, cable: "beside-ground", length: 10, seriesResistance: 240 });
-    expect(codes(large)).toContain("never-high");
-    expect(Math.max(...large.farEnd)).toBeLessThan(3.5);
+  it("no 3.3 V run into a 5 V pixel is guaranteed, on any cable, with any E24 resistor", () => {
+    for (const cable of ["lone-lead", "beside-ground"] as const) {
+      for (const seriesResistance of E24.filter((_, i) => i % 4 === 0)) {
+        expect(run({ volts: 3.3, cable, length: 10, seriesResistance }).verdict.guaranteed.pass, `${cable} ${seriesResistance} Ω`).toBe(false);
+      }
+    }
+  });
+
+  it.each(CABLE_KINDS.map((kind) => [kind]))("%s: the workbench's window is the arithmetic's within one E24 step at each edge", (cable) => {
+    const { from, to } = window3v3(cableCatalogue[cable].z0);
+    const passing = E24.filter((r) => typicalWithMargin(run({ volts: 3.3, cable, length: 10, seriesResistance: r })));
+    const inside = E24.filter((r) => r >= from && r <= to);
+    expect(passing.length).toBeGreaterThan(0);
+    const below = E24.filter((r) => r < from);
+    const above = E24.filter((r) => r > to);
+    // Every passing value lies inside the arithmetic's window or one E24 step beyond an edge.
+    for (const r of passing) expect(r >= (below.at(-1) ?? 0) && r <= (above[0] ?? Infinity), `${r} Ω`).toBe(true);
+    // The middle of the arithmetic's window passes.
+    const middle = inside[Math.floor(inside.length / 2)];
+    if (middle !== undefined) expect(passing).toContain(middle);
   });
 
   it("the lone-lead and beside-ground windows do not overlap", () => {
-    const ok = (cable: CableKind, seriesResistance: number) => {
-      const result = run({ volts: 3.3, cable, length: 10, seriesResistance });
-      return decodes(result) && result.metrics.voltageMargin >= 0.3;
-    };
-    const e12 = [10, 12, 15, 18, 22, 27, 33, 39, 47, 56, 68, 82, 100, 120, 150, 180, 220, 270, 330];
-    const lone = e12.filter((r) => ok("lone-lead", r) && !codes(run({ volts: 3.3, cable: "lone-lead", length: 10, seriesResistance: r })).some((c) => c.startsWith("ringing-filtered")));
-    const beside = e12.filter((r) => ok("beside-ground", r));
-    expect(lone.length).toBeGreaterThan(3);
-    expect(beside.length).toBeGreaterThan(3);
-    const shared = lone.filter((r) => beside.includes(r));
-    expect(shared.length).toBeLessThanOrEqual(1);
-    for (const r of shared) {
-      expect(r).toBe(Math.min(...lone));
-      expect(r).toBe(Math.max(...beside));
-    }
+    const ok = (cable: CableKind, seriesResistance: number) => typicalWithMargin(run({ volts: 3.3, cable, length: 10, seriesResistance }));
+    const lone = E24.filter((r) => r >= 100 && ok("lone-lead", r));
+    const beside = E24.filter((r) => r <= 100 && ok("beside-ground", r));
+    expect(lone.length).toBeGreaterThan(1);
+    expect(beside.length).toBeGreaterThan(1);
+    expect(Math.max(...beside)).toBeLessThan(Math.min(...lone));
+    const { to: besideTo } = window3v3(cableCatalogue["beside-ground"].z0);
+    const { from: loneFrom } = window3v3(cableCatalogue["lone-lead"].z0);
+    expect(besideTo).toBeLessThan(loneFrom);
+  });
+
+  it("up to 2–3 m at 3.3 V, a short lone lead with a small resistor still rings through the typical band, and beside ground with 33 Ω works", () => {
+    expect(outcome(run({ volts: 3.3, cable: "lone-lead", length: 2, seriesResistance: 33 }))).toBe("fails");
+    expect(outcome(run({ volts: 3.3, cable: "beside-ground", length: 2, seriesResistance: 33 }))).toBe("typical");
   });
 });
 
 describe("lesson 6: a 5 V driver tolerates much more", () => {
-  it.each(CABLE_KINDS.map((kind) => [kind]))("%s, 10 m: decodes at 33 Ω and at 249 Ω", (cable) => {
-    expect(decodes(run({ volts: 5, cable, length: 10, seriesResistance: 33 }))).toBe(true);
-    expect(decodes(run({ volts: 5, cable, length: 10, seriesResistance: 249 }))).toBe(true);
+  it.each(CABLE_KINDS.map((kind) => [kind]))("%s, 10 m: works on every pixel that meets its datasheet with 33 Ω", (cable) => {
+    expect(outcome(run({ volts: 5, cable, length: 10, seriesResistance: 33 }))).toBe("guaranteed");
   });
 
-  it("three-core, 15 m: 330 Ω decodes on a thin timing margin, 390 Ω loses the 0 bits", () => {
-    const thin = run({ volts: 5, cable: "three-core", length: 15, seriesResistance: 330 });
-    expect(decodes(thin)).toBe(true);
-    expect(thin.metrics.timingMargin!).toBeLessThan(120e-9);
-    const slow = run({ volts: 5, cable: "three-core", length: 15, seriesResistance: 390 });
-    expect(slow.bits.filter((b) => b.sent === 0).some((b) => b.received === "x")).toBe(true);
-    expect(slow.bits.filter((b) => b.sent === 1).every((b) => b.received === "1")).toBe(true);
+  it("with 249 Ω the lone lead is still guaranteed, the low-impedance cables only typical, and three-core fails", () => {
+    expect(outcome(run({ volts: 5, cable: "lone-lead", length: 10, seriesResistance: 249 }))).toBe("guaranteed");
+    for (const cable of ["beside-ground", "twisted-pair", "coax-75"] as const) {
+      expect(outcome(run({ volts: 5, cable, length: 10, seriesResistance: 249 })), cable).toBe("typical");
+    }
+    expect(outcome(run({ volts: 5, cable: "three-core", length: 10, seriesResistance: 249 }))).toBe("fails");
+  });
+
+  it("three-core, 15 m: 330 Ω and 390 Ω lose the 0 bits, and the limit lies lower still", () => {
+    for (const seriesResistance of [330, 390]) {
+      const result = run({ volts: 5, cable: "three-core", length: 15, seriesResistance });
+      expect(outcome(result)).toBe("fails");
+      expect(result.bits.filter((b) => b.sent === 0).some((b) => b.received !== "0")).toBe(true);
+    }
+    expect(outcome(run({ volts: 5, cable: "three-core", length: 15, seriesResistance: 270 }))).toBe("fails");
   });
 });
 
@@ -153,19 +176,10 @@ describe("lesson 5: the fourth case, 3.3 V pin with 100 Ω into 10 m of lone lea
     for (let n = 6; n <= 8; n += 1) expect(Math.abs(plateau(result, n, edgeTime) - 3.3), `arrival ${n}`).toBeLessThan(0.033);
   });
 
-  it("decodes, but the pixel's 5 pF input pulls a dip to about 2.47 V and the verdict warns of it", () => {
+  it("the 2.60 V plateau breaks the pulse for pixels switching above it: typical pixels misread the run", () => {
     const result = edge(case4);
-    expect(result.decoded).toBe("10");
-    const lowest = lowestInHigh(result, edgeTime);
-    expect(lowest).toBeGreaterThan(2.4);
-    expect(lowest).toBeLessThan(2.5);
-    expect(result.verdict.reasons.map((r) => r.code)).toContain("mid-supply-dip");
-  });
-
-  it("without the input capacitance the lowest point is the 2.60 V plateau, and no dip is reported", () => {
-    const result = edge({ ...case4, inputCapacitance: 1e-15 });
-    expect(Math.abs(lowestInHigh(result, edgeTime) - 3.3 * (1 - gammaS ** 2))).toBeLessThan(0.02);
-    expect(result.verdict.reasons.map((r) => r.code)).not.toContain("mid-supply-dip");
+    expect(result.verdict.outcome).toBe("fails");
+    expect(Math.abs(lowestInHigh(edge({ ...case4, inputCapacitance: 1e-15 }), edgeTime) - 3.3 * (1 - gammaS ** 2))).toBeLessThan(0.02);
   });
 
   it("a shorter cable rings as hard: on 5 m the far end still reaches 4.81 V and drops back to 2.60 V", () => {
