@@ -5,6 +5,7 @@ import { DRAG_SPAN, FULL_SPAN, useLiveSimulation, type LiveRun } from "@/compone
 import { ScopeView } from "@/components/scope-view";
 import type { PassRule } from "@/lessons/schema";
 import type { SimInput } from "@/lib/sim";
+import { JUDGEMENT_PROMISE } from "@/lessons/pass-rule";
 import { previewJudgement } from "./rule-preview";
 
 function SimulationBadge({ pending, roundTripMs, computeMs }: { pending: boolean; roundTripMs: number | null; computeMs: number | null }) {
@@ -91,6 +92,9 @@ export function WorkbenchPreview({
               <p className="font-semibold">
                 {judgement.pass ? "✓ On the workbench this run meets the lab's rule." : "✗ On the workbench this run does not yet meet the lab's rule:"}{" "}
                 <span className="font-normal text-ink-soft">(a preview; only a submitted attempt is graded)</span>
+              </p>
+              <p className="mt-1" data-testid="rule-judgement">
+                The lab asks that the run {JUDGEMENT_PROMISE[rule.judgement]}. {rule.judgementWhy}
               </p>
               {judgement.failures.length > 0 ? (
                 <ul className="mt-2 list-disc space-y-1 pl-5">

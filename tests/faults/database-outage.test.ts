@@ -19,7 +19,7 @@ import { createPerson, findDemoCohortId } from "../integration/support/people";
 import { stackTracePattern, startFaultInstance, waitUntilHealthy } from "./support/instance";
 
 const labSlug = "lone-lead-termination";
-const choices = { main: { seriesResistance: 150 } };
+const choices = { main: { seriesResistance: 240 } };
 const learnerCount = 6;
 // A request with no answer after this long counts as hung; a healthy or refusing server answers in
 // well under a second, so this only catches requests that wait on a dead connection.

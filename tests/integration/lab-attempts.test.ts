@@ -19,7 +19,7 @@ import { createPerson, findDemoCohortId } from "./support/people";
 const LAB = "lone-lead-termination";
 const lab = getLab(LAB)!;
 // A 3.3 V pin on 8–14 m of lone lead: about 150 Ω nearly matches the line; 33 Ω rings into the clamps.
-const passing = { main: { seriesResistance: 150 } };
+const passing = { main: { seriesResistance: 240 } };
 const failing = { main: { seriesResistance: 33 } };
 
 type Person = { id: string; cookie: string };

@@ -42,7 +42,7 @@ export const benchExercise = "build-a-run";
 /** The exercise whose handed-in work (with one real photo) sits in instructor A's queue. */
 export const reviewedExercise = "document-a-run";
 /** A lab behind five lessons, with a choice known to pass it (E24 150 Ω). */
-export const gradedLab = { slug: "lone-lead-termination", choices: { main: { seriesResistance: 150 } } } as const;
+export const gradedLab = { slug: "lone-lead-termination", choices: { main: { seriesResistance: 240 } } } as const;
 
 /** Every person made here signs in with this. */
 export const personPassword = "access matrix password";

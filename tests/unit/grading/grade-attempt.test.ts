@@ -40,8 +40,10 @@ describe("variant seed", () => {
 });
 
 describe("a long lone lead from a 3.3 V pin", () => {
-  it("passes with a resistor that nearly matches the line, with full marks on the first attempt", () => {
-    const grade = gradeAttempt({ lab: loneLead, seed: loneLeadSeed, choices: { main: { seriesResistance: 150 } }, attemptNumber: 1 });
+  it("passes with a resistor a little below a match, judged for typical pixels as the lab states", () => {
+    const grade = gradeAttempt({ lab: loneLead, seed: loneLeadSeed, choices: { main: { seriesResistance: 240 } }, attemptNumber: 1 });
+    expect(loneLead.passRule.judgement).toBe("typical");
+    expect(grade.runs[0].verdict.outcome).toBe("typical");
     expect(grade.passed).toBe(true);
     expect(grade.runs).toHaveLength(1);
     expect(grade.runs[0]).toMatchObject({ runId: "main", pass: true, failures: [] });
@@ -50,25 +52,25 @@ describe("a long lone lead from a 3.3 V pin", () => {
     expect(grade.score).toBeLessThanOrEqual(100);
   });
 
-  it("fails a small resistor for ringing into the clamp diodes, although every bit decodes", () => {
+  it("fails a small resistor: the ringing falls back through where typical pixels switch", () => {
     const grade = gradeAttempt({ lab: loneLead, seed: loneLeadSeed, choices: { main: { seriesResistance: 33 } }, attemptNumber: 1 });
     expect(grade.passed).toBe(false);
     const run = grade.runs[0];
-    expect(run.bitsCorrect).toBe(run.bitsSent);
-    expect(run.failures.map((f) => f.code)).toEqual(expect.arrayContaining(["clamp-current", "filtered-ringing"]));
-    expect(run.verdict.reasons.map((r) => r.code)).toContain("ringing-filtered-low");
+    expect(run.verdict.outcome).toBe("fails");
+    expect(run.failures.map((f) => f.code)).toEqual(expect.arrayContaining(["bits-not-decoded", "voltage-margin"]));
+    expect(run.verdict.reasons.find((r) => r.severity === "fail")?.code).toBe("ring-after-rise");
     expect(grade.score).toBeLessThanOrEqual(loneLead.scoring.failCreditMax);
   });
 
-  it("fails a large resistor because the far end never clears the pixel's high threshold", () => {
+  it("fails a large resistor: with no overshoot the far end clears the typical band by less than the lab's margin", () => {
     const grade = gradeAttempt({ lab: loneLead, seed: loneLeadSeed, choices: { main: { seriesResistance: 470 } }, attemptNumber: 1 });
     expect(grade.passed).toBe(false);
-    expect(grade.runs[0].failures.map((f) => f.code)).toContain("bits-not-decoded");
-    expect(grade.runs[0].verdict.reasons.find((r) => r.severity === "fail")?.code).toBe("never-high");
+    expect(grade.runs[0].failures.map((f) => f.code)).toContain("voltage-margin");
+    expect(grade.runs[0].verdict.reasons.find((r) => r.severity === "fail")).toMatchObject({ code: "never-high", judgement: "guaranteed" });
   });
 
   it("takes the attempt penalty beyond the free attempts, never below zero", () => {
-    const choices = { main: { seriesResistance: 150 } };
+    const choices = { main: { seriesResistance: 240 } };
     const first = gradeAttempt({ lab: loneLead, seed: loneLeadSeed, choices, attemptNumber: 1 });
     const free = loneLead.scoring.penaltyPerAttemptBeyond;
     expect(gradeAttempt({ lab: loneLead, seed: loneLeadSeed, choices, attemptNumber: free }).score).toBe(first.score);
