@@ -3,7 +3,7 @@
  * teaches: every claim here is the simulator's physics, run on the lab's own scenario.
  */
 import { describe, expect, it } from "vitest";
-import { defaultVariant, getCourse, labVariant, type Lab, type LabVariant, type RunChoices } from "@/lessons";
+import { defaultVariant, getCourse, labVariant, ruleMargins, scoreRun, type Lab, type LabVariant, type RunChoices } from "@/lessons";
 import type { Mechanism } from "@/lessons/schema";
 import { candidateChoices, gradeChoices, type GradedRun } from "./support/lab-runs";
 
@@ -79,5 +79,26 @@ describe.each(labs.map((lab) => [lab.slug, lab] as const))("lab %s", (_, lab) =>
     expect(passing, "a passing choice").not.toBeNull();
     expect(gradeChoices(lab, variant, passing!).every((run) => run.judgement.pass)).toBe(true);
     expect(findFailing(lab, variant), "a failing choice").not.toBeNull();
+  });
+
+  it("never scores a run above one with at least as much of both margins under the lab's judgement", () => {
+    const variant = defaultVariant(lab);
+    lab.runs.forEach((run, i) => {
+      const single = { ...variant, runs: [variant.runs[i]] };
+      const singleLab = { ...lab, runs: [run] };
+      const scored = candidateChoices(lab, variant, i).map((choices) => {
+        const graded = gradeChoices(singleLab, single, { [run.id]: choices })[0];
+        const margins = ruleMargins(lab.passRule, graded.result);
+        return { choices, margins, score: scoreRun(lab.passRule, lab.scoring, graded.judgement, margins), pass: graded.judgement.pass };
+      });
+      const passing = scored.filter((entry) => entry.pass);
+      for (const a of passing) {
+        for (const b of passing) {
+          const aHasMore = (a.margins.timingMargin ?? -Infinity) >= (b.margins.timingMargin ?? -Infinity) && a.margins.voltageMargin >= b.margins.voltageMargin;
+          if (aHasMore) expect(a.score, `${JSON.stringify(a.choices)} against ${JSON.stringify(b.choices)}`).toBeGreaterThanOrEqual(b.score);
+        }
+      }
+      for (const entry of scored) if (!entry.pass) expect(entry.score).toBeLessThan(lab.scoring.passBase);
+    });
   });
 });
