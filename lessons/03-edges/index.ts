@@ -196,7 +196,7 @@ That is where the next three lessons go. The RC arithmetic of this lesson stays 
 - τ = 290 Ω × 600 pF = 174 ns; rise ≈ 2.2 × 174 ns ≈ 383 ns
 - crossing 3.5 V takes 1.204 × 174 ns ≈ 209 ns of a 0 bit's 400 ns
 
-A 0 bit barely reaches 90 % of its swing before the driver falls again. The run still decodes at 5 V, but with little room left: the 600 pF of a long cable is why long runs and large resistors do not mix. Lesson 6 returns to this case with the full transmission-line picture and shows why the answer changes completely when the driver is 3.3 V.
+A 0 bit barely reaches 90 % of its swing before the driver falls again. On the workbench this run at 5 V still **works on typical pixels**, with little room left, and is no longer guaranteed: the 600 pF of a long cable is why long runs and large resistors do not mix. Lesson 6 returns to this case with the full transmission-line picture and shows why the answer changes completely when the driver is 3.3 V.
 
 ## Summing up
 
