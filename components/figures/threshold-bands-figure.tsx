@@ -1,6 +1,7 @@
 "use client";
 
 import { useState } from "react";
+import { RECEIVER_DEFAULTS } from "@/lib/sim/receiver";
 import type { FigureParams } from "@/lessons";
 import { FigureFrame } from "./figure-frame";
 import { formatVolts } from "./format-quantity";
@@ -24,6 +25,8 @@ export function ThresholdBandsFigure({ params, caption }: { params: Params; capt
   const [moved, setMoved] = useState(params.slider ? params[params.slider.field] : 0);
   const p = { ...params, ...(params.slider ? { [params.slider.field]: moved } : {}) };
   const { high, low, highMargin, lowMargin } = thresholdMargins(p);
+  const typicalTop = (RECEIVER_DEFAULTS.typicalSwitchingPoint + RECEIVER_DEFAULTS.typicalSpread) * p.supplyVoltage;
+  const typicalBottom = (RECEIVER_DEFAULTS.typicalSwitchingPoint - RECEIVER_DEFAULTS.typicalSpread) * p.supplyVoltage;
   const { ref, width } = useElementWidth<HTMLDivElement>();
 
   const top = Math.max(p.supplyVoltage, p.driverHighVoltage, params.slider?.max ?? 0) * 1.08;
@@ -90,9 +93,17 @@ export function ThresholdBandsFigure({ params, caption }: { params: Params; capt
           <text x={width - margin.right} y={sy(p.supplyVoltage) - 5} textAnchor="end" fontSize={11} fill={tone.ink}>
             VDD {formatVolts(p.supplyVoltage)}
           </text>
-          <line x1={margin.left} x2={bandsRight} y1={sy(p.supplyVoltage / 2)} y2={sy(p.supplyVoltage / 2)} stroke={tone.ideal} strokeDasharray="2 4" />
-          <text x={bandsRight - 4} y={sy(p.supplyVoltage / 2) - 4} textAnchor="end" fontSize={10} fill="var(--color-ink-faint)">
-            ½ VDD
+          <rect
+            x={margin.left}
+            width={bandsRight - margin.left}
+            y={sy(typicalTop)}
+            height={sy(typicalBottom) - sy(typicalTop)}
+            fill="none"
+            stroke={tone.ideal}
+            strokeDasharray="2 4"
+          />
+          <text x={bandsRight - 4} y={sy(typicalTop) - 4} textAnchor="end" fontSize={10} fill="var(--color-ink-faint)">
+            typical pixels switch here (assumed)
           </text>
           <line x1={driverX} x2={driverX} y1={sy(0)} y2={sy(p.driverHighVoltage)} stroke={tone.signal} strokeWidth={10} strokeLinecap="butt" opacity={0.9} />
           <text x={driverX + 10} y={sy(p.driverHighVoltage) + 4} fontSize={labelSize} fontWeight={600} fill={tone.signal}>

@@ -13,6 +13,38 @@ import type { ResolvedSimInput } from "./schema";
  *   (schema.ts), shown with every result.
  */
 
+/**
+ * The receiver's defaults (lib/sim/receiver.ts, docs/simulator.md "The receiver"), each with its basis:
+ * - thresholds: VIH = 0.7·VDD, VIL = 0.3·VDD, the guaranteed input levels of CMOS-input pixel
+ *   datasheets (common datasheet figures, from memory);
+ * - typical switching point 0.5·VDD ± 0.1·VDD with 0.05·VDD of hysteresis: an assumption (a CMOS
+ *   input switches near mid-supply; spread over parts and temperature and hysteresis are not
+ *   published for this class of part);
+ * - deglitch time 0: no datasheet promises an input filter, so none is assumed;
+ * - shortest high and low: the protocol's shortest nominal high (0.40 µs) and low (0.45 µs) less
+ *   their ±0.15 µs tolerance (the 800 kHz protocol's timing table, from memory), less a further
+ *   0.10 µs and 0.15 µs that a receiver is assumed to accept: 0.15 µs each; a shorter pulse or low is
+ *   not a bit the protocol defines;
+ * - clamp injection rating 20 mA: the absolute maximum input clamp current of standard CMOS logic
+ *   inputs (±20 mA, JEDEC JESD7A for the high-speed CMOS family, from memory), assumed for pixel
+ *   inputs whose datasheets do not state one; a design keeps under half of it (common derating).
+ */
+export const RECEIVER_DEFAULTS = {
+  highThreshold: 0.7,
+  lowThreshold: 0.3,
+  typicalSwitchingPoint: 0.5,
+  typicalSpread: 0.1,
+  typicalHysteresis: 0.05,
+  deglitchTime: 0,
+  minPulse: 0.15e-6,
+  minGap: 0.15e-6,
+  decisionTime: 0.6e-6,
+  clampCurrentRating: 20e-3,
+} as const;
+
+/** The clamp current a design keeps under: half the input's rated injection current (common derating practice). */
+export const clampCurrentLimit = (rating: number) => rating / 2;
+
 export const JUDGEMENTS = ["guaranteed", "typical"] as const;
 export type JudgementName = (typeof JUDGEMENTS)[number];
 
