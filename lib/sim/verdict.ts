@@ -10,8 +10,9 @@ import type { Comparator, JudgementName } from "./receiver";
 
 export type VerdictReason = {
   code: string;
+  /** "fail": why typical pixels misread the run; "warning": anything less, why it is not guaranteed among them. */
   severity: "fail" | "warning";
-  /** The judgement a failing reason belongs to: it is why the run fails on typical pixels, or why it is not guaranteed. */
+  /** The judgement the reason explains: why the run fails on typical pixels, or why it is not guaranteed. */
   judgement?: JudgementName;
   message: string;
   at?: { time: number; bit?: number };
@@ -39,9 +40,12 @@ export const OUTCOME_WORDS: Record<Outcome, string> = {
 
 /** A reason's heading, the same on the workbench, in attempt results and in the lessons. */
 export function reasonHeading(reason: Pick<VerdictReason, "severity" | "judgement">): string {
-  if (reason.severity === "warning") return "Warning";
-  return reason.judgement === "guaranteed" ? "Not guaranteed" : "Fails";
+  if (reason.judgement === "guaranteed") return "Not guaranteed";
+  return reason.severity === "fail" ? "Fails" : "Warning";
 }
+
+/** Only typical pixels misreading a run makes it fail; a run short of the guarantee still works on them. */
+const severityOf = (judgement: JudgementName): VerdictReason["severity"] => (judgement === "typical" ? "fail" : "warning");
 
 export function outcomeOf(guaranteed: Pick<Judgement, "pass">, typical: Pick<Judgement, "pass">): Outcome {
   if (guaranteed.pass && typical.pass) return "guaranteed";
@@ -243,7 +247,7 @@ function decodingReasons(judged: JudgedBand, corner: Corner, levels: BitLevels[]
     const indices = findings.map((finding) => finding.index);
     return {
       code,
-      severity: "fail",
+      severity: severityOf(judged.name),
       judgement: judged.name,
       message: `${failMessage(code, bits, indices, facts, words)} (${countNote(indices, bits.length)}).`,
       at: { time: findings[0].time, bit: findings[0].index },
@@ -252,7 +256,7 @@ function decodingReasons(judged: JudgedBand, corner: Corner, levels: BitLevels[]
   if (decoding.extraPulses.length > 0) {
     reasons.push({
       code: "extra-pulse",
-      severity: "fail",
+      severity: severityOf(judged.name),
       judgement: judged.name,
       message: `after the last bit the far end rises back through ${words.rise} and the pixel reads an extra bit: ${ringingCause(facts, facts.sourceResistanceLow, "up")}.`,
       at: { time: decoding.extraPulses[0].start, bit: bits.length - 1 },
@@ -286,11 +290,11 @@ function recrossingReason(judged: JudgedBand, levels: BitLevels[], facts: Circui
     const top = judged.band.highest - judged.band.hysteresis / 2;
     if (facts.settledHigh < top) {
       const levels = levelWords(name, "highest", judged.readings.highest.comparator);
-      return { code: "high-level-too-low", severity: "fail", judgement: name, message: `${lowLevelMessage(facts, levels)}.`, at: { time: hold.time, bit: holdBit } };
+      return { code: "high-level-too-low", severity: severityOf(name), judgement: name, message: `${lowLevelMessage(facts, levels)}.`, at: { time: hold.time, bit: holdBit } };
     }
     return {
       code: "ring-after-rise",
-      severity: "fail",
+      severity: severityOf(name),
       judgement: name,
       message: `ringing after the rising edge turns back down through switching points in the ${band} band and breaks the pulse there (by ${volts(-hold.value)}): ${ringingCause(facts, facts.sourceResistanceHigh, "down")}.`,
       at: { time: hold.time, bit: holdBit },
@@ -299,7 +303,7 @@ function recrossingReason(judged: JudgedBand, levels: BitLevels[], facts: Circui
   if (ringBack !== null && ringBack.value < 0) {
     return {
       code: "ring-after-fall",
-      severity: "fail",
+      severity: severityOf(name),
       judgement: name,
       message: `ringing after the falling edge swings back up through switching points in the ${band} band and starts an extra pulse there (by ${volts(-ringBack.value)}): ${ringingCause(facts, facts.sourceResistanceLow, "up")}.`,
       at: { time: ringBack.time, bit: ringBit },
@@ -320,7 +324,7 @@ function judgementReasons(judged: JudgedBand, levels: BitLevels[], facts: Circui
   return [
     {
       code: "thin-margin",
-      severity: "fail",
+      severity: severityOf(judged.name),
       judgement: judged.name,
       message: `the far end comes within reach of the switching band (voltage margin ${volts(judged.voltageMargin)}, timing margin ${judged.timingMargin === null ? "none" : duration(judged.timingMargin)}).`,
     },

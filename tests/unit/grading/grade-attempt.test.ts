@@ -66,7 +66,7 @@ describe("a long lone lead from a 3.3 V pin", () => {
     const grade = gradeAttempt({ lab: loneLead, seed: loneLeadSeed, choices: { main: { seriesResistance: 470 } }, attemptNumber: 1 });
     expect(grade.passed).toBe(false);
     expect(grade.runs[0].failures.map((f) => f.code)).toContain("voltage-margin");
-    expect(grade.runs[0].verdict.reasons.find((r) => r.severity === "fail")).toMatchObject({ code: "never-high", judgement: "guaranteed" });
+    expect(grade.runs[0].verdict.reasons.find((r) => r.judgement === "guaranteed")).toMatchObject({ code: "never-high", severity: "warning" });
   });
 
   it("takes the attempt penalty beyond the free attempts, never below zero", () => {
