@@ -115,7 +115,7 @@ function slowEdgeCause(facts: CircuitFacts, resistance: number, edge: "rising" |
 function ringingCause(facts: CircuitFacts, resistance: number, swing: "down" | "up"): string {
   const gamma = reflectionCoefficient(resistance, facts.z0);
   if (facts.delay > 0 && gamma < -0.2) {
-    return `the source (${ohms(resistance)}) is far below the line's impedance (${ohms(facts.z0)}), so the reflection returns with the wrong sign (reflection coefficient ${gamma.toFixed(2)}) and the far end swings back ${swing}`;
+    return `the source (${ohms(resistance)}) is far below the line's impedance (${ohms(facts.z0)}), so the reflection returns with the wrong sign (reflection coefficient ${gamma.toFixed(2).replace("-", "−")}) and the far end swings back ${swing}`;
   }
   return `the line's inductance and the capacitance at its end ring, and too little resistance damps them`;
 }
@@ -136,7 +136,7 @@ function levelWords(name: JudgementName, corner: Corner, comparator: Comparator)
   const end = corner === "highest" ? "top" : "bottom";
   return {
     rise: `${volts(comparator.rise)} (where a typical pixel switching at the ${end} of its range reads a rise)`,
-    fall: `${volts(comparator.fall)} (where that pixel reads a fall)`,
+    fall: `${volts(comparator.fall)} (where a typical pixel switching at the ${end} of its range reads a fall)`,
     riseVolts: comparator.rise,
     fallVolts: comparator.fall,
   };
