@@ -10,25 +10,15 @@
  * independently by brute force over each band of switching points.
  */
 import { describe, expect, it } from "vitest";
-import { cableCatalogue, RECEIVER_DEFAULTS, type Outcome } from "@/lib/sim";
+import { cableCatalogue, type Outcome } from "@/lib/sim";
 import { runNgspice, type NgspiceResult } from "./support/ngspice-runner";
-import { decodesAcrossBand } from "./support/receiver-decode";
+import { outcomeByBruteForce } from "./support/receiver-decode";
 import type { CableKind } from "./support/cable-geometry";
 import type { DocSimInput } from "./support/reference-circuit";
 import { decodeSettingsOf, referenceCircuitOf, runSolver } from "./support/solver-run";
 
 const BITS = "0101101011000011";
 const VDD = 5;
-/** The two bands as docs/simulator.md states them; the typical one is the simulator's stated assumption. */
-const BANDS = {
-  guaranteed: { lowest: 0.3 * VDD, highest: 0.7 * VDD, hysteresis: 0 },
-  typical: {
-    lowest: (RECEIVER_DEFAULTS.typicalSwitchingPoint - RECEIVER_DEFAULTS.typicalSpread) * VDD,
-    highest: (RECEIVER_DEFAULTS.typicalSwitchingPoint + RECEIVER_DEFAULTS.typicalSpread) * VDD,
-    hysteresis: RECEIVER_DEFAULTS.typicalHysteresis * VDD,
-  },
-};
-const BRUTE_FORCE = { step: 0.05, edgeBump: 0.02 * VDD };
 
 interface Run {
   kind: CableKind;
@@ -52,11 +42,7 @@ function inputOf(run: Run, lossless = false): DocSimInput {
 async function ngspiceOutcome(run: Run): Promise<Outcome> {
   const circuit = referenceCircuitOf(inputOf(run, true));
   const spice: NgspiceResult = await runNgspice(circuit);
-  const wave = { time: spice.time, value: spice.vectors["v(far)"] };
-  const settings = decodeSettingsOf(circuit);
-  const passes = (band: keyof typeof BANDS) => decodesAcrossBand(wave, settings, BITS, BANDS[band], BRUTE_FORCE);
-  if (!passes("typical")) return "fails";
-  return passes("guaranteed") ? "guaranteed" : "typical";
+  return outcomeByBruteForce({ time: spice.time, value: spice.vectors["v(far)"] }, decodeSettingsOf(circuit), BITS);
 }
 
 async function expectOutcome(run: Run, expected: Outcome) {

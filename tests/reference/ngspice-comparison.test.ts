@@ -9,7 +9,7 @@
 import { describe, expect, it } from "vitest";
 import { cableCatalogue } from "@/lib/sim";
 import { runNgspice } from "./support/ngspice-runner";
-import { decodeWaveform } from "./support/receiver-decode";
+import { decodeWaveform, outcomeByBruteForce } from "./support/receiver-decode";
 import type { CableKind } from "./support/cable-geometry";
 import type { DocSimInput } from "./support/reference-circuit";
 import { decodeSettingsOf, referenceCircuitOf, runSolver } from "./support/solver-run";
@@ -85,9 +85,14 @@ describe("solver against ngspice, lossless T element (docs/simulator.md: within 
     expect(near.maxError / vdd, `near-end error ${near.maxError.toFixed(4)} V at ${near.at} s`).toBeLessThan(0.02);
 
     const settings = decodeSettingsOf(circuit);
-    const fromSpice = decodeWaveform({ time: spice.time, value: spice.vectors["v(far)"] }, settings).decoded;
-    expect(solver.result.decoded).toBe(fromSpice);
-    expect(decodeWaveform({ time: solver.time, value: solver.farEnd }, settings).decoded).toBe(solver.result.decoded);
+    const spiceFar = { time: spice.time, value: spice.vectors["v(far)"] };
+    expect(decodeWaveform({ time: solver.time, value: solver.farEnd }, settings).decoded).toBe(decodeWaveform(spiceFar, settings).decoded);
+    // The brute force reads each switching point with 0.1 V of hysteresis standing in for the
+    // solver's edge-bump tolerance, so outcomes are compared where both judgements clear by more than half of it.
+    const { guaranteed, typical } = solver.result.verdict;
+    if (Math.min(Math.abs(guaranteed.voltageMargin), Math.abs(typical.voltageMargin)) > 0.05) {
+      expect(solver.result.verdict.outcome).toBe(outcomeByBruteForce(spiceFar, settings, c.bits));
+    }
 
     if (c.clamps) {
       const spiceClampPeak = Math.max(peakMagnitude(spice.vectors["i(vclamphigh)"]), peakMagnitude(spice.vectors["i(vclamplow)"]));

@@ -115,3 +115,18 @@ export function decodesAcrossBand(
   }
   return true;
 }
+
+/**
+ * A run's outcome in the simulator's terms, judged by brute force over the bands of
+ * docs/simulator.md for the run's supply: guaranteed (0.3–0.7 of VDD, no hysteresis) and typical
+ * (the simulator's stated assumption, 0.4–0.6 of VDD with 0.05 of VDD of hysteresis). No input
+ * filter: the simulator never credits one.
+ */
+export function outcomeByBruteForce(wave: Waveform, settings: DecodeSettings, sent: string): "guaranteed" | "typical" | "fails" {
+  const vdd = settings.supplyVoltage;
+  const unfiltered = { ...settings, deglitchTime: 0 };
+  const options = { step: 0.01 * vdd, edgeBump: 0.02 * vdd };
+  const typical = decodesAcrossBand(wave, unfiltered, sent, { lowest: 0.4 * vdd, highest: 0.6 * vdd, hysteresis: 0.05 * vdd }, options);
+  if (!typical) return "fails";
+  return decodesAcrossBand(wave, unfiltered, sent, { lowest: 0.3 * vdd, highest: 0.7 * vdd, hysteresis: 0 }, options) ? "guaranteed" : "typical";
+}
