@@ -1,0 +1,19 @@
+/**
+ * A number lesson text may type as it is, because no formula or simulator run produces it: a
+ * worked example's premise that no computation uses, a rule of thumb, a figure from a standard,
+ * a definition. Listed with the reason, phrase by phrase (the phrase holds the number and enough
+ * words around it to say which occurrence is meant); tests/unit/lessons/lesson-numbers.test.ts
+ * fails on any other number typed in the text of a lesson whose numbers are converted.
+ */
+export type PlainNumber = { text: string; why: string };
+
+/** Phrases every lesson may use. */
+export const coursePlainNumbers: PlainNumber[] = [
+  { text: "3.3 V controller", why: "name of the course's controller-pin driver (lessons/drivers.ts label)" },
+  { text: "3.3 V pin", why: "name of the course's controller-pin driver" },
+  { text: "3.3 V driver", why: "name of the course's controller-pin driver" },
+  { text: "5 V buffer", why: "name of the course's buffered 5 V driver (lessons/drivers.ts label)" },
+  { text: "5 V driver", why: "name of the course's buffered 5 V driver" },
+  { text: "5 V pixel", why: "the class of pixel the course's examples drive (the simulator's default supply)" },
+  { text: "5 V strip", why: "the class of strip the course's examples power" },
+];

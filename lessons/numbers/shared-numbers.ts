@@ -1,0 +1,92 @@
+import { awgDiameter, cableCatalogue, colourBits, parseSimInput, type CableKind } from "@/lib/sim";
+import { buffer5v, controllerPin3v3 } from "../drivers";
+import { quantity as q, type NumberTree } from "./lesson-number";
+
+/**
+ * The numbers every lesson may quote: the simulator's defaults and catalogue, the course's
+ * drivers, and the few physical and textbook constants the formulas use. Each lesson's numbers
+ * (lessons/NN-…/numbers.ts) add their own to these.
+ */
+
+const SIM_DEFAULT = "the simulator's default (parseSimInput, docs/simulator.md)";
+const CATALOGUE = "the simulator's cable catalogue (lib/sim/cables.ts, from geometry)";
+const GEOMETRY = "the simulator's catalogue geometry (lib/sim/cables.ts)";
+
+const defaults = parseSimInput({ cable: { kind: "beside-ground", length: 1 }, signal: { bits: "0" } });
+const { bitPeriod, zeroHigh, oneHigh } = defaults.signal;
+const receiver = defaults.receiver;
+
+/** Protocol timing and the pixel's receiver as the simulator models them by default. */
+const sim = {
+  bitPeriod: q(bitPeriod, "µs", 2, SIM_DEFAULT),
+  bitRate: q(1 / bitPeriod, "kHz", 0, "f = 1 / bit period"),
+  zeroHigh: q(zeroHigh, "µs", 1, SIM_DEFAULT),
+  oneHigh: q(oneHigh, "µs", 1, SIM_DEFAULT),
+  zeroLow: q(bitPeriod - zeroHigh, "µs", 2, "bit period − 0-bit high time"),
+  oneLow: q(bitPeriod - oneHigh, "µs", 2, "bit period − 1-bit high time"),
+  decisionTime: q(receiver.decisionTime, "µs", 1, SIM_DEFAULT),
+  timingMargin: q(Math.min(receiver.decisionTime - zeroHigh, oneHigh - receiver.decisionTime), "ns", 0, "distance of each default high time from the decision time"),
+  minPulse: q(receiver.minPulse, "µs", 2, SIM_DEFAULT),
+  deglitchTime: q(receiver.deglitchTime, "ns", 0, SIM_DEFAULT),
+  inputCapacitance: q(receiver.inputCapacitance, "pF", 0, SIM_DEFAULT),
+  highThreshold: q(receiver.highThreshold, "", 1, SIM_DEFAULT),
+  lowThreshold: q(receiver.lowThreshold, "", 1, SIM_DEFAULT),
+  wordBits: q(colourBits([[0, 0, 0]], "GRB").length, "", 0, "bits of one colour word (lib/sim colourBits)"),
+  /** Checked against the simulator's verdict in tests/unit/lessons/lesson-claims.test.ts. */
+  latchGap: q(50e-6, "µs", 0, "the shortest low the simulator's verdict accepts as a latch (lib/sim/verdict.ts)"),
+};
+
+/** The pixel every lesson's examples drive: the simulator's default supply and thresholds. */
+const vdd = receiver.supplyVoltage;
+const DIODE_DROP = 0.7;
+const pixel = {
+  vdd: q(vdd, "V", 0, SIM_DEFAULT),
+  high: q(receiver.highThreshold * vdd, "V", 1, "high threshold × VDD"),
+  low: q(receiver.lowThreshold * vdd, "V", 1, "low threshold × VDD"),
+  mid: q(vdd / 2, "V", 1, "VDD / 2"),
+  clamp: q(vdd + DIODE_DROP, "V", 1, "VDD plus a silicon diode's forward drop"),
+};
+
+const textbook = {
+  diodeDrop: q(DIODE_DROP, "V", 1, "forward drop of a silicon diode at moderate current (textbook figure)"),
+  ln9: q(Math.log(9), "", 1, "RC charge from 10 % to 90 %: ln(0.9/0.1)"),
+  speedOfLight: q(299_792_458, "m/s", 0, "speed of light in vacuum (SI definition)"),
+  vacuumDelay: q(1 / 299_792_458, "ns/m", 3, "1 / c"),
+  epsilon0: q(8.8541878128e-12, "pF/m", 3, "vacuum permittivity (CODATA 2018)"),
+};
+
+function cableNumbers(kind: CableKind) {
+  const entry = cableCatalogue[kind];
+  const { geometry, perMetre } = entry;
+  const permittivity = geometry.type === "coax" ? geometry.relativePermittivity : geometry.effectivePermittivity;
+  return {
+    z0: q(entry.z0, "Ω", entry.z0 >= 100 ? 0 : 1, CATALOGUE),
+    capacitance: q(perMetre.capacitance, "pF/m", 1, CATALOGUE),
+    inductance: q(perMetre.inductance, "nH/m", 0, CATALOGUE),
+    delay: q(entry.delayPerMetre, "ns/m", 2, CATALOGUE),
+    speed: q(1 / entry.delayPerMetre, "m/ns", 2, "1 / delay per metre (catalogue)"),
+    resistance: q(perMetre.resistance, "mΩ/m", 0, CATALOGUE),
+    permittivity: q(permittivity, "", permittivity === Math.round(permittivity * 10) / 10 ? 1 : 2, GEOMETRY),
+    gauge: q(geometry.type === "coax" ? geometry.centreGauge : geometry.signalGauge, "", 0, GEOMETRY),
+    diameter: q(awgDiameter(geometry.type === "coax" ? geometry.centreGauge : geometry.signalGauge), "mm", 3, "ASTM B258 diameter of the data conductor's gauge"),
+  };
+}
+
+const driverNumbers = (driver: typeof controllerPin3v3 | typeof buffer5v) => ({
+  volts: q(driver.highVoltage, "V", driver.highVoltage % 1 === 0 ? 0 : 1, "the course's driver list (lessons/drivers.ts)"),
+  resistance: q(driver.outputResistance, "Ω", 0, "the course's driver list (lessons/drivers.ts)"),
+  edge: q(driver.edgeTime, "ns", 0, "the course's driver list (lessons/drivers.ts)"),
+});
+
+export const sharedNumbers = {
+  sim,
+  pixel,
+  textbook,
+  pin: driverNumbers(controllerPin3v3),
+  buffer: driverNumbers(buffer5v),
+  lone: cableNumbers("lone-lead"),
+  beside: cableNumbers("beside-ground"),
+  twisted: cableNumbers("twisted-pair"),
+  coax: cableNumbers("coax-75"),
+  threeCore: cableNumbers("three-core"),
+} satisfies NumberTree;
