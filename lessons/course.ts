@@ -27,7 +27,7 @@ function lessonFolder<L extends LessonInput>(folder: string, lesson: L, parts: r
 export const lessonSources = [
   lessonFolder("01-pixel-data-stream", pixelDataStream, ["lab", "numbers"]),
   lessonFolder("02-logic-levels", logicLevels, ["lab"]),
-  lessonFolder("03-edges", edges, ["lab"]),
+  lessonFolder("03-edges", edges, ["lab", "numbers"]),
   lessonFolder("04-transmission-line", transmissionLine, ["lab"]),
   lessonFolder("05-reflections", reflections, ["lab"]),
   lessonFolder("06-series-termination", seriesTermination, ["lab"]),

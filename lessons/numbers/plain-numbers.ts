@@ -16,4 +16,8 @@ export const coursePlainNumbers: PlainNumber[] = [
   { text: "5 V driver", why: "name of the course's buffered 5 V driver" },
   { text: "5 V pixel", why: "the class of pixel the course's examples drive (the simulator's default supply)" },
   { text: "5 V strip", why: "the class of strip the course's examples power" },
+  { text: "10–90 %", why: "the rise-time convention of oscilloscopes and datasheets" },
+  { text: "10 % to 90 %", why: "the rise-time convention" },
+  { text: "10 % and 90 %", why: "the rise-time convention" },
+  { text: "90 % down to 10 %", why: "the fall-time convention" },
 ];

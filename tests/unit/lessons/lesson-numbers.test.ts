@@ -5,11 +5,13 @@ import { placeholderNames, resolvePlaceholders } from "@/lessons/numbers/placeho
 import { coursePlainNumbers, type PlainNumber } from "@/lessons/numbers/plain-numbers";
 import { quantity } from "@/lessons/numbers/lesson-number";
 import { plainNumbers as pixelDataStream } from "@/lessons/01-pixel-data-stream/numbers";
+import { plainNumbers as edges } from "@/lessons/03-edges/numbers";
 import { typedNumbers } from "./support/typed-numbers";
 
 /** The lessons whose text quotes computed numbers only through placeholders, with their own plain numbers. */
 const converted: Record<string, readonly PlainNumber[]> = {
   "pixel-data-stream": pixelDataStream,
+  edges,
 };
 
 type RawBlock = Record<string, unknown>;
