@@ -28,7 +28,7 @@ export const lessonSources = [
   lessonFolder("01-pixel-data-stream", pixelDataStream, ["lab", "numbers"]),
   lessonFolder("02-logic-levels", logicLevels, ["lab"]),
   lessonFolder("03-edges", edges, ["lab", "numbers"]),
-  lessonFolder("04-transmission-line", transmissionLine, ["lab"]),
+  lessonFolder("04-transmission-line", transmissionLine, ["lab", "numbers"]),
   lessonFolder("05-reflections", reflections, ["lab"]),
   lessonFolder("06-series-termination", seriesTermination, ["lab"]),
   lessonFolder("07-designing-a-run", designingARun, ["lab", "bench"]),

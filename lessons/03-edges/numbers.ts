@@ -1,11 +1,11 @@
-import { cableCatalogue, CABLE_KINDS } from "@/lib/sim";
+import { cableCatalogue } from "@/lib/sim";
 import { buffer5v } from "../drivers";
 import { quantity as q, type NumberTree } from "../numbers/lesson-number";
 import { rcRiseTime, rcTimeToFall, rcTimeToRise } from "../numbers/line-formulas";
 import type { PlainNumber } from "../numbers/plain-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
 
-const { sim, pixel, textbook } = sharedNumbers;
+const { sim, pixel, textbook, catalogue } = sharedNumbers;
 const PREMISE = "the lesson's worked example (a premise)";
 const C_PER_METRE = cableCatalogue["beside-ground"].perMetre.capacitance;
 const INPUT_C = sim.inputCapacitance.value;
@@ -40,7 +40,6 @@ const WEAK_VOLTS = 4.5;
 const WEAK_TAU = 170e-9;
 const weakShrink = rcTimeToRise(1, WEAK_VOLTS, pixel.high.value) - rcTimeToFall(1, WEAK_VOLTS, pixel.low.value);
 const symmetricCrossing = rcTimeToRise(1, V, pixel.high.value);
-const speeds = CABLE_KINDS.map((kind) => 1 / cableCatalogue[kind].delayPerMetre);
 const shortLeadDelay = shortLead.length.value * cableCatalogue["beside-ground"].delayPerMetre;
 
 export const numbers = {
@@ -83,13 +82,9 @@ export const numbers = {
     fitted: q((V - DIODE) / shortLead.resistance.value, "mA", 0, "(V − 0.7 V) / (R_out + R_s)"),
     fittedExact: q((V - DIODE) / shortLead.resistance.value, "mA", 1, "(V − 0.7 V) / (R_out + R_s)"),
   },
-  speed: {
-    least: q(Math.min(...speeds), "m/ns", 2, "1 / the catalogue's largest delay per metre"),
-    most: q(Math.max(...speeds), "m/ns", 2, "1 / the catalogue's smallest delay per metre"),
-  },
   shortRoundTrip: {
-    least: q((2 * shortLead.length.value) / Math.max(...speeds), "ns", 0, "2 × length × the catalogue's smallest delay per metre"),
-    most: q((2 * shortLead.length.value) / Math.min(...speeds), "ns", 0, "2 × length × the catalogue's largest delay per metre"),
+    least: q(2 * shortLead.length.value * catalogue.delayLeast.value, "ns", 0, "2 × length × the catalogue's smallest delay per metre"),
+    most: q(2 * shortLead.length.value * catalogue.delayMost.value, "ns", 0, "2 × length × the catalogue's largest delay per metre"),
   },
   longRun: {
     ...longRun,

@@ -7,7 +7,7 @@
  */
 export type PlainNumber = { text: string; why: string };
 
-/** Phrases every lesson may use. */
+/** Phrases every lesson may use. Phrases are matched in the text as written, placeholders included. */
 export const coursePlainNumbers: PlainNumber[] = [
   { text: "3.3 V controller", why: "name of the course's controller-pin driver (lessons/drivers.ts label)" },
   { text: "3.3 V pin", why: "name of the course's controller-pin driver" },
@@ -17,6 +17,8 @@ export const coursePlainNumbers: PlainNumber[] = [
   { text: "5 V pixel", why: "the class of pixel the course's examples drive (the simulator's default supply)" },
   { text: "5 V strip", why: "the class of strip the course's examples power" },
   { text: "10–90 %", why: "the rise-time convention of oscilloscopes and datasheets" },
+  { text: "75 Ω coax", why: "name of a catalogue cable (lib/sim/cables.ts label)" },
+  { text: "coax-75", why: "id of a catalogue cable" },
   { text: "10 % to 90 %", why: "the rise-time convention" },
   { text: "10 % and 90 %", why: "the rise-time convention" },
   { text: "90 % down to 10 %", why: "the fall-time convention" },

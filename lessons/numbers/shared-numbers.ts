@@ -1,4 +1,4 @@
-import { awgDiameter, cableCatalogue, colourBits, parseSimInput, type CableKind } from "@/lib/sim";
+import { awgDiameter, CABLE_KINDS, cableCatalogue, colourBits, parseSimInput, type CableKind } from "@/lib/sim";
 import { buffer5v, controllerPin3v3 } from "../drivers";
 import { quantity as q, type NumberTree } from "./lesson-number";
 
@@ -55,11 +55,21 @@ const textbook = {
   epsilon0: q(8.8541878128e-12, "pF/m", 3, "vacuum permittivity (CODATA 2018)"),
 };
 
+function geometryNumbers(kind: CableKind): NumberTree {
+  const { geometry } = cableCatalogue[kind];
+  if (geometry.type === "coax") return { dielectric: q(geometry.dielectricDiameter, "mm", 1, GEOMETRY) };
+  return {
+    returnGauge: q(geometry.returnGauge, "", 0, GEOMETRY),
+    spacing: q(geometry.centreSpacing, "mm", geometry.centreSpacing < 5e-3 ? 3 : 0, `${GEOMETRY}: centre-to-centre spacing of data and return`),
+  };
+}
+
 function cableNumbers(kind: CableKind) {
   const entry = cableCatalogue[kind];
   const { geometry, perMetre } = entry;
   const permittivity = geometry.type === "coax" ? geometry.relativePermittivity : geometry.effectivePermittivity;
   return {
+    ...geometryNumbers(kind),
     z0: q(entry.z0, "Ω", entry.z0 >= 100 ? 0 : 1, CATALOGUE),
     capacitance: q(perMetre.capacitance, "pF/m", 1, CATALOGUE),
     inductance: q(perMetre.inductance, "nH/m", 0, CATALOGUE),
@@ -72,6 +82,20 @@ function cableNumbers(kind: CableKind) {
   };
 }
 
+const entries = CABLE_KINDS.map((kind) => cableCatalogue[kind]);
+const z0s = entries.map((entry) => entry.z0);
+const delays = entries.map((entry) => entry.delayPerMetre);
+
+/** The catalogue's extremes. */
+const catalogue = {
+  z0Least: q(Math.min(...z0s), "Ω", 0, "the catalogue's lowest Z0"),
+  z0Most: q(Math.max(...z0s), "Ω", 0, "the catalogue's highest Z0"),
+  delayLeast: q(Math.min(...delays), "ns/m", 2, "the catalogue's smallest delay per metre"),
+  delayMost: q(Math.max(...delays), "ns/m", 2, "the catalogue's largest delay per metre"),
+  speedLeast: q(1 / Math.max(...delays), "m/ns", 2, "1 / the catalogue's largest delay per metre"),
+  speedMost: q(1 / Math.min(...delays), "m/ns", 2, "1 / the catalogue's smallest delay per metre"),
+};
+
 const driverNumbers = (driver: typeof controllerPin3v3 | typeof buffer5v) => ({
   volts: q(driver.highVoltage, "V", driver.highVoltage % 1 === 0 ? 0 : 1, "the course's driver list (lessons/drivers.ts)"),
   resistance: q(driver.outputResistance, "Ω", 0, "the course's driver list (lessons/drivers.ts)"),
@@ -82,6 +106,7 @@ export const sharedNumbers = {
   sim,
   pixel,
   textbook,
+  catalogue,
   pin: driverNumbers(controllerPin3v3),
   buffer: driverNumbers(buffer5v),
   lone: cableNumbers("lone-lead"),

@@ -6,12 +6,14 @@ import { coursePlainNumbers, type PlainNumber } from "@/lessons/numbers/plain-nu
 import { quantity } from "@/lessons/numbers/lesson-number";
 import { plainNumbers as pixelDataStream } from "@/lessons/01-pixel-data-stream/numbers";
 import { plainNumbers as edges } from "@/lessons/03-edges/numbers";
+import { plainNumbers as transmissionLine } from "@/lessons/04-transmission-line/numbers";
 import { typedNumbers } from "./support/typed-numbers";
 
 /** The lessons whose text quotes computed numbers only through placeholders, with their own plain numbers. */
 const converted: Record<string, readonly PlainNumber[]> = {
   "pixel-data-stream": pixelDataStream,
   edges,
+  "transmission-line": transmissionLine,
 };
 
 type RawBlock = Record<string, unknown>;

@@ -21,13 +21,14 @@ const escape = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
 
 /** Numbers typed in `text` that are neither placeholders nor listed phrases, and listed phrases it never uses. */
 export function typedNumbers(text: string, plain: readonly PlainNumber[]): { unlisted: string[]; used: Set<string> } {
-  let rest = text.replace(PLACEHOLDER, " ");
+  let rest = text;
   const used = new Set<string>();
   for (const phrase of plain) {
     const pattern = new RegExp(escape(phrase.text), "g");
     if (pattern.test(rest)) used.add(phrase.text);
     rest = rest.replace(pattern, " ");
   }
+  rest = rest.replace(PLACEHOLDER, " ");
   for (const pattern of NAMING) rest = rest.replace(pattern, " ");
   const unlisted = [...rest.matchAll(NUMBER)]
     .filter((match) => match[0] !== "0" && match[0] !== "1")
