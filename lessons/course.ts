@@ -30,7 +30,7 @@ export const lessonSources = [
   lessonFolder("03-edges", edges, ["lab", "numbers"]),
   lessonFolder("04-transmission-line", transmissionLine, ["lab", "numbers"]),
   lessonFolder("05-reflections", reflections, ["lab"]),
-  lessonFolder("06-series-termination", seriesTermination, ["lab"]),
+  lessonFolder("06-series-termination", seriesTermination, ["lab", "numbers"]),
   lessonFolder("07-designing-a-run", designingARun, ["lab", "bench"]),
   lessonFolder("08-on-the-bench", onTheBench, ["lab", "bench"]),
 ] as const;

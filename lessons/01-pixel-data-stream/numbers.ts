@@ -50,12 +50,13 @@ function pixelsFor(rate: number, latch: number) {
     available: q(available, "ms", 3, "1 / f − T_latch"),
     exact: q(exact, "", 1, source),
     max: q(Math.floor(exact), "", 0, source),
-    oneMore: q(Math.floor(exact) + 1, "", 0, "one pixel more than N_max"),
   };
 }
 
 /** The figure's bits, whose length `figureSlots` quotes. */
 export const FIGURE_BITS = "01101000";
+const smooth = pixelsFor(60, LONG_LATCH);
+const forty = pixelsFor(40, latchGap.value);
 const PIXEL_CURRENT = 60e-3;
 const POWERED_PIXELS = 300;
 const LATE_LENGTH = 10;
@@ -77,9 +78,9 @@ export const numbers = {
   wordTime: q(WORD_TIME, "µs", 0, "24 × T_bit"),
   longLatch: q(LONG_LATCH, "µs", 0, "a latch gap some parts need (their datasheets)"),
   rows: { p100: frameRow(100), p200: frameRow(200), p500: frameRow(500), p1000: frameRow(1000) },
-  smooth: pixelsFor(60, LONG_LATCH),
+  smooth: { ...smooth, oneMore: q(smooth.max.value + 1, "", 0, "one pixel more than N_max") },
   greenWord: colourWord([0, 170, 0]),
-  forty: pixelsFor(40, latchGap.value),
+  forty: { rate: forty.rate, period: forty.period, exact: forty.exact, max: forty.max },
   late: {
     length: q(LATE_LENGTH, "m", 0, PREMISE),
     least: q(Math.min(...delays), "ns", 0, "length × the catalogue's smallest delay per metre"),

@@ -87,7 +87,12 @@ export const numbers = {
     most: q(2 * shortLead.length.value * catalogue.delayMost.value, "ns", 0, "2 × length × the catalogue's largest delay per metre"),
   },
   longRun: {
-    ...longRun,
+    length: longRun.length,
+    series: longRun.series,
+    resistance: longRun.resistance,
+    capacitance: longRun.capacitance,
+    tau: longRun.tau,
+    rise: longRun.rise,
     crossing: q(symmetricCrossing * longRun.tau.value, "ns", 0, "ln(V / (V − v_th)) × τ"),
     reached: q(1 - Math.exp(-sim.zeroHigh.value / longRun.tau.value), "%", 0, "1 − e^(−t/τ) at the end of a 0 bit"),
   },

@@ -155,8 +155,8 @@ export const numbers = {
     sixth: q(pinSixth, "ns", 2, "a sixth of the pin's edge time"),
     lumpedLimit: q(pinSixth / twisted.delayPerMetre, "m", 2, "a sixth of the edge ÷ delay per metre"),
   },
-  shortLead: edges.shortLead,
-  bare: edges.bare,
+  shortLead: { series: edges.shortLead.series, length: edges.shortLead.length, rise: edges.shortLead.rise },
+  bare: { rise: edges.bare.rise },
   staircase: staircase(),
   jacketed: {
     least: q(Math.min(...jacketed), "ns/m", 1, "smallest delay per metre of the catalogue's jacketed cables"),

@@ -8,7 +8,8 @@ import { DISPLAY_UNITS, type DisplayUnit } from "./display-units";
  * - `abs`: the magnitude, for "1 + 0.892" written from Γ = −0.892;
  * - `sign`: a "+" before positive numbers (reflection coefficients);
  * - `exponent`: a fixed power of ten ("523 × 10⁻⁹ H/m" with exponent −9 in H/m);
- * - `scientific`: a normalised power of ten ("3.11 × 10⁻¹⁷").
+ * - `scientific`: a normalised power of ten ("3.11 × 10⁻¹⁷");
+ * - `superscript`: a whole number as an exponent ("0.665³"), without its unit.
  */
 export type FormatOptions = {
   unit: DisplayUnit;
@@ -18,6 +19,7 @@ export type FormatOptions = {
   sign?: boolean;
   exponent?: number;
   scientific?: boolean;
+  superscript?: boolean;
 };
 
 const SUPERSCRIPT: Record<string, string> = {
@@ -54,6 +56,7 @@ function magnitudeText(magnitude: number, options: FormatOptions): { text: strin
 }
 
 export function formatQuantity(value: number, options: FormatOptions): string {
+  if (options.superscript) return superscript(Math.round(value / DISPLAY_UNITS[options.unit].scale));
   const shown = value / DISPLAY_UNITS[options.unit].scale;
   const signed = options.abs ? Math.abs(shown) : shown;
   const { text, zero } = magnitudeText(Math.abs(signed), options);

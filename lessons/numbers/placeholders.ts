@@ -9,12 +9,13 @@ import type { LessonNumber, LessonNumbers } from "./lesson-number";
  *   bare      without the unit            abs      the magnitude (Γ = −0.892 → 0.892)
  *   sign      "+" before positive numbers exp=N    a fixed power of ten (523 × 10⁻⁹)
  *   sci       a normalised power of ten (3.11 × 10⁻¹⁷)
+ *   sup       a whole number as an exponent (Γs{{n|sup}} → Γs³)
  */
 export const PLACEHOLDER = /\{\{([^{}]*)\}\}/g;
 
 type Parsed = { name: string; options: FormatOptions } | { problem: string };
 
-const FLAGS = { bare: "bare", abs: "abs", sign: "sign", sci: "scientific" } as const;
+const FLAGS = { bare: "bare", abs: "abs", sign: "sign", sci: "scientific", sup: "superscript" } as const;
 
 function parseOptions(name: string, entry: LessonNumber, options: string[]): Parsed {
   const format: FormatOptions = { unit: entry.unit, decimals: entry.decimals };
@@ -32,7 +33,7 @@ function parseOptions(name: string, entry: LessonNumber, options: string[]): Par
       }
       format.unit = argument;
     } else {
-      return { problem: `unknown option "${option}" in {{${name}}}; use dp=N, unit=U, bare, abs, sign, exp=N or sci` };
+      return { problem: `unknown option "${option}" in {{${name}}}; use dp=N, unit=U, bare, abs, sign, exp=N, sci or sup` };
     }
   }
   return { name, options: format };

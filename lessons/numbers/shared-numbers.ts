@@ -1,5 +1,6 @@
 import { awgDiameter, CABLE_KINDS, cableCatalogue, colourBits, parseSimInput, type CableKind } from "@/lib/sim";
 import { buffer5v, controllerPin3v3 } from "../drivers";
+import { receiverLevels } from "../receiver-model";
 import { quantity as q, type NumberTree } from "./lesson-number";
 
 /**
@@ -45,6 +46,21 @@ const pixel = {
   low: q(receiver.lowThreshold * vdd, "V", 1, "low threshold × VDD"),
   mid: q(vdd / 2, "V", 1, "VDD / 2"),
   clamp: q(vdd + DIODE_DROP, "V", 1, "VDD plus a silicon diode's forward drop"),
+};
+
+/** Where typical pixels switch at the default supply: the receiver model's assumption (lib/sim/receiver.ts). */
+const levels = receiverLevels(vdd);
+const TYPICAL = "the receiver model's typical band at the default supply (lessons/receiver-model.ts, lib/sim/receiver.ts)";
+const typical = {
+  bottomFraction: q(receiver.typicalSwitchingPoint - receiver.typicalSpread, "", 1, SIM_DEFAULT),
+  topFraction: q(receiver.typicalSwitchingPoint + receiver.typicalSpread, "", 1, SIM_DEFAULT),
+  hysteresisFraction: q(receiver.typicalHysteresis, "", 2, SIM_DEFAULT),
+  bottom: q(levels.typicalBottom, "V", 2, TYPICAL),
+  top: q(levels.typicalTop, "V", 2, TYPICAL),
+  hysteresis: q(levels.hysteresis, "V", 2, TYPICAL),
+  highestRise: q(levels.highestRise, "V", 3, `${TYPICAL}: the highest level at which a typical pixel reads a rise`),
+  topFall: q(levels.topFall, "V", 3, `${TYPICAL}: where a pixel switching at the top of the band reads a fall`),
+  lowestFall: q(levels.lowestFall, "V", 3, `${TYPICAL}: the lowest level at which a typical pixel reads a fall`),
 };
 
 const textbook = {
@@ -105,6 +121,7 @@ const driverNumbers = (driver: typeof controllerPin3v3 | typeof buffer5v) => ({
 export const sharedNumbers = {
   sim,
   pixel,
+  typical,
   textbook,
   catalogue,
   pin: driverNumbers(controllerPin3v3),

@@ -2,6 +2,8 @@
  * Every number the course asks a learner for, recomputed from its own formula, and the tables the
  * lessons print, recomputed from their sources:
  * - protocol timing and receiver thresholds: the simulator's defaults (parseSimInput, docs/simulator.md);
+ * - where typical pixels switch (the 3.3 V window): the simulator's typical band, switching point
+ *   ± spread with its hysteresis, from the same defaults;
  * - cable constants: the simulator's catalogue, computed from geometry with the two-wire and coax
  *   line formulas of transmission-line textbooks;
  * - wire: ASTM B258 diameters and annealed copper (1.7241e-8 Ω·m, IEC 60028) through lib/sim/awg;
@@ -35,6 +37,10 @@ const ONE_HIGH = defaults.signal.oneHigh;
 const DECISION = defaults.receiver.decisionTime;
 const HIGH = defaults.receiver.highThreshold;
 const INPUT_C = defaults.receiver.inputCapacitance;
+/** The highest level at which a typical pixel reads a rise, and where one switching at the top of the band reads a fall (5 V). */
+const TYPICAL_TOP = (defaults.receiver.typicalSwitchingPoint + defaults.receiver.typicalSpread) * 5;
+const TYPICAL_RISE = TYPICAL_TOP + (defaults.receiver.typicalHysteresis * 5) / 2;
+const TYPICAL_FALL = TYPICAL_TOP - (defaults.receiver.typicalHysteresis * 5) / 2;
 const WORD_BITS = 24;
 const LN9 = Math.log(9);
 const SPEED_OF_LIGHT = 299_792_458;
@@ -57,6 +63,11 @@ const ones = (bits: string) => [...bits].filter((b) => b === "1").length;
 
 /** Source resistance below which the doubled first arrival of `volts` clears `threshold` by `margin`. */
 const firstArrivalLimit = (z0: number, volts: number, threshold: number, margin: number) => z0 * ((2 * volts) / (threshold + margin) - 1);
+/** Source resistance above which the second arrival V·(1 − Γs²) stays `margin` above `level`. */
+function secondArrivalLimit(z0: number, volts: number, level: number, margin: number): number {
+  const deepest = Math.sqrt(1 - (level + margin) / volts);
+  return z0 * ((1 - deepest) / (1 + deepest));
+}
 
 type Formula = { source: string; value: () => number };
 
@@ -122,8 +133,8 @@ const formulas: Record<string, Formula> = {
   "series-termination/matching-resistor": { source: "R_s = Z0 − R_out (catalogue Z0)", value: () => lone.z0 - 30 },
   "series-termination/first-arrival-3v3": { source: "V_far(1) = 2·V·Z0/(R_src + Z0)", value: () => (2 * 3.3 * lone.z0) / (280 + lone.z0) },
   "series-termination/beside-ground-limit": {
-    source: "first arrival equals 0.7·VDD: R_src = Z0·(2V/V_th − 1)",
-    value: () => firstArrivalLimit(beside.z0, 3.3, HIGH * 5, 0) - 30,
+    source: "first arrival 0.3 V above the highest typical rise level: R_src = Z0·(2V/(V_rise + m) − 1)",
+    value: () => firstArrivalLimit(beside.z0, 3.3, TYPICAL_RISE, 0.3) - 30,
   },
   "series-termination/staircase-arrival": { source: "(2n − 1)·T_d with n = 3 (catalogue delay)", value: () => 5 * 15 * threeCore.delayPerMetre },
 
@@ -218,18 +229,17 @@ describe("tables printed in the lessons", () => {
     }
   });
 
-  it("lesson 6's 3.3 V window table follows R_src from 0.248·Z0 to 0.737·Z0 (0.3 V margin each side)", () => {
+  it("lesson 6's 3.3 V window table follows the first and second arrivals against the typical band (0.3 V margin each side)", () => {
     const rows = tableAfter(lessonBySlug("series-termination"), "## The 3.3 V design window");
     expect(rows).toHaveLength(5);
     const kinds = ["lone-lead", "beside-ground", "twisted-pair", "coax-75", "three-core"] as const;
     rows.forEach(([, z0, window], i) => {
       const entry = cableCatalogue[kinds[i]];
       expect(closeTo(number(z0), entry.z0, 0.005)).toBe(true);
-      const upper = firstArrivalLimit(entry.z0, 3.3, HIGH * 5, 0.3) - 30;
+      const upper = firstArrivalLimit(entry.z0, 3.3, TYPICAL_RISE, 0.3) - 30;
       const stated = [...window.matchAll(/(\d+(?:\.\d+)?) Ω/g)].map((m) => Number(m[1]));
       expect(Math.abs(stated[stated.length - 1] - upper), `${kinds[i]} upper edge`).toBeLessThanOrEqual(1);
-      const ringLimit = Math.sqrt((1.5 - 0.3) / 3.3);
-      const lower = Math.max(0, entry.z0 * ((1 - ringLimit) / (1 + ringLimit)) - 30);
+      const lower = Math.max(0, secondArrivalLimit(entry.z0, 3.3, TYPICAL_FALL, 0.3) - 30);
       expect(Math.abs(stated[0] - lower), `${kinds[i]} lower edge`).toBeLessThanOrEqual(1);
     });
   });
