@@ -26,10 +26,10 @@ function lessonFolder<L extends LessonInput>(folder: string, lesson: L, parts: r
 
 export const lessonSources = [
   lessonFolder("01-pixel-data-stream", pixelDataStream, ["lab", "numbers"]),
-  lessonFolder("02-logic-levels", logicLevels, ["lab"]),
+  lessonFolder("02-logic-levels", logicLevels, ["lab", "numbers"]),
   lessonFolder("03-edges", edges, ["lab", "numbers"]),
   lessonFolder("04-transmission-line", transmissionLine, ["lab", "numbers"]),
-  lessonFolder("05-reflections", reflections, ["lab"]),
+  lessonFolder("05-reflections", reflections, ["lab", "numbers"]),
   lessonFolder("06-series-termination", seriesTermination, ["lab", "numbers"]),
   lessonFolder("07-designing-a-run", designingARun, ["lab", "bench"]),
   lessonFolder("08-on-the-bench", onTheBench, ["lab", "bench"]),

@@ -285,9 +285,11 @@ describe("worked examples printed in the lessons", () => {
     expect(text).toContain(`the launched step is 3.3 V × ${z0} / ${CASE4_SOURCE + z0} = ${((3.3 * lone.z0) / (CASE4_SOURCE + lone.z0)).toFixed(2)} V`);
     const n = settlingArrival(gammaS, 0.01);
     expect(n).toBe(6);
-    expect(text).toContain(`ln 0.01 / ln ${Math.abs(gammaS).toFixed(3)} = ${(Math.log(0.01) / Math.log(Math.abs(gammaS))).toFixed(1)}: the sixth arrival, at ${2 * n - 1} × T_d = ${Math.round((2 * n - 1) * CASE4_DELAY * 1e9)} ns`);
+    expect(text).toContain(`ln 0.01 / ln ${Math.abs(gammaS).toFixed(3)} = ${(Math.log(0.01) / Math.log(Math.abs(gammaS))).toFixed(1)}: arrival ${n}, at ${2 * n - 1} × T_d = ${Math.round((2 * n - 1) * CASE4_DELAY * 1e9)} ns`);
     expect(text).toContain(`A 0 bit is high for only ${Math.round(ZERO_HIGH * 1e9)} ns`);
-    expect(text).toContain(`only ${(3.3 * (1 - gammaS ** 2) - 5 / 2).toFixed(1)} V above mid-supply`);
+    const at = (n: number) => (2 * n - 1) * CASE4_DELAY * 1e9;
+    expect(text).toContain(`The ${(3.3 * (1 - gammaS ** 2)).toFixed(2)} V plateau lies inside the band where pixels switch`);
+    expect(text).toContain(`sees the pulse start at ${at(1).toFixed(1)} ns, end at ${Math.round(at(2))} ns and start again at ${Math.round(at(3))} ns`);
     expect(text).toContain(`(T_d = ${(5 * lone.delayPerMetre * 1e9).toFixed(1)} ns)`);
     expect(text).toContain(`10 m of lone lead has ${(10 * lone.perMetre.resistance).toFixed(2)} Ω against ${z0} Ω`);
     expect(text).toContain(`each one round trip long (${Math.round(2 * CASE4_DELAY * 1e9)} ns on 10 m of lone lead)`);

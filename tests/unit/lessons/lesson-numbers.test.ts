@@ -11,6 +11,7 @@ import { simulatedValues } from "@/lessons/numbers/simulated-values";
 import { plainNumbers as pixelDataStream } from "@/lessons/01-pixel-data-stream/numbers";
 import { plainNumbers as edges } from "@/lessons/03-edges/numbers";
 import { plainNumbers as transmissionLine } from "@/lessons/04-transmission-line/numbers";
+import { plainNumbers as reflections } from "@/lessons/05-reflections/numbers";
 import { plainNumbers as seriesTermination } from "@/lessons/06-series-termination/numbers";
 import { typedNumbers } from "./support/typed-numbers";
 
@@ -19,6 +20,7 @@ const converted: Record<string, readonly PlainNumber[]> = {
   "pixel-data-stream": pixelDataStream,
   edges,
   "transmission-line": transmissionLine,
+  reflections,
   "series-termination": seriesTermination,
 };
 
