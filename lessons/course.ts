@@ -31,7 +31,7 @@ export const lessonSources = [
   lessonFolder("04-transmission-line", transmissionLine, ["lab", "numbers"]),
   lessonFolder("05-reflections", reflections, ["lab", "numbers"]),
   lessonFolder("06-series-termination", seriesTermination, ["lab", "numbers"]),
-  lessonFolder("07-designing-a-run", designingARun, ["lab", "bench"]),
+  lessonFolder("07-designing-a-run", designingARun, ["lab", "bench", "numbers"]),
   lessonFolder("08-on-the-bench", onTheBench, ["lab", "bench"]),
 ] as const;
 

@@ -17,6 +17,7 @@ export const coursePlainNumbers: PlainNumber[] = [
   { text: "5 V pixel", why: "the class of pixel the course's examples drive (the simulator's default supply)" },
   { text: "5 V strip", why: "the class of strip the course's examples power" },
   { text: "level shifter to 5 V", why: "the one-direction 5 V buffer of lesson 2" },
+  { text: "5 V level shifter", why: "the one-direction 5 V buffer of lesson 2" },
   { text: "10–90 %", why: "the rise-time convention of oscilloscopes and datasheets" },
   { text: "75 Ω coax", why: "name of a catalogue cable (lib/sim/cables.ts label)" },
   { text: "coax-75", why: "id of a catalogue cable" },

@@ -139,8 +139,8 @@ const formulas: Record<string, Formula> = {
   "series-termination/staircase-arrival": { source: "(2n − 1)·T_d with n = 3 (catalogue delay)", value: () => 5 * 15 * threeCore.delayPerMetre },
 
   "designing-a-run/twisted-pair-limit": {
-    source: "first arrival 0.3 V above 0.7·VDD",
-    value: () => firstArrivalLimit(twisted.z0, 3.3, HIGH * 5, 0.3) - 30,
+    source: "first arrival 0.3 V above the highest typical rise level",
+    value: () => firstArrivalLimit(twisted.z0, 3.3, TYPICAL_RISE, 0.3) - 30,
   },
   "designing-a-run/resistor-tolerance": { source: "IEC 60063: E24 with ±5 %", value: () => 68 * 1.05 },
   "designing-a-run/supply-drop": { source: "Ohm's law over the loop; 18 AWG from ASTM B258 + IEC 60028", value: () => 10 * 2 * 5 * awgResistancePerMetre(18) },

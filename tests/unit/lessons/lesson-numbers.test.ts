@@ -13,6 +13,7 @@ import { plainNumbers as edges } from "@/lessons/03-edges/numbers";
 import { plainNumbers as transmissionLine } from "@/lessons/04-transmission-line/numbers";
 import { plainNumbers as reflections } from "@/lessons/05-reflections/numbers";
 import { plainNumbers as seriesTermination } from "@/lessons/06-series-termination/numbers";
+import { plainNumbers as designingARun } from "@/lessons/07-designing-a-run/numbers";
 import { typedNumbers } from "./support/typed-numbers";
 
 /** The lessons whose text quotes computed numbers only through placeholders, with their own plain numbers. */
@@ -22,6 +23,7 @@ const converted: Record<string, readonly PlainNumber[]> = {
   "transmission-line": transmissionLine,
   reflections,
   "series-termination": seriesTermination,
+  "designing-a-run": designingARun,
 };
 
 type RawBlock = Record<string, unknown>;
