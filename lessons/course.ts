@@ -32,7 +32,7 @@ export const lessonSources = [
   lessonFolder("05-reflections", reflections, ["lab", "numbers"]),
   lessonFolder("06-series-termination", seriesTermination, ["lab", "numbers"]),
   lessonFolder("07-designing-a-run", designingARun, ["lab", "bench", "numbers"]),
-  lessonFolder("08-on-the-bench", onTheBench, ["lab", "bench"]),
+  lessonFolder("08-on-the-bench", onTheBench, ["lab", "bench", "numbers"]),
 ] as const;
 
 export const course = {

@@ -14,6 +14,7 @@ import { plainNumbers as transmissionLine } from "@/lessons/04-transmission-line
 import { plainNumbers as reflections } from "@/lessons/05-reflections/numbers";
 import { plainNumbers as seriesTermination } from "@/lessons/06-series-termination/numbers";
 import { plainNumbers as designingARun } from "@/lessons/07-designing-a-run/numbers";
+import { plainNumbers as onTheBench } from "@/lessons/08-on-the-bench/numbers";
 import { typedNumbers } from "./support/typed-numbers";
 
 /** The lessons whose text quotes computed numbers only through placeholders, with their own plain numbers. */
@@ -24,6 +25,7 @@ const converted: Record<string, readonly PlainNumber[]> = {
   reflections,
   "series-termination": seriesTermination,
   "designing-a-run": designingARun,
+  "on-the-bench": onTheBench,
 };
 
 type RawBlock = Record<string, unknown>;
