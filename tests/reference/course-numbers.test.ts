@@ -23,6 +23,7 @@ import {
   awgResistancePerMetre,
   cableCatalogue,
   colourBits,
+  eSeriesValues,
   parseSimInput,
   perMetreFromGeometry,
   type TwoWireGeometry,
@@ -41,6 +42,7 @@ const INPUT_C = defaults.receiver.inputCapacitance;
 const TYPICAL_TOP = (defaults.receiver.typicalSwitchingPoint + defaults.receiver.typicalSpread) * 5;
 const TYPICAL_RISE = TYPICAL_TOP + (defaults.receiver.typicalHysteresis * 5) / 2;
 const TYPICAL_FALL = TYPICAL_TOP - (defaults.receiver.typicalHysteresis * 5) / 2;
+const TYPICAL_LOWEST_FALL = (defaults.receiver.typicalSwitchingPoint - defaults.receiver.typicalSpread) * 5 - (defaults.receiver.typicalHysteresis * 5) / 2;
 const WORD_BITS = 24;
 const LN9 = Math.log(9);
 const SPEED_OF_LIGHT = 299_792_458;
@@ -261,6 +263,31 @@ const textOf = (slug: string) => lessonBySlug(slug).blocks.flatMap((b) => (b.kin
 const signed = (cell: string) => Number(cell.replace("−", "-").replace("+", ""));
 
 describe("worked examples printed in the lessons", () => {
+  it("lesson 1's colour word for red 200 in GRB order is the simulator's", () => {
+    const bits = colourBits([[200, 0, 0]], "GRB");
+    const grouped = (byte: string) => `${byte.slice(0, 4)} ${byte.slice(4)}`;
+    expect(textOf("pixel-data-stream")).toContain([bits.slice(0, 8), bits.slice(8, 16), bits.slice(16)].map(grouped).join(" · "));
+    expect(textOf("pixel-data-stream")).toContain(`So 200 = ${grouped(bits.slice(8, 16))}`);
+  });
+
+  it("lesson 6's four 3.3 V cases fall where the text puts them", () => {
+    const arrival = (series: number, z0: number, n: number) => 3.3 * (1 - gamma(30 + series, z0) ** n);
+    expect(gamma(30 + 250, beside.z0), "beside ground, 250 Ω: a staircase").toBeGreaterThan(0);
+    for (const [series, z0] of [[33, beside.z0], [250, lone.z0]]) {
+      expect(arrival(series, z0, 1), `${series} Ω: first arrival above the typical rise level`).toBeGreaterThan(TYPICAL_RISE);
+      expect(arrival(series, z0, 2), `${series} Ω: second arrival above the top fall level`).toBeGreaterThan(TYPICAL_FALL);
+    }
+    expect(arrival(33, lone.z0, 2), "lone lead, 33 Ω: the second arrival below every typical fall level").toBeLessThan(TYPICAL_LOWEST_FALL);
+  });
+
+  it("lesson 6's E12 and E24 lists are IEC 60063's", () => {
+    const e12 = eSeriesValues("E12", 10, 82);
+    const e24Only = eSeriesValues("E24", 10, 91).filter((r) => !e12.includes(r));
+    const text = textOf("series-termination");
+    expect(text).toContain(`twelve values per decade, ${e12.join(", ")};`);
+    expect(text).toContain(`E24 adds ${e24Only.join(", ")};`);
+  });
+
   it("lesson 5's step-by-step bounce table follows (2n − 1)·T_d, 2·V_launch·Γs^(n−1) and V·(1 − Γs^n)", () => {
     const rows = tableAfter(lessonBySlug("reflections"), "## A bounce diagram, step by step");
     expect(rows).toHaveLength(6);
