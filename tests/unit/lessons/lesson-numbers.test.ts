@@ -17,7 +17,11 @@ import { plainNumbers as designingARun } from "@/lessons/07-designing-a-run/numb
 import { plainNumbers as onTheBench } from "@/lessons/08-on-the-bench/numbers";
 import { typedNumbers } from "./support/typed-numbers";
 
-/** The lessons whose text quotes computed numbers only through placeholders, with their own plain numbers. */
+/**
+ * The lessons whose text quotes computed numbers only through placeholders, with their own plain
+ * numbers. Lesson 2 (logic-levels) joins when its receiver teaching is rewritten with the receiver model.
+ */
+const NOT_YET_CONVERTED = ["logic-levels"];
 const converted: Record<string, readonly PlainNumber[]> = {
   "pixel-data-stream": pixelDataStream,
   edges,
@@ -140,6 +144,17 @@ describe("simulated numbers", () => {
 
 describe("typed numbers in converted lessons", () => {
   const sources = lessonSources.filter((source) => Object.hasOwn(converted, source.lesson.slug));
+
+  it("covers every lesson but the ones named as not yet converted", () => {
+    const slugs = lessonSources.map((source) => source.lesson.slug);
+    expect([...Object.keys(converted), ...NOT_YET_CONVERTED].sort()).toEqual([...slugs].sort());
+  });
+
+  it("lists no course-wide plain number that no lesson uses", () => {
+    const text = sources.map((source) => writtenText(source.lesson)).join("\n");
+    const { used } = typedNumbers(text, coursePlainNumbers);
+    expect(coursePlainNumbers.filter((phrase) => !used.has(phrase.text)).map((p) => p.text)).toEqual([]);
+  });
 
   it.each(sources.map((source) => [source.file, source] as const))("%s types no number that is not a placeholder or a listed plain number", (_, source) => {
     const own = converted[source.lesson.slug];
