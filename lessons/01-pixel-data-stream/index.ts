@@ -1,3 +1,4 @@
+import { buffer5v } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
@@ -68,7 +69,7 @@ The simulator adds two more rules, which you will meet on the workbench. A pulse
         zeroHigh: sim.zeroHigh.value,
         oneHigh: sim.oneHigh.value,
         decisionTime: sim.decisionTime.value,
-        highVoltage: 5,
+        highVoltage: buffer5v.highVoltage,
         editableBits: true,
         slider: { field: "oneHigh", min: 0.3e-6, max: 1.2e-6, step: 0.05e-6 },
       },

@@ -1,5 +1,6 @@
 import { buffer5v } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
+import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
 import { numbers } from "./numbers";
@@ -158,7 +159,7 @@ Compared with data beside ground, the second return raised C′ by a third and c
         highVoltage: buffer5v.highVoltage,
         outputResistance: buffer5v.outputResistance,
         edgeTime: buffer5v.edgeTime,
-        supplyVoltage: 5,
+        supplyVoltage: sharedNumbers.pixel.vdd.value,
         bits: "0101",
         slider: { field: "length", min: 1, max: 25, step: 1 },
       },
