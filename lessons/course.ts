@@ -11,7 +11,7 @@ import type { CourseInput, LessonInput } from "./schema";
 export const COURSE_FILE = "lessons/course.ts";
 
 /** The parts of a lesson that live in their own file beside its index.ts. */
-export type LessonPart = "lab" | "bench";
+export type LessonPart = "lab" | "bench" | "numbers";
 
 /** A lesson with the files it is written in, so a validation error can point at the file that holds the field. */
 export type LessonSource<L = unknown> = { file: string; lesson: L; partFiles: Partial<Record<LessonPart, string>> };
@@ -25,14 +25,14 @@ function lessonFolder<L extends LessonInput>(folder: string, lesson: L, parts: r
 }
 
 export const lessonSources = [
-  lessonFolder("01-pixel-data-stream", pixelDataStream, ["lab"]),
-  lessonFolder("02-logic-levels", logicLevels, ["lab"]),
-  lessonFolder("03-edges", edges, ["lab"]),
-  lessonFolder("04-transmission-line", transmissionLine, ["lab"]),
-  lessonFolder("05-reflections", reflections, ["lab"]),
-  lessonFolder("06-series-termination", seriesTermination, ["lab"]),
-  lessonFolder("07-designing-a-run", designingARun, ["lab", "bench"]),
-  lessonFolder("08-on-the-bench", onTheBench, ["lab", "bench"]),
+  lessonFolder("01-pixel-data-stream", pixelDataStream, ["lab", "numbers"]),
+  lessonFolder("02-logic-levels", logicLevels, ["lab", "numbers"]),
+  lessonFolder("03-edges", edges, ["lab", "numbers"]),
+  lessonFolder("04-transmission-line", transmissionLine, ["lab", "numbers"]),
+  lessonFolder("05-reflections", reflections, ["lab", "numbers"]),
+  lessonFolder("06-series-termination", seriesTermination, ["lab", "numbers"]),
+  lessonFolder("07-designing-a-run", designingARun, ["lab", "bench", "numbers"]),
+  lessonFolder("08-on-the-bench", onTheBench, ["lab", "bench", "numbers"]),
 ] as const;
 
 export const course = {

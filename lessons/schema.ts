@@ -2,6 +2,8 @@ import { z } from "zod";
 import { cableKindSchema } from "./cable-kinds";
 import { figureBlockSchema } from "./figures";
 import { JUDGEMENTS } from "@/lib/sim";
+import { lessonNumbersSchema } from "./numbers/lesson-number";
+import { resolveText } from "./numbers/resolve-text";
 
 const slug = z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, "must be a kebab-case slug");
 const markdown = z.string().trim().min(1);
@@ -305,6 +307,11 @@ export const benchExerciseSchema = z
     flagRepeats(ctx, idsAt("rubric", bench.rubric));
   });
 
+/**
+ * A lesson as written: its text quotes computed numbers as `{{name}}` placeholders
+ * (lessons/numbers/placeholders.ts), printed from `numbers` when the lesson is loaded; a
+ * placeholder naming no number, or with an option it cannot take, fails validation at its field.
+ */
 export const lessonSchema = z
   .strictObject({
     slug,
@@ -312,6 +319,7 @@ export const lessonSchema = z
     title: z.string().trim().min(1),
     summary: z.string().trim().min(1),
     minutes: z.number().int().positive().max(240),
+    numbers: lessonNumbersSchema.default({}),
     blocks: z.array(blockSchema).min(1),
     lab: labSchema.nullable(),
     bench: benchExerciseSchema.optional(),
@@ -322,7 +330,11 @@ export const lessonSchema = z
       ctx.addIssue({ code: "custom", path: ["blocks"], message: `a lesson needs 3 to 6 quick checks, found ${checks.length}` });
     }
     flagRepeats(ctx, checks);
-  });
+  })
+  .transform(({ numbers, ...content }, ctx) => ({
+    numbers,
+    ...resolveText(content, numbers, ({ path, message }) => ctx.addIssue({ code: "custom", path, message })),
+  }));
 
 export const courseSchema = z
   .strictObject({

@@ -1,6 +1,8 @@
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
+import { lessonNumbers } from "../numbers/lesson-numbers";
 import { RECEIVER_MODEL_MARKDOWN, receiverLevels } from "../receiver-model";
+import { numbers } from "./numbers";
 
 const typical5 = receiverLevels(5);
 
@@ -11,6 +13,7 @@ export const lesson = {
   summary:
     "What voltage a pixel accepts as high and as low, why a 3.3 V controller driving a 5 V pixel lives on the edge, how a level shifter fixes it, and how ground offsets and noise eat the margin that is left.",
   minutes: 40,
+  numbers: lessonNumbers(numbers),
   blocks: [
     {
       kind: "text",

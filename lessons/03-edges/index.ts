@@ -1,5 +1,11 @@
+import { buffer5v } from "../drivers";
+import { lessonNumbers } from "../numbers/lesson-numbers";
+import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
+import { numbers } from "./numbers";
+
+const { sim, pixel } = sharedNumbers;
 
 export const lesson = {
   slug: "edges",
@@ -8,6 +14,7 @@ export const lesson = {
   summary:
     "Why a data edge is never vertical, how the resistance of the driver and the series resistor combine with capacitance into a time constant, what that does to the pulse widths a pixel measures, and where the simple RC picture stops being true.",
   minutes: 40,
+  numbers: lessonNumbers(numbers),
   blocks: [
     {
       kind: "text",
@@ -20,70 +27,70 @@ Lesson 1 drew the data signal as clean rectangles, and lesson 2 said where the p
 
 The **rise time** of an edge is the time it takes to go from 10 % to 90 % of its final swing. The **fall time** is the same for a falling edge, 90 % down to 10 %. Measuring between 10 % and 90 % rather than 0 % and 100 % avoids the slow, hard-to-pin-down start and finish of a real edge; it is the convention used by oscilloscopes and datasheets alike, and by the course simulator.
 
-The driver itself is not instantaneous. The course simulator models a controller output or buffer as a voltage that ramps between 0 V and its high level in an **edge time** (3 ns for the 5 V buffers in these labs, 4 ns for a 3.3 V controller pin; these are the course's driver models, chosen to be typical rather than taken from one part) behind an **output resistance** (20 Ω and 30 Ω in the same models). At the driver's own pin, with nothing connected, you would see a 3 ns edge. Everything connected to the pin slows it down.
+The driver itself is not instantaneous. The course simulator models a controller output or buffer as a voltage that ramps between 0 V and its high level in an **edge time** ({{buffer.edge}} for the 5 V buffers in these labs, {{pin.edge}} for a 3.3 V controller pin; these are the course's driver models, chosen to be typical rather than taken from one part) behind an **output resistance** ({{buffer.resistance}} and {{pin.resistance}} in the same models). At the driver's own pin, with nothing connected, you would see a {{buffer.edge}} edge. Everything connected to the pin slows it down.
 
 ## Resistance and capacitance
 
-Whatever the driver pushes into has **capacitance**: charge must flow into it before its voltage can rise. The pixel's input has a few picofarads (5 pF in the course simulator). A cable has much more: its two conductors, close together and separated by insulation, form a long thin capacitor. The course catalogue gives about 59.5 pF per metre for a data conductor with a ground conductor beside it in one jacket, so 2 m of it holds as much as 24 pixel inputs.
+Whatever the driver pushes into has **capacitance**: charge must flow into it before its voltage can rise. The pixel's input has a few picofarads ({{sim.inputCapacitance}} in the course simulator). A cable has much more: its two conductors, close together and separated by insulation, form a long thin capacitor. The course catalogue gives about {{beside.capacitance|bare}} pF per metre for a data conductor with a ground conductor beside it in one jacket, so {{shortLead.length}} of it holds as much as {{pixelsInTwoMetres}} pixel inputs.
 
 The charge has to arrive through **resistance**: the driver's output resistance plus any resistor you fit in series with the data line. A resistance R feeding a capacitance C from a step of V volts charges it along the curve
 
 v(t) = V × (1 − e^(−t/τ)), with the **time constant** τ = R × C.
 
-After one time constant the capacitor has reached 63 % of the way, after two 86 %, after three 95 %. It never quite arrives, which is why rise time is measured 10 % to 90 %.
+After one time constant the capacitor has reached {{charged.one}} of the way, after two {{charged.two}}, after three {{charged.three}}. It never quite arrives, which is why rise time is measured 10 % to 90 %.
 
 ### The rise-time rule
 
-Solve the curve for the 10 % and 90 % points: v = 0.1 V at t = τ × ln(1/0.9) = 0.105 τ, and v = 0.9 V at t = τ × ln(10) = 2.303 τ. The difference is
+Solve the curve for the 10 % and 90 % points: v = 0.1 V at t = τ × ln(1/0.9) = {{tenPercentAt}} τ, and v = 0.9 V at t = τ × ln(10) = {{ninetyPercentAt}} τ. The difference is
 
-t_rise = τ × ln 9 ≈ 2.2 × τ = 2.2 × R × C.
+t_rise = τ × ln 9 ≈ {{textbook.ln9}} × τ = {{textbook.ln9}} × R × C.
 
-That is the one formula to remember from this lesson: **rise time ≈ 2.2 R C**. It is a textbook result for a single resistor charging a single capacitor, and the same for the fall.
+That is the one formula to remember from this lesson: **rise time ≈ {{textbook.ln9}} R C**. It is a textbook result for a single resistor charging a single capacitor, and the same for the fall.
 
 ### Worked example: a short lead
 
-A 5 V buffer (20 Ω) feeds a pixel through a 330 Ω series resistor and 2 m of cable with 59.5 pF/m.
+A 5 V buffer ({{buffer.resistance}}) feeds a pixel through a {{shortLead.series}} series resistor and {{shortLead.length}} of cable with {{beside.capacitance}}.
 
-- Resistance: R = 20 Ω + 330 Ω = 350 Ω
-- Capacitance: C = 2 m × 59.5 pF/m + 5 pF = 119 pF + 5 pF = 124 pF
-- Time constant: τ = 350 Ω × 124 pF = 43.4 ns
-- Rise time: 2.2 × 43.4 ns ≈ 95 ns
+- Resistance: R = {{buffer.resistance}} + {{shortLead.series}} = {{shortLead.resistance}}
+- Capacitance: C = {{shortLead.length}} × {{beside.capacitance}} + {{sim.inputCapacitance}} = {{shortLead.cableCapacitance}} + {{sim.inputCapacitance}} = {{shortLead.capacitance}}
+- Time constant: τ = {{shortLead.resistance}} × {{shortLead.capacitance}} = {{shortLead.tau}}
+- Rise time: {{textbook.ln9}} × {{shortLead.tau}} ≈ {{shortLead.rise}}
 
-The 3 ns edge of the buffer has become a 95 ns edge at the pixel. Take away the series resistor and the same arithmetic gives τ = 20 Ω × 124 pF = 2.5 ns and a rise of about 5.5 ns, close to the driver's own edge.
+The {{buffer.edge}} edge of the buffer has become a {{shortLead.rise}} edge at the pixel. Take away the series resistor and the same arithmetic gives τ = {{buffer.resistance}} × {{shortLead.capacitance}} = {{bare.tau}} and a rise of about {{bare.rise}}, close to the driver's own edge.
 `,
     },
     {
       kind: "figure",
       figure: "rc-edge",
       caption:
-        "A 0.4 µs pulse (a 0 bit) from a 5 V driver of 20 Ω through the series resistor into 124 pF. Move the resistor and watch the 10–90 % rise time and the points where the pulse crosses the pixel's thresholds.",
+        "A {{sim.zeroHigh}} pulse (a 0 bit) from a 5 V driver of {{buffer.resistance}} through the series resistor into {{shortLead.capacitance}}. Move the resistor and watch the 10–90 % rise time and the points where the pulse crosses the pixel's thresholds.",
       params: {
-        highVoltage: 5,
-        outputResistance: 20,
-        seriesResistance: 330,
-        capacitance: 124e-12,
-        supplyVoltage: 5,
-        highThreshold: 0.7,
-        lowThreshold: 0.3,
-        highTime: 0.4e-6,
+        highVoltage: buffer5v.highVoltage,
+        outputResistance: buffer5v.outputResistance,
+        seriesResistance: numbers.shortLead.series.value,
+        capacitance: numbers.shortLead.capacitance.value,
+        supplyVoltage: pixel.vdd.value,
+        highThreshold: sim.highThreshold.value,
+        lowThreshold: sim.lowThreshold.value,
+        highTime: sim.zeroHigh.value,
         slider: { field: "seriesResistance", min: 0, max: 3300, step: 10 },
       },
     },
     {
       kind: "check",
       id: "time-constant",
-      prompt: "A 20 Ω driver feeds 124 pF through a 330 Ω series resistor. What is the time constant τ?",
-      answer: { value: 350 * 124e-12, unit: "ns", tolerance: 0.02 },
+      prompt: "A {{buffer.resistance}} driver feeds {{shortLead.capacitance}} through a {{shortLead.series}} series resistor. What is the time constant τ?",
+      answer: { value: numbers.shortLead.tau.value, unit: "ns", tolerance: 0.02 },
       hint: "Add the resistances in series, then τ = R × C.",
-      explanation: "R = 20 Ω + 330 Ω = 350 Ω. τ = 350 Ω × 124 × 10⁻¹² F = 43.4 × 10⁻⁹ s = 43.4 ns.",
+      explanation: "R = {{buffer.resistance}} + {{shortLead.series}} = {{shortLead.resistance}}. τ = {{shortLead.resistance}} × {{shortLead.capacitance|unit=F|exp=-12|dp=0}} = {{shortLead.tau|unit=s|exp=-9}} = {{shortLead.tau}}.",
     },
     {
       kind: "check",
       id: "rise-time",
       prompt: "What 10–90 % rise time does that time constant give?",
-      answer: { value: Math.log(9) * 350 * 124e-12, unit: "ns", tolerance: 0.03 },
-      hint: "t_rise = τ × ln 9 ≈ 2.2 × τ.",
-      explanation: "2.2 × 43.4 ns ≈ 95 ns (exactly, ln 9 × 43.4 ns = 95.4 ns).",
+      answer: { value: numbers.shortLead.rise.value, unit: "ns", tolerance: 0.03 },
+      hint: "t_rise = τ × ln 9 ≈ {{textbook.ln9}} × τ.",
+      explanation: "{{textbook.ln9}} × {{shortLead.tau}} ≈ {{shortLead.rise}} (exactly, ln 9 × {{shortLead.tau}} = {{shortLead.rise|dp=1}}).",
     },
     {
       kind: "text",
@@ -100,44 +107,44 @@ t = τ × ln(V / (V − v_th)).
 
 And on the way down, starting from V, the time to fall to v_th is t = τ × ln(V / v_th).
 
-For a 5 V driver into a 5 V pixel (thresholds 3.5 V and 1.5 V):
+For a 5 V driver into a 5 V pixel (thresholds {{pixel.high}} and {{pixel.low}}):
 
-- rising to 3.5 V: τ × ln(5 / 1.5) = 1.204 τ
-- falling to 1.5 V: τ × ln(5 / 1.5) = 1.204 τ
+- rising to {{pixel.high}}: τ × ln({{buffer.volts|bare}} / {{symmetric.gap|bare}}) = {{symmetric.crossing}} τ
+- falling to {{pixel.low}}: τ × ln({{buffer.volts|bare}} / {{pixel.low|bare}}) = {{symmetric.crossing}} τ
 
-The two delays are **equal**. The pulse arrives late but with its width intact, because the 0.7 and 0.3 thresholds sit symmetrically in the swing. This is the good news of this lesson: for a full-swing driver, a symmetric RC edge delays the pulse without distorting it, as long as the edge has time to finish.
+The two delays are **equal**. The pulse arrives late but with its width intact, because the {{sim.highThreshold}} and {{sim.lowThreshold}} thresholds sit symmetrically in the swing. This is the good news of this lesson: for a full-swing driver, a symmetric RC edge delays the pulse without distorting it, as long as the edge has time to finish.
 
 ### When the edge cannot finish
 
-It stops being harmless when the edge is slow compared with the pulse. A 0 bit is high for only 0.4 µs. If the voltage has not reached the high threshold by the time the driver falls again, the pixel sees no pulse at all and the slot decodes as "x". For a full-swing 5 V driver that needs 1.204 τ < 0.4 µs, so τ must stay well under 330 ns. Long before that limit, the pulse stops reaching the full 5 V before it falls, so the fall starts lower, crosses 1.5 V sooner and the measured width shrinks. Every nanosecond lost comes out of the 200 ns timing margin.
+It stops being harmless when the edge is slow compared with the pulse. A 0 bit is high for only {{sim.zeroHigh}}. If the voltage has not reached the high threshold by the time the driver falls again, the pixel sees no pulse at all and the slot decodes as "x". For a full-swing 5 V driver that needs {{symmetric.crossing}} τ < {{sim.zeroHigh}}, so τ must stay well under {{symmetric.tauLimit}}. Long before that limit, the pulse stops reaching the full {{buffer.volts}} before it falls, so the fall starts lower, crosses {{pixel.low}} sooner and the measured width shrinks. Every nanosecond lost comes out of the {{sim.timingMargin}} timing margin.
 
 ### When the thresholds are not symmetric
 
-The delays are equal only when the driver's swing is centred on the thresholds. Suppose the driver only reaches 4.5 V (a weak output, or a 5 V buffer on a sagging supply) while the pixel runs at 5 V:
+The delays are equal only when the driver's swing is centred on the thresholds. Suppose the driver only reaches {{weak.volts}} (a weak output, or a 5 V buffer on a sagging supply) while the pixel runs at {{pixel.vdd}}:
 
-- rising to 3.5 V: τ × ln(4.5 / 1.0) = 1.504 τ
-- falling to 1.5 V: τ × ln(4.5 / 1.5) = 1.099 τ
+- rising to {{pixel.high}}: τ × ln({{weak.volts|bare}} / {{weak.riseGap|bare}}) = {{weak.rise}} τ
+- falling to {{pixel.low}}: τ × ln({{weak.volts|bare}} / {{pixel.low|bare}}) = {{weak.fall}} τ
 
-The rising crossing is late by 0.4 τ more than the falling one, so **every pulse shrinks by about 0.4 τ**. With τ = 170 ns that is 70 ns gone from every pulse: a 1 bit's 200 ns margin drops to 130 ns, and nothing else has gone wrong yet. And with a 3.3 V driver into a 5 V pixel, the RC curve approaches 3.3 V and never crosses 3.5 V at all: no amount of waiting helps. That is lesson 2's problem seen through the edge.
+The rising crossing is late by {{weak.shrink}} τ more than the falling one, so **every pulse shrinks by about {{weak.shrink}} τ**. With τ = {{weak.tau}} that is {{weak.lost}} gone from every pulse: a 1 bit's {{sim.timingMargin}} margin drops to {{weak.left}}, and nothing else has gone wrong yet. And with a 3.3 V driver into a 5 V pixel, the RC curve approaches {{pin.volts}} and never crosses {{pixel.high}} at all: no amount of waiting helps. That is lesson 2's problem seen through the edge.
 `,
     },
     {
       kind: "check",
       id: "cable-capacitance",
       prompt:
-        "A pixel (5 pF input) sits at the end of 4 m of cable with 59.5 pF per metre. What total capacitance does the driver have to charge, in the RC picture?",
-      answer: { value: 4 * 59.5e-12 + 5e-12, unit: "pF", tolerance: 0.02 },
+        "A pixel ({{sim.inputCapacitance}} input) sits at the end of {{fourMetres.length}} of cable with {{beside.capacitance|bare}} pF per metre. What total capacitance does the driver have to charge, in the RC picture?",
+      answer: { value: numbers.fourMetres.capacitance.value, unit: "pF", tolerance: 0.02 },
       hint: "Capacitance per metre times length, plus the pixel's input.",
-      explanation: "4 m × 59.5 pF/m = 238 pF; plus 5 pF gives 243 pF.",
+      explanation: "{{fourMetres.length}} × {{beside.capacitance}} = {{fourMetres.cableCapacitance}}; plus {{sim.inputCapacitance}} gives {{fourMetres.capacitance}}.",
     },
     {
       kind: "check",
       id: "largest-resistance",
       prompt:
-        "With that 243 pF load, what is the largest total resistance (driver plus series resistor) that keeps the 10–90 % rise time at or under 100 ns?",
-      answer: { value: 100e-9 / (Math.log(9) * 243e-12), unit: "ohm", tolerance: 0.03 },
-      hint: "Rearrange t_rise = 2.2 × R × C for R.",
-      explanation: "R = t_rise / (2.2 × C) = 100 ns / (2.2 × 243 pF) ≈ 187 Ω (with ln 9 in place of 2.2: 187 Ω too).",
+        "With that {{fourMetres.capacitance}} load, what is the largest total resistance (driver plus series resistor) that keeps the 10–90 % rise time at or under {{fourMetres.riseLimit}}?",
+      answer: { value: numbers.fourMetres.largestR.value, unit: "ohm", tolerance: 0.03 },
+      hint: "Rearrange t_rise = {{textbook.ln9}} × R × C for R.",
+      explanation: "R = t_rise / ({{textbook.ln9}} × C) = {{fourMetres.riseLimit}} / ({{textbook.ln9}} × {{fourMetres.capacitance}}) ≈ {{fourMetres.largestRByRule}} (with ln 9 in place of {{textbook.ln9}}: {{fourMetres.largestR}}).",
     },
     {
       kind: "text",
@@ -151,10 +158,10 @@ A pixel's data input has **clamp diodes**, one to its ground and one to its supp
 - **The pixel is unpowered while the controller is on.** The strip's supply is off or its fuse has blown, but the controller still sends data. The driver pushes current through the upper clamp diode into the dead pixel's supply rail. This is called back-powering, and it can partly power the chip in strange ways.
 - **The line overshoots.** On a cable, as lesson 5 shows, the far end can swing well above the supply rail for a few nanoseconds, and the clamp diode catches it.
 
-The series resistor limits that current. Take a silicon diode's forward drop as about 0.7 V (a textbook figure). With the pixel unpowered and a 5 V driver of 20 Ω:
+The series resistor limits that current. Take a silicon diode's forward drop as about {{textbook.diodeDrop}} (a textbook figure). With the pixel unpowered and a 5 V driver of {{buffer.resistance}}:
 
-- with no series resistor: I ≈ (5 V − 0.7 V) / 20 Ω ≈ 215 mA, far beyond what an input clamp is built for;
-- with 330 Ω in series: I ≈ (5 V − 0.7 V) / (20 Ω + 330 Ω) ≈ 12 mA.
+- with no series resistor: I ≈ ({{buffer.volts}} − {{textbook.diodeDrop}}) / {{buffer.resistance}} ≈ {{clamp.bare}}, far beyond what an input clamp is built for;
+- with {{shortLead.series}} in series: I ≈ ({{buffer.volts}} − {{textbook.diodeDrop}}) / ({{buffer.resistance}} + {{shortLead.series}}) ≈ {{clamp.fitted}}.
 
 So the resistor trades edge speed for protection. In this lesson's lab you find the window where both are acceptable. The course simulator reports the peak clamp current of every run so you can see it.
 `,
@@ -170,19 +177,19 @@ Back-powering works both ways: a strip whose supply is switched off can still be
       kind: "check",
       id: "clamp-current",
       prompt:
-        "A 5 V driver (20 Ω) is connected through 330 Ω to a pixel whose supply is off. Taking the clamp diode's forward drop as 0.7 V, about how much current flows into the pixel's input?",
-      answer: { value: (5 - 0.7) / 350, unit: "mA", tolerance: 0.03 },
+        "A 5 V driver ({{buffer.resistance}}) is connected through {{shortLead.series}} to a pixel whose supply is off. Taking the clamp diode's forward drop as {{textbook.diodeDrop}}, about how much current flows into the pixel's input?",
+      answer: { value: numbers.clamp.fitted.value, unit: "mA", tolerance: 0.03 },
       hint: "The voltage left after the diode drop, divided by the total series resistance.",
-      explanation: "(5 V − 0.7 V) / (20 Ω + 330 Ω) = 4.3 V / 350 Ω ≈ 12.3 mA.",
+      explanation: "({{buffer.volts}} − {{textbook.diodeDrop}}) / ({{buffer.resistance}} + {{shortLead.series}}) = {{clamp.drive}} / {{shortLead.resistance}} ≈ {{clamp.fittedExact}}.",
     },
     {
       kind: "text",
       markdown: `
 ## Where the RC picture stops
 
-Everything above treats the cable as one lump of capacitance that charges all at once. That is a good model only when the cable is **electrically short**: when a signal travels from one end to the other and back again in a time that is small compared with the edge. Signals on these cables travel at roughly 0.18 to 0.27 metres per nanosecond (lesson 4 derives the figures), so a 2 m cable has a round trip of roughly 15 to 22 ns.
+Everything above treats the cable as one lump of capacitance that charges all at once. That is a good model only when the cable is **electrically short**: when a signal travels from one end to the other and back again in a time that is small compared with the edge. Signals on these cables travel at roughly {{catalogue.speedLeast|bare}} to {{catalogue.speedMost|bare}} metres per nanosecond (lesson 4 derives the figures), so a {{shortLead.length}} cable has a round trip of roughly {{shortRoundTrip.least|bare}} to {{shortRoundTrip.most}}.
 
-A rule of thumb found in high-speed design textbooks is to treat a connection as a lumped capacitance only while its one-way delay is below about a sixth of the rise time; some texts use a quarter or a half. Apply it to the worked example above: a 95 ns edge on a 2 m cable whose one-way delay is about 11 ns. The delay is under a sixth of 95 ns (16 ns), so the RC picture holds. Without the resistor, the edge is about 3 ns, far shorter than the 11 ns delay, and the RC picture is simply wrong: the cable is no longer a lump but a **transmission line**, and the edge reaches the pixel in steps and ringing that an RC curve cannot show.
+A rule of thumb found in high-speed design textbooks is to treat a connection as a lumped capacitance only while its one-way delay is below about a sixth of the rise time; some texts use a quarter or a half. Apply it to the worked example above: a {{shortLead.rise}} edge on a {{shortLead.length}} cable whose one-way delay is about {{shortLead.delay}}. The delay is under a sixth of {{shortLead.rise}} ({{shortLead.sixth}}), so the RC picture holds. Without the resistor, the edge is about {{buffer.edge}}, far shorter than the {{shortLead.delay}} delay, and the RC picture is simply wrong: the cable is no longer a lump but a **transmission line**, and the edge reaches the pixel in steps and ringing that an RC curve cannot show.
 
 That is where the next three lessons go. The RC arithmetic of this lesson stays useful, though, in two ways:
 
@@ -191,18 +198,18 @@ That is where the next three lessons go. The RC arithmetic of this lesson stays 
 
 ### Worked example: a long run, in the RC picture
 
-10 m of the same cable holds 10 × 59.5 pF + 5 pF = 600 pF. Through 270 Ω (plus 20 Ω of driver, 290 Ω):
+{{longRun.length}} of the same cable holds {{longRun.length|bare}} × {{beside.capacitance}} + {{sim.inputCapacitance}} = {{longRun.capacitance}}. Through {{longRun.series}} (plus {{buffer.resistance}} of driver, {{longRun.resistance}}):
 
-- τ = 290 Ω × 600 pF = 174 ns; rise ≈ 2.2 × 174 ns ≈ 383 ns
-- crossing 3.5 V takes 1.204 × 174 ns ≈ 209 ns of a 0 bit's 400 ns
+- τ = {{longRun.resistance}} × {{longRun.capacitance}} = {{longRun.tau|dp=0}}; rise ≈ {{textbook.ln9}} × {{longRun.tau|dp=0}} ≈ {{longRun.rise}}
+- crossing {{pixel.high}} takes {{symmetric.crossing}} × {{longRun.tau|dp=0}} ≈ {{longRun.crossing}} of a 0 bit's {{sim.zeroHigh|unit=ns|dp=0}}
 
-A 0 bit barely reaches 90 % of its swing before the driver falls again. On the workbench this run at 5 V still **works on typical pixels**, with little room left, and is no longer guaranteed: the 600 pF of a long cable is why long runs and large resistors do not mix. Lesson 6 returns to this case with the full transmission-line picture and shows why the answer changes completely when the driver is 3.3 V.
+A 0 bit reaches only {{longRun.reached}} of its swing before the driver falls again. On the workbench this run at {{buffer.volts}} still **works on typical pixels**, with little room left, and is no longer guaranteed: the {{longRun.capacitance}} of a long cable is why long runs and large resistors do not mix. Lesson 6 returns to this case with the full transmission-line picture and shows why the answer changes completely when the driver is {{pin.volts}}.
 
 ## Summing up
 
-- Rise time is measured from 10 % to 90 %; for a resistance charging a capacitance it is **2.2 × R × C**.
+- Rise time is measured from 10 % to 90 %; for a resistance charging a capacitance it is **{{textbook.ln9}} × R × C**.
 - R is the driver's output resistance plus the series resistor; C is the pixel's input plus the cable's capacitance (per metre × length), in the lumped picture.
-- With a full-swing driver and thresholds at 0.7 and 0.3 of the supply, a slow edge delays a pulse without shrinking it, until the edge is too slow to finish in a 0 bit's 0.4 µs.
+- With a full-swing driver and thresholds at {{sim.highThreshold}} and {{sim.lowThreshold}} of the supply, a slow edge delays a pulse without shrinking it, until the edge is too slow to finish in a 0 bit's {{sim.zeroHigh}}.
 - Asymmetric levels (a weak or low driver) shrink every pulse by a fraction of τ.
 - The series resistor also limits current through the pixel's clamp diodes.
 - The lumped RC picture holds only for cables that are short compared with the edge; beyond that, the cable is a transmission line.

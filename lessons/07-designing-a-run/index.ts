@@ -1,26 +1,10 @@
+import { controllerPin3v3 } from "../drivers";
+import { lessonNumbers } from "../numbers/lesson-numbers";
+import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { bench } from "./bench";
 import { lab } from "./lab";
-import { receiverLevels } from "../receiver-model";
-import { PIN_3V3_WINDOW, zFraction } from "../source-window";
-
-const levels = receiverLevels(5);
-const signed = (x: number) => `${x < 0 ? "−" : "+"}${Math.abs(x).toFixed(3)}`;
-
-/** A 3.3 V pin (30 Ω) through `series` into an open line of `z0`: lesson 5's first two arrivals. */
-function pinRun(series: number, z0: number) {
-  const source = 30 + series;
-  const gamma = (source - z0) / (source + z0);
-  return { series, source, gamma, first: 3.3 * (1 - gamma), second: 3.3 * (1 - gamma ** 2) };
-}
-
-const runA = {
-  ...pinRun(47, 99.4),
-  windowFrom: PIN_3V3_WINDOW.lower * 99.4,
-  windowTo: PIN_3V3_WINDOW.upper * 99.4,
-  middle: ((PIN_3V3_WINDOW.lower + PIN_3V3_WINDOW.upper) / 2) * 99.4,
-};
-const runC = pinRun(47, 93.8);
+import { numbers } from "./numbers";
 
 export const lesson = {
   slug: "designing-a-run",
@@ -29,6 +13,7 @@ export const lesson = {
   summary:
     "A step-by-step method for choosing the cable and a standard resistor value for each data run of an installation, checking the margins on paper, powering the strip safely, and knowing when a single-ended run has reached its limit.",
   minutes: 50,
+  numbers: lessonNumbers(numbers),
   blocks: [
     {
       kind: "text",
@@ -39,7 +24,7 @@ The last five lessons built the physics one piece at a time. This lesson turns i
 
 ### Step 1: know the two ends
 
-Write down, for the driver: its high level (3.3 V pin or 5 V buffer), its output resistance and its edge time. A controller's datasheet may give them; otherwise measure the output resistance from the drop under a known load, or use the course's typical figures (30 Ω for a 3.3 V pin, 20 Ω for a 5 V buffer, as in the labs). For the pixel: its supply at the strip's input (measure it under load; it is often below nominal), and its thresholds from its datasheet (the course uses 0.7 and 0.3 of the supply).
+Write down, for the driver: its high level (3.3 V pin or 5 V buffer), its output resistance and its edge time. A controller's datasheet may give them; otherwise measure the output resistance from the drop under a known load, or use the course's typical figures ({{pin.resistance}} for a 3.3 V pin, {{buffer.resistance}} for a 5 V buffer, as in the labs). For the pixel: its supply at the strip's input (measure it under load; it is often below nominal), and its thresholds from its datasheet (the course uses {{sim.highThreshold}} and {{sim.lowThreshold}} of the supply).
 
 ### Step 2: choose the cable
 
@@ -49,7 +34,7 @@ Prefer a cable that **carries the data's return beside it**: a two-core cable wi
 - the loop between data and return is small, so it picks up little noise and radiates little;
 - the ground conductor gives the data a clean reference (lesson 2).
 
-A lone data lead is the cable to avoid. Its impedance depends on where it happens to lie relative to its return. With the two-wire formula for unequal conductors (a 22 AWG lead, an 18 AWG return, ε_eff ≈ 1.2), the catalogue's 351 Ω holds at 10 mm; at 5 mm the figure is about 274 Ω and at 30 mm about 471 Ω. A lead that wanders between those spacings along its route has no single Z0 to match.
+A lone data lead is the cable to avoid. Its impedance depends on where it happens to lie relative to its return. With the two-wire formula for unequal conductors (a {{lone.gauge}} AWG lead, an {{lone.returnGauge}} AWG return, ε_eff ≈ {{lone.permittivity}}), the catalogue's {{lone.z0}} holds at {{lone.spacing}}; at {{loneAt.near.spacing}} the figure is about {{loneAt.near.z0}} and at {{loneAt.far.spacing}} about {{loneAt.far.z0}}. A lead that wanders between those spacings along its route has no single Z0 to match.
 
 ### Step 3: compute the line
 
@@ -57,29 +42,29 @@ From the catalogue (lesson 4) or the cable's datasheet: Z0, delay per metre and 
 
 ### Step 4: fix the driver
 
-If the pixels run at 5 V, use a 5 V driver: a level shifter at the controller (lesson 2). It turns the resistor choice from a knife edge into a wide window (lesson 6). If you must drive 5 V pixels from a 3.3 V pin, the run can at best work on typical pixels, only through the doubled first arrival, and the resistor window is narrow.
+If the pixels run at {{pixel.vdd}}, use a 5 V driver: a level shifter at the controller (lesson 2). It turns the resistor choice from a knife edge into a wide window (lesson 6). If you must drive 5 V pixels from a 3.3 V pin, the run can at best work on typical pixels, only through the doubled first arrival, and the resistor window is narrow.
 
 ### Step 5: compute the resistor window
 
 - **5 V driver into 5 V pixels**: aim for R_src ≈ Z0 (R_s = Z0 − R_out), which removes the ringing; anything from about half to about twice that decodes on ordinary lengths. Check the staircase (step 6) if R_src is well above Z0.
-- **3.3 V driver into 5 V pixels**: R_src between about ${zFraction(PIN_3V3_WINDOW.lower)} × Z0 and ${zFraction(PIN_3V3_WINDOW.upper)} × Z0 for 0.3 V of voltage margin on typical pixels (lesson 6). Below it the ringing falls back through the typical band; above it the first arrival no longer lifts the far end clear of it. No resistor makes it guaranteed; write "works on typical pixels" in the installation file and recommend a level shifter.
+- **3.3 V driver into 5 V pixels**: R_src between about {{window.lower}} × Z0 and {{window.upper}} × Z0 for {{window.margin}} of voltage margin on typical pixels (lesson 6). Below it the ringing falls back through the typical band; above it the first arrival no longer lifts the far end clear of it. No resistor makes it guaranteed; write "works on typical pixels" in the installation file and recommend a level shifter.
 
 ### Step 6: check the slow side
 
-Wherever R_src is larger than Z0, the far end climbs a staircase: after n arrivals it stands at V × (1 − Γ_s^n), and the nth arrival comes (2n − 1) × T_d after the switch. A 0 bit's fall reaches the far end at 0.4 µs + T_d; the pixel threshold must be crossed well before that, and with a 3.3 V driver the first arrival must do it.
+Wherever R_src is larger than Z0, the far end climbs a staircase: after n arrivals it stands at V × (1 − Γ_s^n), and the nth arrival comes (2n − 1) × T_d after the switch. A 0 bit's fall reaches the far end at {{sim.zeroHigh}} + T_d; the pixel threshold must be crossed well before that, and with a 3.3 V driver the first arrival must do it.
 
 ### Step 7: choose the standard value, then confirm on the bench
 
-Pick the E-series value (IEC 60063) nearest the middle of the window, not nearest one edge. Consider the resistor's tolerance: IEC 60063 pairs the E12 series with ±10 %, E24 with ±5 % and E96 with ±1 % parts. A 68 Ω E24 resistor may be anywhere from 64.6 Ω to 71.4 Ω, which is small next to most windows; a value chosen at the very edge of the window is not. Then build it and measure it at the first pixel (lesson 8). The arithmetic and the simulator are models; the bench is the judge.
+Pick the E-series value (IEC 60063) nearest the middle of the window, not nearest one edge. Consider the resistor's tolerance: IEC 60063 pairs the E12 series with ±{{tolerance.e12}}, E24 with ±{{tolerance.e24}} and E96 with ±{{tolerance.e96}} parts. A {{runB.neighbours.below}} E24 resistor may be anywhere from {{runB.lowest}} to {{runB.highest}}, which is small next to most windows; a value chosen at the very edge of the window is not. Then build it and measure it at the first pixel (lesson 8). The arithmetic and the simulator are models; the bench is the judge.
 `,
     },
     {
       kind: "check",
       id: "twisted-pair-limit",
-      prompt: `A 3.3 V pin (30 Ω) drives one pair of a twisted-pair cable (Z0 = 99.4 Ω) into a 5 V pixel. Using the upper edge R_src ≤ ${zFraction(PIN_3V3_WINDOW.upper)} × Z0 (0.3 V margin on typical pixels), what is the largest series resistor you may fit?`,
-      answer: { value: PIN_3V3_WINDOW.upper * 99.4 - 30, unit: "ohm", tolerance: 0.03 },
+      prompt: "A 3.3 V pin ({{pin.resistance}}) drives one pair of a twisted-pair cable (Z0 = {{twisted.z0}}) into a 5 V pixel. Using the upper edge R_src ≤ {{window.upper}} × Z0 ({{window.margin}} margin on typical pixels), what is the largest series resistor you may fit?",
+      answer: { value: numbers.runA.seriesHigh.value, unit: "ohm", tolerance: 0.03 },
       hint: "Largest R_src first, then subtract the pin's own resistance.",
-      explanation: `${zFraction(PIN_3V3_WINDOW.upper)} × 99.4 Ω = ${(PIN_3V3_WINDOW.upper * 99.4).toFixed(1)} Ω; minus 30 Ω gives about ${(PIN_3V3_WINDOW.upper * 99.4 - 30).toFixed(0)} Ω. The lower edge is ${zFraction(PIN_3V3_WINDOW.lower)} × 99.4 Ω − 30 Ω ≈ ${(PIN_3V3_WINDOW.lower * 99.4 - 30).toFixed(0)} Ω, so 47 Ω sits near the middle.`,
+      explanation: "{{window.upper}} × {{twisted.z0}} = {{runA.sourceHigh}}; minus {{pin.resistance}} gives about {{runA.seriesHigh}}. The lower edge is {{window.lower}} × {{twisted.z0}} − {{pin.resistance}} ≈ {{runA.seriesLow}}, so {{runA.series}} sits near the middle.",
     },
     {
       kind: "text",
@@ -88,48 +73,48 @@ Pick the E-series value (IEC 60063) nearest the middle of the window, not neares
 
 A shop display has one controller with 3.3 V outputs and three strips of 5 V pixels. The installer has a roll of twisted-pair cable, a roll of two-core cable (data beside ground) and a drawer of E24 resistors.
 
-### Run A: 12 m of twisted pair, 3.3 V pin direct
+### Run A: {{runA.length}} of twisted pair, 3.3 V pin direct
 
-- Line: Z0 = 99.4 Ω, 5.20 ns/m; T_d = 12 × 5.20 ns = 62.4 ns; C = 12 × 52.3 pF ≈ 628 pF.
-- Window at 3.3 V (typical pixels, 0.3 V margin): R_src from ${zFraction(PIN_3V3_WINDOW.lower)} × 99.4 = ${runA.windowFrom.toFixed(1)} Ω to ${zFraction(PIN_3V3_WINDOW.upper)} × 99.4 = ${runA.windowTo.toFixed(1)} Ω, so R_s from ${(runA.windowFrom - 30).toFixed(0)} Ω to ${(runA.windowTo - 30).toFixed(0)} Ω. The middle of the window is R_src ≈ ${runA.middle.toFixed(0)} Ω, R_s ≈ ${(runA.middle - 30).toFixed(0)} Ω.
-- Choice: ${runA.series} Ω (E24). R_src = ${runA.source} Ω; Γ_s = (${runA.source} − 99.4) / (${runA.source} + 99.4) = ${signed(runA.gamma)}.
-- First arrival: 3.3 × (1 − Γ_s) = ${runA.first.toFixed(2)} V, ${(runA.first - levels.highestRise).toFixed(2)} V over the highest level where a typical pixel reads a rise. Second arrival: 3.3 × (1 − Γ_s²) = ${runA.second.toFixed(2)} V, ${(runA.second - levels.topFall).toFixed(2)} V over the highest level where it reads a fall. Both margins clear 0.3 V: the run works on typical pixels. It is not guaranteed; a level shifter would make it so.
+- Line: Z0 = {{twisted.z0}}, {{twisted.delay}}; T_d = {{runA.length|bare}} × {{twisted.delay|bare}} ns = {{runA.delay}}; C = {{runA.length|bare}} × {{twisted.capacitance|bare}} pF ≈ {{runA.capacitance}}.
+- Window at {{pin.volts}} (typical pixels, {{window.margin}} margin): R_src from {{window.lower}} × {{twisted.z0|bare}} = {{runA.sourceLow}} to {{window.upper}} × {{twisted.z0|bare}} = {{runA.sourceHigh}}, so R_s from {{runA.seriesLow}} to {{runA.seriesHigh}}. The middle of the window is R_src ≈ {{runA.sourceMiddle}}, R_s ≈ {{runA.seriesMiddle}}.
+- Choice: {{runA.series}} (E24). R_src = {{runA.source}}; Γ_s = ({{runA.source|bare}} − {{twisted.z0|bare}}) / ({{runA.source|bare}} + {{twisted.z0|bare}}) = {{runA.gamma|sign}}.
+- First arrival: {{pin.volts|bare}} × (1 − Γ_s) = {{runA.first}}, {{runA.riseMargin}} over the highest level where a typical pixel reads a rise. Second arrival: {{pin.volts|bare}} × (1 − Γ_s²) = {{runA.second}}, {{runA.fallMargin}} over the highest level where it reads a fall. Both margins clear {{window.margin}}: the run works on typical pixels. It is not guaranteed; a level shifter would make it so.
 
-### Run B: 18 m of data beside ground, through a 5 V level shifter
+### Run B: {{runB.length}} of data beside ground, through a 5 V level shifter
 
 The installer fits a one-direction 5 V buffer at the controller for the longest run (lesson 2).
 
-- Line: Z0 = 93.8 Ω; T_d = 18 × 5.58 ns ≈ 100 ns; C = 18 × 59.5 pF ≈ 1,071 pF.
-- At 5 V aim for a match: R_s = 93.8 − 20 ≈ 74 Ω. The E24 neighbours are 68 Ω and 75 Ω. Either works at 5 V; take 68 Ω, which keeps the source just below the match, so any error shows as a slight overshoot rather than a slight staircase (R_src = 88 Ω, Γ_s = −0.032).
-- First arrival: 5 × 1.032 = 5.16 V. A clean step with a 0.16 V overshoot; no staircase, so the 1,071 pF never shows as a slow edge.
+- Line: Z0 = {{beside.z0}}; T_d = {{runB.length|bare}} × {{beside.delay|bare}} ns ≈ {{runB.delay}}; C = {{runB.length|bare}} × {{beside.capacitance|bare}} pF ≈ {{runB.capacitance}}.
+- At {{buffer.volts}} aim for a match: R_s = {{beside.z0|bare}} − {{buffer.resistance|bare}} ≈ {{runB.match}}. The E24 neighbours are {{runB.neighbours.below}} and {{runB.neighbours.above}}. Either works at {{buffer.volts}}; take {{runB.neighbours.below}}, which keeps the source just below the match, so any error shows as a slight overshoot rather than a slight staircase (R_src = {{runB.source}}, Γ_s = {{runB.gamma}}).
+- First arrival: {{buffer.volts|bare}} × {{runB.oneMinusGamma}} = {{runB.first}}. A clean step with a {{runB.overshoot}} overshoot; no staircase, so the {{runB.capacitance}} never shows as a slow edge.
 
-### Run C: 2.5 m of data beside ground, 3.3 V pin direct
+### Run C: {{runC.length}} of data beside ground, 3.3 V pin direct
 
-- T_d = 2.5 × 5.58 ns ≈ 14 ns. A short run: reflections settle quickly. The 3.3 V driver still needs the window of lesson 6: R_s from ${(PIN_3V3_WINDOW.lower * 93.8 - 30).toFixed(0)} Ω to ${(PIN_3V3_WINDOW.upper * 93.8 - 30).toFixed(0)} Ω for 0.3 V of margin on typical pixels.
-- Choice: ${runC.series} Ω, near the middle, the same as a beside-ground run of any length.
+- T_d = {{runC.length|bare}} × {{beside.delay|bare}} ns ≈ {{runC.delay}}. A short run: reflections settle quickly. The 3.3 V driver still needs the window of lesson 6: R_s from {{runC.seriesLow}} to {{runC.seriesHigh}} for {{window.margin}} of margin on typical pixels.
+- Choice: {{runC.series}}, near the middle, the same as a beside-ground run of any length.
 
 Writing the three results in a table for the installation file is part of the job:
 
 | run | cable | length | driver | resistor | predicted first arrival | promise |
 | --- | --- | --- | --- | --- | --- | --- |
-| A | twisted pair | 12 m | 3.3 V pin | ${runA.series} Ω | ${runA.first.toFixed(2)} V | works on typical pixels |
-| B | data beside ground | 18 m | 5 V buffer | 68 Ω | 5.16 V | works on every pixel that meets its datasheet |
-| C | data beside ground | 2.5 m | 3.3 V pin | ${runC.series} Ω | ${runC.first.toFixed(2)} V | works on typical pixels |
+| A | twisted pair | {{runA.length}} | 3.3 V pin | {{runA.series}} | {{runA.first}} | works on typical pixels |
+| B | data beside ground | {{runB.length}} | 5 V buffer | {{runB.neighbours.below}} | {{runB.first}} | works on every pixel that meets its datasheet |
+| C | data beside ground | {{runC.length}} | 3.3 V pin | {{runC.series}} | {{runC.first}} | works on typical pixels |
 `,
     },
     {
       kind: "figure",
       figure: "series-termination",
       caption:
-        "Run A as designed: a 3.3 V pin, 47 Ω and twisted pair into a 5 V pixel. Stretch the run and watch the first arrival and the margins: the resistor window hardly depends on length, but loss and every imperfection the model leaves out grow with it.",
+        "Run A as designed: a 3.3 V pin, {{runA.series}} and twisted pair into a 5 V pixel. Stretch the run and watch the first arrival and the margins: the resistor window hardly depends on length, but loss and every imperfection the model leaves out grow with it.",
       params: {
         cable: "twisted-pair",
-        length: 12,
-        seriesResistance: 47,
-        highVoltage: 3.3,
-        outputResistance: 30,
-        edgeTime: 4e-9,
-        supplyVoltage: 5,
+        length: numbers.runA.length.value,
+        seriesResistance: numbers.runA.series.value,
+        highVoltage: controllerPin3v3.highVoltage,
+        outputResistance: controllerPin3v3.outputResistance,
+        edgeTime: controllerPin3v3.edgeTime,
+        supplyVoltage: sharedNumbers.pixel.vdd.value,
         bits: "01100",
         slider: { field: "length", min: 2, max: 40, step: 1 },
       },
@@ -137,10 +122,10 @@ Writing the three results in a table for the installation file is part of the jo
     {
       kind: "check",
       id: "resistor-tolerance",
-      prompt: "A 68 Ω resistor from the E24 series carries a ±5 % tolerance. What is the highest resistance it may actually have?",
-      answer: { value: 68 * 1.05, unit: "ohm", tolerance: 0.01 },
+      prompt: "A {{runB.neighbours.below}} resistor from the E24 series carries a ±{{tolerance.e24}} tolerance. What is the highest resistance it may actually have?",
+      answer: { value: numbers.runB.highest.value, unit: "ohm", tolerance: 0.01 },
       hint: "Nominal × (1 + tolerance).",
-      explanation: "68 Ω × 1.05 = 71.4 Ω. The window for run B is tens of ohms wide, so this does not matter there.",
+      explanation: "{{runB.neighbours.below}} × (1 + {{tolerance.e24|unit=|dp=2}}) = {{runB.highest}}. The window for run B is tens of ohms wide, so this does not matter there.",
     },
     {
       kind: "text",
@@ -151,11 +136,11 @@ A data run that decodes perfectly still fails if the strip's supply sags, and a 
 
 ### Worked example: voltage drop on a supply feed
 
-A 5 V strip draws 10 A. It is fed through 5 m of two-core 18 AWG cable (20.9 mΩ/m per conductor, from the AWG table of ASTM B258 and annealed copper's resistivity).
+A 5 V strip draws {{supply.current}}. It is fed through {{supply.length}} of two-core {{supply.gauge}} AWG cable ({{supply.perMetre}} per conductor, from the AWG table of ASTM B258 and annealed copper's resistivity).
 
-- Loop resistance: out and back, 2 × 5 m × 0.0209 Ω/m = 0.209 Ω
-- Voltage drop: 10 A × 0.209 Ω ≈ 2.09 V. The strip receives less than 3 V: the pixels dim, shift colour, and their thresholds move.
-- Heat: P = I² × R = 10² × 0.209 ≈ 21 W dissipated in the cable.
+- Loop resistance: out and back, 2 × {{supply.length}} × {{supply.perMetreInOhms}} = {{supply.loop}}
+- Voltage drop: {{supply.current}} × {{supply.loop}} ≈ {{supply.drop}}. The strip receives only {{supply.left}}: the pixels dim, shift colour, and their thresholds move.
+- Heat: P = I² × R = {{supply.current|bare}}² × {{supply.loop|bare}} ≈ {{supply.heat}} dissipated in the cable.
 
 The answers installers use are **heavier conductors**, **shorter feeds**, **higher supply voltages with local regulation** where the product allows, and **power injection**: feeding the strip at several points, each feed sized and fused for its own current. Injecting power does not change the data design, with one rule: every injection point's negative must join the strip's ground, and the data ground conductor must not become a path for supply current (lesson 2).
 `,
@@ -170,10 +155,10 @@ Low-voltage DC at high current can start fires. A conductor too thin for its cur
     {
       kind: "check",
       id: "supply-drop",
-      prompt: "A 5 V strip draws 10 A through 5 m of two-core 18 AWG cable (20.9 mΩ/m per conductor). What is the voltage drop in the cable?",
-      answer: { value: 10 * 2 * 5 * 0.0209, unit: "V", tolerance: 0.02 },
+      prompt: "A 5 V strip draws {{supply.current}} through {{supply.length}} of two-core {{supply.gauge}} AWG cable ({{supply.perMetre}} per conductor). What is the voltage drop in the cable?",
+      answer: { value: numbers.supply.drop.value, unit: "V", tolerance: 0.02 },
       hint: "The current flows out on one conductor and back on the other: the loop is twice the length.",
-      explanation: "R = 2 × 5 m × 0.0209 Ω/m = 0.209 Ω; V = 10 A × 0.209 Ω ≈ 2.09 V, far too much for a 5 V strip.",
+      explanation: "R = 2 × {{supply.length}} × {{supply.perMetreInOhms}} = {{supply.loop}}; V = {{supply.current}} × {{supply.loop}} ≈ {{supply.drop}}, far too much for a 5 V strip.",
     },
     {
       kind: "text",
@@ -198,20 +183,20 @@ The open standard most used for this is TIA-485-A (often called RS-485): its rec
 - the far-end transceiver **needs power** at the far end, normally from the strip's own supply;
 - the data still reaches the first pixel as a short single-ended hop, which now works easily.
 
-Over a differential pair, runs of many tens of metres at 800 kHz are routine in the trade (common practice; the transceiver's datasheet gives its own limits).
+Over a differential pair, runs of many tens of metres at {{sim.bitRate}} are routine in the trade (common practice; the transceiver's datasheet gives its own limits).
 
 ### A regenerating stage mid-run
 
-The other tool uses the pixel chain itself. Every pixel regenerates the data with fresh edges (lesson 1). A single pixel (or a small board built around one pixel chip) placed partway along a long run, powered locally, receives the data over the first half and sends clean, full-level edges over the second. One long, marginal run becomes two short, comfortable ones. The cost: that pixel takes its 24 bits from the stream like any other, so the controller's pixel map must include it, and it needs a supply at that point, with all the cautions of supply wiring.
+The other tool uses the pixel chain itself. Every pixel regenerates the data with fresh edges (lesson 1). A single pixel (or a small board built around one pixel chip) placed partway along a long run, powered locally, receives the data over the first half and sends clean, full-level edges over the second. One long, marginal run becomes two short, comfortable ones. The cost: that pixel takes its {{sim.wordBits}} bits from the stream like any other, so the controller's pixel map must include it, and it needs a supply at that point, with all the cautions of supply wiring.
 `,
     },
     {
       kind: "check",
       id: "long-run-delay",
-      prompt: "How long is the one-way delay of a 25 m twisted-pair run (5.20 ns/m)?",
-      answer: { value: 25 * 5.2e-9, unit: "ns", tolerance: 0.02 },
+      prompt: "How long is the one-way delay of a {{longTwisted.length}} twisted-pair run ({{twisted.delay}})?",
+      answer: { value: numbers.longTwisted.delay.value, unit: "ns", tolerance: 0.02 },
       hint: "Length × delay per metre.",
-      explanation: "25 m × 5.20 ns/m = 130 ns. A staircase needing three arrivals would cross 5 × 130 ns = 650 ns after the switch, after a 0 bit's fall has reached the far end (400 ns + 130 ns = 530 ns): the 0s would be lost.",
+      explanation: "{{longTwisted.length}} × {{twisted.delay}} = {{longTwisted.delay}}. A staircase needing three arrivals would cross {{longTwisted.factor}} × {{longTwisted.delay}} = {{longTwisted.crossing}} after the switch, after a 0 bit's fall has reached the far end ({{sim.zeroHigh|unit=ns|dp=0}} + {{longTwisted.delay}} = {{longTwisted.fall}}): the 0s would be lost.",
     },
     {
       kind: "text",

@@ -1,6 +1,10 @@
+import { buffer5v } from "../drivers";
+import { lessonNumbers } from "../numbers/lesson-numbers";
+import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { bench } from "./bench";
 import { lab } from "./lab";
+import { numbers } from "./numbers";
 
 export const lesson = {
   slug: "on-the-bench",
@@ -9,23 +13,24 @@ export const lesson = {
   summary:
     "Measuring a data run with an oscilloscope without fooling yourself: bandwidth and rise time, probe loading, the ground lead, where to probe and what to read; documenting a run with a scope photo; and working safely around supplies and mains equipment.",
   minutes: 50,
+  numbers: lessonNumbers(numbers),
   blocks: [
     {
       kind: "text",
       markdown: `
 ## The bench is the judge
 
-Everything in this course so far has been a model: formulas, bounce diagrams, the simulator that grades your labs. Models leave things out. A real pixel's thresholds are not exactly 0.7 and 0.3 of its supply; a real cable's impedance is not exactly the catalogue's; real connectors add a little inductance and capacitance. Before an installation is signed off, the first pixel of every long run is looked at with an oscilloscope. This lesson is about doing that well, so that what you see is the run and not your measuring setup, and about doing it safely.
+Everything in this course so far has been a model: formulas, bounce diagrams, the simulator that grades your labs. Models leave things out. A real pixel's thresholds are not exactly {{sim.highThreshold}} and {{sim.lowThreshold}} of its supply; a real cable's impedance is not exactly the catalogue's; real connectors add a little inductance and capacitance. Before an installation is signed off, the first pixel of every long run is looked at with an oscilloscope. This lesson is about doing that well, so that what you see is the run and not your measuring setup, and about doing it safely.
 
 ## Can your scope see the edge?
 
-An oscilloscope has a **bandwidth**, the frequency at which its response has fallen to about 71 % (−3 dB). Bandwidth limits how fast an edge it can show. A widely used textbook approximation links the two:
+An oscilloscope has a **bandwidth**, the frequency at which its response has fallen to about {{threeDb}} (−3 dB). Bandwidth limits how fast an edge it can show. A widely used textbook approximation links the two:
 
-t_rise,scope ≈ 0.35 / bandwidth.
+t_rise,scope ≈ {{scopeFactor}} / bandwidth.
 
-- 100 MHz: 0.35 / 100 MHz = 3.5 ns
-- 50 MHz: 7 ns
-- 20 MHz: 17.5 ns
+- {{scope100.bandwidth}}: {{scopeFactor}} / {{scope100.bandwidth}} = {{scope100.rise}}
+- {{scope50.bandwidth}}: {{scope50.rise}}
+- {{scope20.bandwidth}}: {{scope20.rise}}
 
 What you see on the screen is not the edge itself but the edge as slowed by the scope (and the probe). For a chain of such stages the rise times combine approximately as a root sum of squares (another textbook approximation):
 
@@ -33,86 +38,86 @@ t_rise,seen ≈ √(t_signal² + t_scope² + t_probe²).
 
 ### Worked example
 
-A true 10 ns edge, a 100 MHz scope and a probe fast enough to ignore: √(10² + 3.5²) ns = √112.25 ns ≈ 10.6 ns. The scope adds 6 %. On a 20 MHz scope the same edge shows as √(10² + 17.5²) ns ≈ 20.2 ns: you are measuring the scope. A working habit of the trade (common practice): use a scope whose own rise time is at most a third of the edge you want to measure. For the 3 ns edges of a 5 V buffer driving a matched run, that means a scope rise time of 1 ns, 0.35 / 1 ns = 350 MHz or more; for the tens of nanoseconds of most real runs at the first pixel, 100 MHz is enough.
+A true {{trueEdge}} edge, a {{scope100.bandwidth}} scope and a probe fast enough to ignore: √({{trueEdge|bare}}² + {{scope100.rise|bare}}²) ns = √{{scope100.sumOfSquares}} ns ≈ {{scope100.seen}}. The scope adds {{scope100.added}}. On a {{scope20.bandwidth}} scope the same edge shows as √({{trueEdge|bare}}² + {{scope20.rise|bare}}²) ns ≈ {{scope20.seen}}: you are measuring the scope. A working habit of the trade (common practice): use a scope whose own rise time is at most a third of the edge you want to measure. For the {{buffer.edge}} edges of a 5 V buffer driving a matched run, that means a scope rise time of {{fastScope.rise}}, {{scopeFactor}} / {{fastScope.rise}} = {{fastScope.bandwidth}} or more; for the tens of nanoseconds of most real runs at the first pixel, {{scope100.bandwidth}} is enough.
 
-The scope's **sample rate** matters too: it must take several samples during the edge. A scope sampling at 1 GS/s takes one sample per nanosecond, enough for a 10 ns edge. Check the rate at the timebase you use, since many scopes lower it on slow timebases.
+The scope's **sample rate** matters too: it must take several samples during the edge. A scope sampling at 1 GS/s takes one sample per nanosecond, enough for a {{trueEdge}} edge. Check the rate at the timebase you use, since many scopes lower it on slow timebases.
 `,
     },
     {
       kind: "check",
       id: "scope-rise-time",
-      prompt: "Using t_rise ≈ 0.35 / bandwidth, what is the rise time of a 100 MHz oscilloscope?",
-      answer: { value: 0.35 / 100e6, unit: "ns", tolerance: 0.02 },
-      hint: "Divide 0.35 by the bandwidth in hertz.",
-      explanation: "0.35 / 100 × 10⁶ Hz = 3.5 × 10⁻⁹ s = 3.5 ns.",
+      prompt: "Using t_rise ≈ {{scopeFactor}} / bandwidth, what is the rise time of a {{scope100.bandwidth}} oscilloscope?",
+      answer: { value: numbers.scope100.rise.value, unit: "ns", tolerance: 0.02 },
+      hint: "Divide {{scopeFactor}} by the bandwidth in hertz.",
+      explanation: "{{scopeFactor}} / {{scope100.bandwidth|unit=Hz|exp=6}} = {{scope100.rise|unit=s|exp=-9}} = {{scope100.rise}}.",
     },
     {
       kind: "check",
       id: "measured-rise",
-      prompt: "A true 10 ns edge is viewed on that 100 MHz scope (3.5 ns). About what rise time does the screen show?",
-      answer: { value: Math.sqrt(10 ** 2 + 3.5 ** 2) * 1e-9, unit: "ns", tolerance: 0.02 },
+      prompt: "A true {{trueEdge}} edge is viewed on that {{scope100.bandwidth}} scope ({{scope100.rise}}). About what rise time does the screen show?",
+      answer: { value: numbers.scope100.seen.value, unit: "ns", tolerance: 0.02 },
       hint: "Root sum of squares: √(t_signal² + t_scope²).",
-      explanation: "√(10² + 3.5²) ns = √112.25 ns ≈ 10.6 ns.",
+      explanation: "√({{trueEdge|bare}}² + {{scope100.rise|bare}}²) ns = √{{scope100.sumOfSquares}} ns ≈ {{scope100.seen}}.",
     },
     {
       kind: "text",
       markdown: `
 ## The probe is part of the circuit
 
-The usual probe for this work is a **10:1 passive probe**: it divides the voltage by ten, and in return it loads the circuit lightly. Common practice gives such a probe about 10 MΩ in parallel with about 10 pF at its tip (read the figures marked on your probe or in its manual). A 1:1 probe loads far more heavily, with the capacitance of its whole cable at the tip (typically tens of picofarads or more, common practice) and much less bandwidth; do not use one for edges.
+The usual probe for this work is a **10:1 passive probe**: it divides the voltage by ten, and in return it loads the circuit lightly. Common practice gives such a probe about {{probe.resistance}} in parallel with about {{probe.capacitance}} at its tip (read the figures marked on your probe or in its manual). A 1:1 probe loads far more heavily, with the capacitance of its whole cable at the tip (typically tens of picofarads or more, common practice) and much less bandwidth; do not use one for edges.
 
-Ten megohms is nothing to a data line. Ten picofarads is not. Recall from lesson 5 that, seen from the far end, the line looks like a source of twice the incident wave behind a resistance Z0. Whatever capacitance hangs on the far end charges through Z0, with a time constant τ = Z0 × C. The pixel's own 5 pF is already there; your probe adds 10 pF more.
+The probe's {{probe.resistance}} is nothing to a data line; its {{probe.capacitance}} is not. Recall from lesson 5 that, seen from the far end, the line looks like a source of twice the incident wave behind a resistance Z0. Whatever capacitance hangs on the far end charges through Z0, with a time constant τ = Z0 × C. The pixel's own {{sim.inputCapacitance}} is already there; your probe adds {{probe.capacitance}} more.
 
 ### Worked example: the probe slows what it measures
 
-On a lone lead (Z0 ≈ 351 Ω), matched at the source:
+On a lone lead (Z0 ≈ {{lone.z0}}), matched at the source:
 
-- pixel alone: 2.2 × 351 Ω × 5 pF ≈ 3.9 ns of rise added at the far end;
-- pixel plus probe: 2.2 × 351 Ω × 15 pF ≈ 11.6 ns.
+- pixel alone: {{textbook.ln9}} × {{lone.z0}} × {{sim.inputCapacitance}} ≈ {{loading.lonePixel}} of rise added at the far end;
+- pixel plus probe: {{textbook.ln9}} × {{lone.z0}} × {{probe.withPixel}} ≈ {{loading.loneProbe}}.
 
-On data beside ground (Z0 ≈ 93.8 Ω) the same probe gives 2.2 × 93.8 Ω × 15 pF ≈ 3.1 ns. The high-impedance lead is the one your probe disturbs most. The consequences are mild (a slightly slower, slightly less ringing edge than without the probe) but real: when a reading is marginal, remember that it was taken with 10 pF more than the pixel normally has. And always **compensate** the probe before use: connect it to the scope's calibrator output and turn its trimmer until the square wave's corners are flat, neither peaked nor rounded (the probe's manual shows how).
+On data beside ground (Z0 ≈ {{beside.z0}}) the same probe gives {{textbook.ln9}} × {{beside.z0}} × {{probe.withPixel}} ≈ {{loading.besideProbe}}. The high-impedance lead is the one your probe disturbs most. The consequences are mild (a slightly slower, slightly less ringing edge than without the probe) but real: when a reading is marginal, remember that it was taken with {{probe.capacitance}} more than the pixel normally has. And always **compensate** the probe before use: connect it to the scope's calibrator output and turn its trimmer until the square wave's corners are flat, neither peaked nor rounded (the probe's manual shows how).
 
 ## The ground lead
 
-A probe measures the voltage between its tip and its ground clip. The ground clip's lead, typically around 15 cm long, forms a loop with the tip, and a loop has inductance: roughly 1 nH per millimetre of lead is a common rule of thumb (common practice, not a precise figure). Around 150 nH of ground lead in series with the probe's 10 pF makes a resonant circuit. Its frequency is
+A probe measures the voltage between its tip and its ground clip. The ground clip's lead, typically around {{ground.length}} long, forms a loop with the tip, and a loop has inductance: roughly 1 nH per millimetre of lead is a common rule of thumb (common practice, not a precise figure). Around {{ground.inductance}} of ground lead in series with the probe's {{probe.capacitance}} makes a resonant circuit. Its frequency is
 
-f = 1 / (2π × √(L × C)) = 1 / (2π × √(150 nH × 10 pF)) ≈ 130 MHz.
+f = 1 / (2π × √(L × C)) = 1 / (2π × √({{ground.inductance}} × {{probe.capacitance}})) ≈ {{ground.frequency}}.
 
-Every fast edge excites it. On the screen you see ringing at about 130 MHz that **does not exist on the line**: it is made by the measurement. Whether it shows depends on the damping, ζ = (R / 2) × √(C / L), with R the resistance that drives the probe. At the far end of data beside ground, R is about Z0 = 94 Ω: ζ ≈ 47 × √(10 pF / 150 nH) ≈ 0.38, well under 1, so it rings visibly. At the far end of a lone lead, R ≈ 351 Ω and ζ ≈ 1.4: no ringing, just a slightly slower edge.
+Every fast edge excites it. On the screen you see ringing at about {{ground.frequency}} that **does not exist on the line**: it is made by the measurement. Whether it shows depends on the damping, ζ = (R / 2) × √(C / L), with R the resistance that drives the probe. At the far end of data beside ground, R is about Z0 = {{beside.z0|dp=0}}: ζ ≈ {{ground.besideHalfR|bare}} × √({{probe.capacitance}} / {{ground.inductance}}) ≈ {{ground.besideDamping}}, well under 1, so it rings visibly. At the far end of a lone lead, R ≈ {{lone.z0}} and ζ ≈ {{ground.loneDamping}}: no ringing, just a slightly slower edge.
 
-The cure is a **short ground**: the spring-clip ground tip supplied with most probes, a centimetre or so long, pressed onto the pixel's ground pad right beside the data pad. At about 10 nH the resonance moves to about 500 MHz, beyond what a 100 MHz scope shows.
+The cure is a **short ground**: the spring-clip ground tip supplied with most probes, a centimetre or so long, pressed onto the pixel's ground pad right beside the data pad. At about {{ground.spring}} the resonance moves to about {{ground.springFrequency}}, beyond what a {{scope100.bandwidth}} scope shows.
 `,
     },
     {
       kind: "figure",
       figure: "probe-ground",
       caption:
-        "A clean 3 ns edge at the far end of a 94 Ω line, as a 10 pF probe shows it through its ground lead. Lengthen the ground lead and watch ringing appear that is not on the line.",
+        "A clean {{buffer.edge}} edge at the far end of a {{beside.z0|dp=0}} line, as a {{probe.capacitance}} probe shows it through its ground lead. Lengthen the ground lead and watch ringing appear that is not on the line.",
       params: {
-        stepVoltage: 5,
-        sourceResistance: 94,
-        probeCapacitance: 10e-12,
-        groundLeadInductance: 150e-9,
-        edgeTime: 3e-9,
+        stepVoltage: buffer5v.highVoltage,
+        sourceResistance: sharedNumbers.beside.z0.value,
+        probeCapacitance: numbers.probe.capacitance.value,
+        groundLeadInductance: numbers.ground.inductance.value,
+        edgeTime: buffer5v.edgeTime,
         slider: { field: "groundLeadInductance", min: 5e-9, max: 300e-9, step: 5e-9 },
       },
     },
     {
       kind: "check",
       id: "ground-lead-ring",
-      prompt: "A probe's 10 pF tip capacitance and a 150 nH ground lead form a resonant circuit. At what frequency does it ring?",
-      answer: { value: 1 / (2 * Math.PI * Math.sqrt(150e-9 * 10e-12)), unit: "MHz", tolerance: 0.02 },
+      prompt: "A probe's {{probe.capacitance}} tip capacitance and a {{ground.inductance}} ground lead form a resonant circuit. At what frequency does it ring?",
+      answer: { value: numbers.ground.frequency.value, unit: "MHz", tolerance: 0.02 },
       hint: "f = 1 / (2π × √(L × C)), in henries and farads.",
-      explanation: "√(150 × 10⁻⁹ × 10 × 10⁻¹²) = 1.225 × 10⁻⁹ s; 2π × that = 7.70 × 10⁻⁹ s; 1 / 7.70 ns ≈ 130 MHz.",
+      explanation: "√({{ground.inductance|unit=H|exp=-9|bare}} × {{probe.capacitance|unit=F|exp=-12|bare}}) = {{ground.rootLC|unit=s|exp=-9}}; 2π × that = {{ground.period|unit=s|exp=-9}}; 1 / {{ground.period}} ≈ {{ground.frequency}}.",
     },
     {
       kind: "check",
       id: "probe-loading",
       prompt:
-        "At the far end of a lone lead (Z0 ≈ 351 Ω), the pixel's 5 pF and a probe's 10 pF charge through Z0. About what 10–90 % rise time does that capacitance add?",
-      answer: { value: Math.log(9) * 351 * 15e-12, unit: "ns", tolerance: 0.03 },
-      hint: "τ = Z0 × C with C the total at the far end; rise ≈ 2.2 × τ.",
-      explanation: "τ = 351 Ω × 15 pF = 5.3 ns; 2.2 × 5.3 ns ≈ 11.6 ns.",
+        "At the far end of a lone lead (Z0 ≈ {{lone.z0}}), the pixel's {{sim.inputCapacitance}} and a probe's {{probe.capacitance}} charge through Z0. About what 10–90 % rise time does that capacitance add?",
+      answer: { value: numbers.loading.loneProbe.value, unit: "ns", tolerance: 0.03 },
+      hint: "τ = Z0 × C with C the total at the far end; rise ≈ {{textbook.ln9}} × τ.",
+      explanation: "τ = {{lone.z0}} × {{probe.withPixel}} = {{loading.loneTau}}; {{textbook.ln9}} × {{loading.loneTau}} ≈ {{loading.loneProbe}}.",
     },
     {
       kind: "text",
@@ -125,11 +130,11 @@ A setup that works for most runs:
 
 1. **Vertical**: 1 V/div, DC coupling, the trace's 0 V a division or two above the bottom of the screen. With a 10:1 probe, make sure the scope knows the probe is 10:1 so its readings are in volts at the tip.
 2. **Trigger**: rising edge on the data channel at about half the swing, normal mode (so the screen holds the last triggered sweep).
-3. **Timebase for bits**: 200 ns/div shows about eight bit slots. Check that every slot has one clean pulse, that 0s and 1s have the widths of lesson 1, and that nothing rings back across a threshold during the lows.
+3. **Timebase for bits**: {{bits.timebase}} shows {{bits.slots}} bit slots across a screen of {{bits.divisions}} divisions. Check that every slot has one clean pulse, that 0s and 1s have the widths of lesson 1, and that nothing rings back across a threshold during the lows.
 4. **Timebase for edges**: 5 to 10 ns/div. Measure the **rise time** (10–90 %) with the scope's measurement function or its cursors, and the **overshoot**: the peak minus the level the high settles at.
-5. **Thresholds**: put horizontal cursors at 0.7 × VDD and 0.3 × VDD of the pixel's *measured* supply (3.5 V and 1.5 V for 5.0 V). The margins of lesson 5 are the distances from the waveform to these lines.
+5. **Thresholds**: put horizontal cursors at {{sim.highThreshold}} × VDD and {{sim.lowThreshold}} × VDD of the pixel's *measured* supply ({{pixel.high}} and {{pixel.low}} for {{pixel.vdd|dp=1}}). The margins of lesson 5 are the distances from the waveform to these lines.
 6. **Worst case**: turn on persistence (or infinite persistence) and let the display run for a while with real content: every edge that ever happened stays on screen. A run that looks clean on one sweep may show an occasional ring-back or slow edge that persistence reveals.
-7. **The latch gap**: at 20 to 50 µs/div, check that the gap between frames is at least what the pixel needs (50 µs, or 280 µs for some parts; lesson 1).
+7. **The latch gap**: at 20 to 50 µs/div, check that the gap between frames is at least what the pixel needs ({{sim.latchGap}}, or {{longLatch}} for some parts; lesson 1).
 
 ## Documenting a run with a scope photo
 
@@ -177,9 +182,9 @@ If the measurement is worse than the model, believe the measurement and widen th
 
 ## Summing up
 
-- Scope rise time ≈ 0.35 / bandwidth; seen rise ≈ √(signal² + scope² + probe²). Use a scope at least three times faster than the edge.
-- A 10:1 passive probe adds about 10 pF (common practice); at the end of a high-impedance lead it visibly slows the edge.
-- A long ground lead rings with the probe capacitance at around 100 MHz; use a short ground spring.
+- Scope rise time ≈ {{scopeFactor}} / bandwidth; seen rise ≈ √(signal² + scope² + probe²). Use a scope at least three times faster than the edge.
+- A 10:1 passive probe adds about {{probe.capacitance}} (common practice); at the end of a high-impedance lead it visibly slows the edge.
+- A long ground lead rings with the probe capacitance at around {{ground.frequency}}; use a short ground spring.
 - Probe at the first pixel's data pad with ground on its ground pad, and read rise time, overshoot, widths and threshold margins.
 - Document with a readable scope photo plus a note, and a photo of the probing.
 - The scope's ground is earth: clip it only where that is safe, never on mains circuits.

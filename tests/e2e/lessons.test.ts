@@ -58,6 +58,13 @@ describe("lessons and the course map", () => {
       await page.getByRole("link", { name: "Start lesson 1" }).click();
       await page.waitForURL(`**${lessonPath}`);
       expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe("The pixel data stream");
+      // The lesson's numbers are printed from the simulator's defaults where it is loaded.
+      const article = page.locator("article");
+      expect(await article.getByText("f = 1 / 1.25 µs = 800,000 bits per second = 800 kHz.", { exact: true }).isVisible()).toBe(true);
+      expect(await article.textContent()).not.toMatch(/\{\{|\}\}/);
+      const frameTable = article.getByRole("table").filter({ hasText: "refresh rate" });
+      expect(await frameTable.getByRole("row").filter({ hasText: "1,000" }).textContent()).toBe("1,00030.00 ms30.28 ms33.0 Hz");
+      await frameTable.screenshot({ path: `${screenshotDir}/lesson-1-frame-table-wide.png` });
 
       const check = firstCheck(page);
       await answer(check, "3 V", "'3 V' is a voltage; this asks for a frequency.");

@@ -2,6 +2,8 @@
  * Every number the course asks a learner for, recomputed from its own formula, and the tables the
  * lessons print, recomputed from their sources:
  * - protocol timing and receiver thresholds: the simulator's defaults (parseSimInput, docs/simulator.md);
+ * - where typical pixels switch (the 3.3 V window): the simulator's typical band, switching point
+ *   ± spread with its hysteresis, from the same defaults;
  * - cable constants: the simulator's catalogue, computed from geometry with the two-wire and coax
  *   line formulas of transmission-line textbooks;
  * - wire: ASTM B258 diameters and annealed copper (1.7241e-8 Ω·m, IEC 60028) through lib/sim/awg;
@@ -21,6 +23,7 @@ import {
   awgResistancePerMetre,
   cableCatalogue,
   colourBits,
+  eSeriesValues,
   parseSimInput,
   perMetreFromGeometry,
   type TwoWireGeometry,
@@ -35,6 +38,11 @@ const ONE_HIGH = defaults.signal.oneHigh;
 const DECISION = defaults.receiver.decisionTime;
 const HIGH = defaults.receiver.highThreshold;
 const INPUT_C = defaults.receiver.inputCapacitance;
+/** The highest level at which a typical pixel reads a rise, and where one switching at the top of the band reads a fall (5 V). */
+const TYPICAL_TOP = (defaults.receiver.typicalSwitchingPoint + defaults.receiver.typicalSpread) * 5;
+const TYPICAL_RISE = TYPICAL_TOP + (defaults.receiver.typicalHysteresis * 5) / 2;
+const TYPICAL_FALL = TYPICAL_TOP - (defaults.receiver.typicalHysteresis * 5) / 2;
+const TYPICAL_LOWEST_FALL = (defaults.receiver.typicalSwitchingPoint - defaults.receiver.typicalSpread) * 5 - (defaults.receiver.typicalHysteresis * 5) / 2;
 const WORD_BITS = 24;
 const LN9 = Math.log(9);
 const SPEED_OF_LIGHT = 299_792_458;
@@ -47,13 +55,6 @@ const beside = cableCatalogue["beside-ground"];
 const twisted = cableCatalogue["twisted-pair"];
 const threeCore = cableCatalogue["three-core"];
 const gamma = (source: number, z0: number) => (source - z0) / (source + z0);
-/**
- * The typical band of docs/simulator.md for a 5 V pixel, from the simulator's stated assumptions
- * (switching point 0.5·VDD ± 0.1·VDD, hysteresis 0.05·VDD): where a pixel switching at the band's
- * top reads a rise and a fall.
- */
-const TYPICAL_RISE = (0.6 + 0.05 / 2) * 5;
-const TYPICAL_TOP_FALL = (0.6 - 0.05 / 2) * 5;
 /** Lesson 5's fourth case: the controller pin with 100 Ω into 10 m of lone lead. */
 const CASE4_SOURCE = controllerPin3v3.outputResistance + 100;
 const CASE4_DELAY = 10 * lone.delayPerMetre;
@@ -64,6 +65,11 @@ const ones = (bits: string) => [...bits].filter((b) => b === "1").length;
 
 /** Source resistance below which the doubled first arrival of `volts` clears `threshold` by `margin`. */
 const firstArrivalLimit = (z0: number, volts: number, threshold: number, margin: number) => z0 * ((2 * volts) / (threshold + margin) - 1);
+/** Source resistance above which the second arrival V·(1 − Γs²) stays `margin` above `level`. */
+function secondArrivalLimit(z0: number, volts: number, level: number, margin: number): number {
+  const deepest = Math.sqrt(1 - (level + margin) / volts);
+  return z0 * ((1 - deepest) / (1 + deepest));
+}
 
 type Formula = { source: string; value: () => number };
 
@@ -129,7 +135,7 @@ const formulas: Record<string, Formula> = {
   "series-termination/matching-resistor": { source: "R_s = Z0 − R_out (catalogue Z0)", value: () => lone.z0 - 30 },
   "series-termination/first-arrival-3v3": { source: "V_far(1) = 2·V·Z0/(R_src + Z0)", value: () => (2 * 3.3 * lone.z0) / (280 + lone.z0) },
   "series-termination/beside-ground-limit": {
-    source: "first arrival 0.3 V above the highest typical rise level: R_src = Z0·(2V/(V_rise + 0.3) − 1)",
+    source: "first arrival 0.3 V above the highest typical rise level: R_src = Z0·(2V/(V_rise + m) − 1)",
     value: () => firstArrivalLimit(beside.z0, 3.3, TYPICAL_RISE, 0.3) - 30,
   },
   "series-termination/staircase-arrival": { source: "(2n − 1)·T_d with n = 3 (catalogue delay)", value: () => 5 * 15 * threeCore.delayPerMetre },
@@ -225,7 +231,7 @@ describe("tables printed in the lessons", () => {
     }
   });
 
-  it("lesson 6's 3.3 V window table follows the first two arrivals against the typical band (0.3 V margin each side)", () => {
+  it("lesson 6's 3.3 V window table follows the first and second arrivals against the typical band (0.3 V margin each side)", () => {
     const rows = tableAfter(lessonBySlug("series-termination"), "## The 3.3 V design window");
     expect(rows).toHaveLength(5);
     const kinds = ["lone-lead", "beside-ground", "twisted-pair", "coax-75", "three-core"] as const;
@@ -235,9 +241,7 @@ describe("tables printed in the lessons", () => {
       const upper = firstArrivalLimit(entry.z0, 3.3, TYPICAL_RISE, 0.3) - 30;
       const stated = [...window.matchAll(/(\d+(?:\.\d+)?) Ω/g)].map((m) => Number(m[1]));
       expect(Math.abs(stated[stated.length - 1] - upper), `${kinds[i]} upper edge`).toBeLessThanOrEqual(1);
-      // The second arrival 3.3·(1 − Γs²) must stay 0.3 V above the highest typical fall level.
-      const ringLimit = Math.sqrt(1 - (TYPICAL_TOP_FALL + 0.3) / 3.3);
-      const lower = Math.max(0, entry.z0 * ((1 - ringLimit) / (1 + ringLimit)) - 30);
+      const lower = Math.max(0, secondArrivalLimit(entry.z0, 3.3, TYPICAL_FALL, 0.3) - 30);
       expect(Math.abs(stated[0] - lower), `${kinds[i]} lower edge`).toBeLessThanOrEqual(1);
     });
   });
@@ -259,6 +263,31 @@ const textOf = (slug: string) => lessonBySlug(slug).blocks.flatMap((b) => (b.kin
 const signed = (cell: string) => Number(cell.replace("−", "-").replace("+", ""));
 
 describe("worked examples printed in the lessons", () => {
+  it("lesson 1's colour word for red 200 in GRB order is the simulator's", () => {
+    const bits = colourBits([[200, 0, 0]], "GRB");
+    const grouped = (byte: string) => `${byte.slice(0, 4)} ${byte.slice(4)}`;
+    expect(textOf("pixel-data-stream")).toContain([bits.slice(0, 8), bits.slice(8, 16), bits.slice(16)].map(grouped).join(" · "));
+    expect(textOf("pixel-data-stream")).toContain(`So 200 = ${grouped(bits.slice(8, 16))}`);
+  });
+
+  it("lesson 6's four 3.3 V cases fall where the text puts them", () => {
+    const arrival = (series: number, z0: number, n: number) => 3.3 * (1 - gamma(30 + series, z0) ** n);
+    expect(gamma(30 + 250, beside.z0), "beside ground, 250 Ω: a staircase").toBeGreaterThan(0);
+    for (const [series, z0] of [[33, beside.z0], [250, lone.z0]]) {
+      expect(arrival(series, z0, 1), `${series} Ω: first arrival above the typical rise level`).toBeGreaterThan(TYPICAL_RISE);
+      expect(arrival(series, z0, 2), `${series} Ω: second arrival above the top fall level`).toBeGreaterThan(TYPICAL_FALL);
+    }
+    expect(arrival(33, lone.z0, 2), "lone lead, 33 Ω: the second arrival below every typical fall level").toBeLessThan(TYPICAL_LOWEST_FALL);
+  });
+
+  it("lesson 6's E12 and E24 lists are IEC 60063's", () => {
+    const e12 = eSeriesValues("E12", 10, 82);
+    const e24Only = eSeriesValues("E24", 10, 91).filter((r) => !e12.includes(r));
+    const text = textOf("series-termination");
+    expect(text).toContain(`twelve values per decade, ${e12.join(", ")};`);
+    expect(text).toContain(`E24 adds ${e24Only.join(", ")};`);
+  });
+
   it("lesson 5's step-by-step bounce table follows (2n − 1)·T_d, 2·V_launch·Γs^(n−1) and V·(1 − Γs^n)", () => {
     const rows = tableAfter(lessonBySlug("reflections"), "## A bounce diagram, step by step");
     expect(rows).toHaveLength(6);
@@ -283,10 +312,11 @@ describe("worked examples printed in the lessons", () => {
     expect(text).toContain(`the launched step is 3.3 V × ${z0} / ${CASE4_SOURCE + z0} = ${((3.3 * lone.z0) / (CASE4_SOURCE + lone.z0)).toFixed(2)} V`);
     const n = settlingArrival(gammaS, 0.01);
     expect(n).toBe(6);
-    expect(text).toContain(`ln 0.01 / ln ${Math.abs(gammaS).toFixed(3)} = ${(Math.log(0.01) / Math.log(Math.abs(gammaS))).toFixed(1)}: the sixth arrival, at ${2 * n - 1} × T_d = ${Math.round((2 * n - 1) * CASE4_DELAY * 1e9)} ns`);
+    expect(text).toContain(`ln 0.01 / ln ${Math.abs(gammaS).toFixed(3)} = ${(Math.log(0.01) / Math.log(Math.abs(gammaS))).toFixed(1)}: arrival ${n}, at ${2 * n - 1} × T_d = ${Math.round((2 * n - 1) * CASE4_DELAY * 1e9)} ns`);
     expect(text).toContain(`A 0 bit is high for only ${Math.round(ZERO_HIGH * 1e9)} ns`);
-    expect(3.3 * (1 - gammaS ** 2)).toBeLessThan(TYPICAL_TOP_FALL);
-    expect(text).toContain(`read the fall at ${TYPICAL_TOP_FALL.toFixed(3)} V`);
+    const at = (n: number) => (2 * n - 1) * CASE4_DELAY * 1e9;
+    expect(text).toContain(`The ${(3.3 * (1 - gammaS ** 2)).toFixed(2)} V plateau lies inside the band where pixels switch`);
+    expect(text).toContain(`sees the pulse start at ${at(1).toFixed(1)} ns, end at ${Math.round(at(2))} ns and start again at ${Math.round(at(3))} ns`);
     expect(text).toContain(`(T_d = ${(5 * lone.delayPerMetre * 1e9).toFixed(1)} ns)`);
     expect(text).toContain(`10 m of lone lead has ${(10 * lone.perMetre.resistance).toFixed(2)} Ω against ${z0} Ω`);
     expect(text).toContain(`each one round trip long (${Math.round(2 * CASE4_DELAY * 1e9)} ns on 10 m of lone lead)`);

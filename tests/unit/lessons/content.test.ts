@@ -121,7 +121,7 @@ describe.each(course.lessons.map((lesson) => [lesson.number, lesson.slug, lesson
 
   it("leaves no template residue in its markdown", () => {
     const all = lesson.blocks.flatMap((b) => ("markdown" in b ? [b.markdown] : "prompt" in b ? [b.prompt, b.hint, b.explanation] : [b.caption])).join("\n");
-    const residue = all.match(/\$\{|\bNaN\b|\[object/g) ?? [];
+    const residue = all.match(/\$\{|\{\{|\}\}|\bNaN\b|\bInfinity\b|\[object/g) ?? [];
     expect(residue).toEqual([]);
   });
 });

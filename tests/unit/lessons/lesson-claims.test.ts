@@ -4,8 +4,11 @@
  */
 import { describe, expect, it } from "vitest";
 import { CABLE_KINDS, cableCatalogue, eSeriesValues, parseSimInput, simulateRun, type CableKind, type SimResult } from "@/lib/sim";
+import { numbers as edges } from "@/lessons/03-edges/numbers";
+import { numbers as seriesTermination } from "@/lessons/06-series-termination/numbers";
 import { PIN_3V3_WINDOW } from "@/lessons/source-window";
 import { buffer5v, controllerPin3v3 } from "@/lessons/drivers";
+import { sharedNumbers } from "@/lessons/numbers/shared-numbers";
 
 const BITS = "0100110101100010";
 
@@ -68,6 +71,13 @@ describe("lesson 6: the field rule at 3.3 V into a 5 V pixel, 10 m", () => {
     if (middle !== undefined) expect(passing).toContain(middle);
   });
 
+  it("the workbench's windows the lesson quotes (committed numbers) do not overlap, and the lone lead's holds the field rule's 250 Ω", () => {
+    const { simulator, field } = seriesTermination;
+    expect(simulator.besideHighest.value).toBeLessThan(simulator.loneLowest.value);
+    expect(field.lone.value).toBeGreaterThanOrEqual(simulator.loneLowest.value);
+    expect(field.lone.value).toBeLessThanOrEqual(simulator.loneHighest.value);
+  });
+
   it("the lone-lead and beside-ground windows do not overlap", () => {
     const ok = (cable: CableKind, seriesResistance: number) => typicalWithMargin(run({ volts: 3.3, cable, length: 10, seriesResistance }));
     const lone = E24.filter((r) => r >= 100 && ok("lone-lead", r));
@@ -87,16 +97,16 @@ describe("lesson 6: the field rule at 3.3 V into a 5 V pixel, 10 m", () => {
 });
 
 describe("lesson 6: a 5 V driver tolerates much more", () => {
-  it.each(CABLE_KINDS.map((kind) => [kind]))("%s, 10 m: works on every pixel that meets its datasheet with 33 Ω", (cable) => {
-    expect(outcome(run({ volts: 5, cable, length: 10, seriesResistance: 33 }))).toBe("guaranteed");
+  const { fiveVolt, run: standardRun } = seriesTermination;
+  it.each(CABLE_KINDS.map((kind) => [kind]))(`%s, ${standardRun.length.value} m: works on every pixel that meets its datasheet with ${fiveVolt.low.value} Ω`, (cable) => {
+    expect(outcome(run({ volts: 5, cable, length: standardRun.length.value, seriesResistance: fiveVolt.low.value }))).toBe("guaranteed");
   });
 
-  it("with 249 Ω the lone lead is still guaranteed, the low-impedance cables only typical, and three-core fails", () => {
-    expect(outcome(run({ volts: 5, cable: "lone-lead", length: 10, seriesResistance: 249 }))).toBe("guaranteed");
-    for (const cable of ["beside-ground", "twisted-pair", "coax-75"] as const) {
-      expect(outcome(run({ volts: 5, cable, length: 10, seriesResistance: 249 })), cable).toBe("typical");
-    }
-    expect(outcome(run({ volts: 5, cable: "three-core", length: 10, seriesResistance: 249 }))).toBe("fails");
+  it(`with ${fiveVolt.high.value} Ω the lone lead is still guaranteed, the low-impedance cables only typical, and three-core fails`, () => {
+    const at = (cable: CableKind) => outcome(run({ volts: 5, cable, length: standardRun.length.value, seriesResistance: fiveVolt.high.value }));
+    expect(at("lone-lead")).toBe("guaranteed");
+    for (const cable of ["beside-ground", "twisted-pair", "coax-75"] as const) expect(at(cable), cable).toBe("typical");
+    expect(at("three-core")).toBe("fails");
   });
 
   it("three-core, 15 m: 330 Ω and 390 Ω lose the 0 bits, and the limit lies lower still", () => {
@@ -109,11 +119,31 @@ describe("lesson 6: a 5 V driver tolerates much more", () => {
   });
 });
 
-describe("lessons 3 and 5: closed forms the text works with", () => {
-  it("lesson 3: the long run in the RC picture (5 V, 270 Ω, 10 m beside ground) works on typical pixels and is not guaranteed", () => {
-    expect(outcome(run({ volts: 5, cable: "beside-ground", length: 10, seriesResistance: 270 }))).toBe("typical");
+describe("lesson 3: the long run in the RC picture", () => {
+  const { longRun } = edges;
+  const longRunAt = (volts: number) => run({ volts, cable: "beside-ground", length: longRun.length.value, seriesResistance: longRun.series.value });
+
+  it("works on typical pixels at 5 V and is not guaranteed", () => {
+    expect(outcome(longRunAt(5))).toBe("typical");
   });
 
+  it("fails from the 3.3 V pin, as lesson 6 shows", () => {
+    expect(outcome(longRunAt(3.3))).toBe("fails");
+  });
+});
+
+describe("lesson 1: the latch gap the lessons quote is the simulator's", () => {
+  const latchRun = (latchGap: number) =>
+    simulateRun({ cable: { kind: "beside-ground", length: 1 }, receiver: { supplyVoltage: 5 }, signal: { bits: "10", latchGap } });
+
+  it("accepts a low of that length as a latch, and warns of one a microsecond shorter", () => {
+    const gap = sharedNumbers.sim.latchGap.value;
+    expect(codes(latchRun(gap))).not.toContain("latch-gap-short");
+    expect(codes(latchRun(gap - 1e-6))).toContain("latch-gap-short");
+  });
+});
+
+describe("lessons 3 and 5: closed forms the text works with", () => {
   it("lesson 3: a large resistor on a short lead gives the RC rise time 2.2·R·C within 15 %", () => {
     const result = run({ volts: 5, cable: "beside-ground", length: 1.5, seriesResistance: 560 });
     const capacitance = 1.5 * 59.5e-12 + 5e-12;
