@@ -32,10 +32,11 @@ export const NEGLIGIBLE_CONDUCTION = 0.4;
 /**
  * Solves G·v − J + I = 0 when J/G lies beyond a rail, with I the current out of the pin through
  * both clamps, each Is·(e^(u/Vt) − 1) for a junction voltage u = (the pin's distance beyond its
- * rail) − I·Rs. Only the clamp on the conducting side matters (the other carries at most Is).
- * Seen from the junction, the series resistance only adds to the source's: the junction is fed
- * from the same open-circuit voltage J/G through 1/G + Rs, that is through G' = G/(1 + G·Rs) with
- * D' = D/(1 + G·Rs), D being the current the source would push into the rail. So with x the
+ * rail) − I·Rd, Rd being the clamp's series resistance. Only the clamp on the conducting side
+ * matters (the other carries at most Is). Seen from the junction, the series resistance only
+ * adds to the source's: the junction is fed from the same open-circuit voltage J/G through
+ * 1/G + Rd, that is through G' = G/(1 + G·Rd) with D' = D/(1 + G·Rd), D being the current the
+ * source would push into the rail. So with x the
  * junction's distance beyond the rail the equation is f(x) = G'·x − D' + Is·(e^(x/Vt) − 1) = 0,
  * x in [0, D'/G'], or in logarithmic form h(x) = x − Vt·ln(1 + (D' − G'·x)/Is) = 0: the equation
  * of a diode without series resistance, monotone as before. Both are increasing and convex, so a
@@ -44,7 +45,7 @@ export const NEGLIGIBLE_CONDUCTION = 0.4;
  * negligible (near D'/G'). Each iteration takes h's step, and where the diode carries less than
  * Vt·G' also f's, keeping the one that lands nearer the root: the longer from the right, the
  * shorter from the left. A shrinking bracket with bisection catches anything else. The pin then
- * lies Rs·(D' − G'·x) beyond the junction; as x moves, the pin moves 1/(1 + G·Rs) as far, so the
+ * lies Rd·(D' − G'·x) beyond the junction; as x moves, the pin moves 1/(1 + G·Rd) as far, so the
  * pin is at least as close to its root as the junction is to its own. `guess` is the caller's
  * estimate of the pin voltage (the last two steps extrapolated, usually within a millivolt),
  * mapped to the junction through the same current; the clamp current is then J − G·v.
@@ -59,18 +60,18 @@ export function solveClamped(pinConductance: number, injected: number, supply: n
   let low = 0;
   let high = available / conductance;
   const start = sign * (guess - rail) - seriesResistance * sign * (injected - pinConductance * guess);
-  // Without a usable guess: the root if G were 0, which lies right of the true one.
+  // Without a usable guess: the root if G' were 0, which lies right of the true one.
   let x = start > low && start < high ? start : Math.min(VT * Math.log(1 + available / IS), high * (1 - 1e-12));
   for (let iteration = 0; iteration < 80; iteration += 1) {
     const ratio = 1 + (available - conductance * x) / IS;
     const residual = x - VT * Math.log(ratio);
     const slope = 1 + (VT * conductance) / (IS * ratio);
     let step = residual / slope;
-    // Where the diode carries more than Vt·G, h is nearly straight: h''/(2h') = (h' − 1)²/(2·Vt·h'),
+    // Where the diode carries more than Vt·G', h is nearly straight: h''/(2h') = (h' − 1)²/(2·Vt·h'),
     // and a Newton step of δ leaves an error of about that times δ².
     let curvature = ((slope - 1) * (slope - 1)) / (2 * VT * slope);
     if (slope > 2) {
-      // The diode carries less than Vt·G: here f's step is the better one.
+      // The diode carries less than Vt·G': here f's step is the better one.
       const exponential = Math.exp(x / VT);
       const linearStep = (conductance * x - available + IS * (exponential - 1)) / (conductance + (IS / VT) * exponential);
       // Right of the root both steps fall short: take the longer; left of it both overshoot: take the shorter.
