@@ -66,7 +66,7 @@ function dcState(level: number, sourceResistance: number, ladder: Ladder, receiv
   }
   shunt(endConductance);
   theveninResistance = Math.max(theveninResistance + endResistance, 1e-3);
-  const pin = pinEquilibrium(theveninVoltage, 1 / theveninResistance, receiver.supply, receiver.clamps);
+  const pin = pinEquilibrium(theveninVoltage, 1 / theveninResistance, receiver.supply, receiver.clamps, receiver.clampSeriesResistance);
 
   const forward = new Float64Array(segments);
   const backward = new Float64Array(segments);
@@ -135,6 +135,7 @@ class DistributedLine {
   private readonly historyWeight2: number;
   private readonly supply: number;
   private readonly clamps: boolean;
+  private readonly clampSeriesResistance: number;
   private readonly safeLow: number;
   private readonly safeHigh: number;
   private readonly library = new SegmentLibrary();
@@ -205,6 +206,7 @@ class DistributedLine {
     this.historyWeight2 = receiver.capacitance / (2 * dt);
     this.supply = receiver.supply;
     this.clamps = receiver.clamps;
+    this.clampSeriesResistance = receiver.clampSeriesResistance;
     this.safeLow = receiver.clamps ? -NEGLIGIBLE_CONDUCTION : -Infinity;
     this.safeHigh = receiver.clamps ? receiver.supply + NEGLIGIBLE_CONDUCTION : Infinity;
   }
@@ -483,7 +485,7 @@ class DistributedLine {
    * there, and ignores arriving changes under the input tolerance.
    */
   private farEnd(start: number, length: number, incoming: WaveChunk, out: WaveChunk): void {
-    const { endResistance, theveninScale, theveninConductance, safeLow, safeHigh, supply, clamps, dt } = this;
+    const { endResistance, theveninScale, theveninConductance, safeLow, safeHigh, supply, clamps, clampSeriesResistance, dt } = this;
     const { settled, input: inputDeadband, output: outputDeadband } = this.tolerances;
     // Imported functions are property reads in bundled code: read them once, not every step.
     const clampedVoltage = solveClamped;
@@ -546,8 +548,8 @@ class DistributedLine {
       const injected = driven + weight1 * v1 - weight2 * v2;
       let v = injected * inverseTotal;
       if (v > safeHigh || v < safeLow) {
-        const quick = clampCurrent === 0 ? Number.NaN : clampStep(total, injected, supply, v1, clampCurrent);
-        v = quick === quick ? quick : clampedVoltage(total, injected, supply, 2 * v1 - v2);
+        const quick = clampCurrent === 0 ? Number.NaN : clampStep(total, injected, supply, v1, clampCurrent, clampSeriesResistance);
+        v = quick === quick ? quick : clampedVoltage(total, injected, supply, 2 * v1 - v2, clampSeriesResistance);
         clampCurrent = injected - total * v;
         const magnitude = Math.abs(clampCurrent);
         if (magnitude > clampPeak) {
@@ -570,8 +572,8 @@ class DistributedLine {
       pin[i] = v;
       if (Math.abs(v1 - v2) <= settled) {
         // A clamped pin's DC value is one short Newton step away, or too far away to hold at.
-        if (clampCurrent !== 0) equilibrium = clampStep(theveninConductance, driven, supply, v1, clampCurrent);
-        else if (equilibrium !== equilibrium) equilibrium = equilibriumOf(thevenin, theveninConductance, supply, clamps);
+        if (clampCurrent !== 0) equilibrium = clampStep(theveninConductance, driven, supply, v1, clampCurrent, clampSeriesResistance);
+        else if (equilibrium !== equilibrium) equilibrium = equilibriumOf(thevenin, theveninConductance, supply, clamps, clampSeriesResistance);
         if (Math.abs(v1 - equilibrium) <= settled && Math.abs(v2 - equilibrium) <= settled) {
           v1 = equilibrium;
           v2 = equilibrium;

@@ -34,7 +34,8 @@ export type DriverResistances = {
   low: number;
 };
 
-export type ReceiverLoad = { capacitance: number; supply: number; clamps: boolean };
+/** The pixel's pin: its capacitance, supply, and clamps, each behind `clampSeriesResistance` (Ω). */
+export type ReceiverLoad = { capacitance: number; supply: number; clamps: boolean; clampSeriesResistance: number };
 
 export type SolverPlan = {
   dt: number;
@@ -147,7 +148,7 @@ function solveLumped(
   const { near, far } = scratch;
   near.clear();
   far.clear();
-  const node = new FarNode(receiver.capacitance + line.capacitance, dt, receiver.supply, receiver.clamps);
+  const node = new FarNode(receiver.capacitance + line.capacitance, dt, receiver.supply, receiver.clamps, receiver.clampSeriesResistance);
   const seriesConductance = (resistance: number) => 1 / Math.max(resistance + line.resistance, 1e-3);
   const gHigh = seriesConductance(resistances.high);
   const gLow = seriesConductance(resistances.low);

@@ -1,3 +1,4 @@
+import { CLAMP_DIODE_MODEL } from "./far-node";
 import type { ResolvedSimInput } from "./schema";
 
 /**
@@ -27,7 +28,9 @@ import type { ResolvedSimInput } from "./schema";
  *   not a bit the protocol defines;
  * - clamp injection rating 20 mA: the absolute maximum input clamp current of standard CMOS logic
  *   inputs (±20 mA, JEDEC JESD7A for the high-speed CMOS family, from memory), assumed for pixel
- *   inputs whose datasheets do not state one; a design keeps under half of it (common derating).
+ *   inputs whose datasheets do not state one; a design keeps under half of it (common derating);
+ * - clamp series resistance 5 Ω: an assumption from memory, kept with the diode law in
+ *   CLAMP_DIODE_MODEL (far-node.ts, where its basis is given).
  */
 export const RECEIVER_DEFAULTS = {
   highThreshold: 0.7,
@@ -40,6 +43,7 @@ export const RECEIVER_DEFAULTS = {
   minGap: 0.15e-6,
   decisionTime: 0.6e-6,
   clampCurrentRating: 20e-3,
+  clampSeriesResistance: CLAMP_DIODE_MODEL.seriesResistance,
 } as const;
 
 /** The clamp current a design keeps under: half the input's rated injection current (common derating practice). */

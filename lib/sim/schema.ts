@@ -68,6 +68,7 @@ const receiverSchema = z
     minGap: quantity("s", 0, 10e-6).default(RECEIVER_DEFAULTS.minGap),
     decisionTime: quantity("s", 0, 10e-6, { exclusiveMin: true }).default(RECEIVER_DEFAULTS.decisionTime),
     clampCurrentRating: quantity("A", 0, 1, { exclusiveMin: true }).default(RECEIVER_DEFAULTS.clampCurrentRating),
+    clampSeriesResistance: quantity("Ω", 0, 10_000).default(RECEIVER_DEFAULTS.clampSeriesResistance),
   })
   .check((ctx) => {
     const receiver = ctx.value;

@@ -156,7 +156,12 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
     totals,
     driveSchedule(resolved, slots),
     { high: resistanceHigh, low: resistanceLow },
-    { capacitance: receiver.inputCapacitance, supply: receiver.supplyVoltage, clamps: receiver.clampDiodes },
+    {
+      capacitance: receiver.inputCapacitance,
+      supply: receiver.supplyVoltage,
+      clamps: receiver.clampDiodes,
+      clampSeriesResistance: receiver.clampSeriesResistance,
+    },
     scratch,
   );
   const far = waveformFromTrace(solved.far, solved.dt, farScratch);
@@ -182,6 +187,7 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
     1 / Math.max(resistanceHigh + totals.resistance, 1e-3),
     receiver.supplyVoltage,
     receiver.clampDiodes,
+    receiver.clampSeriesResistance,
   );
   const metrics = measureRun({
     wave: far,

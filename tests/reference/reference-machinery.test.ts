@@ -13,7 +13,7 @@ import { decodeWaveform, type DecodeSettings } from "./support/receiver-decode";
 import { lineDelay, type ReferenceCircuit } from "./support/reference-circuit";
 import { windowedError } from "./support/waveform-compare";
 
-const silicon = { saturationCurrent: 1e-14, emissionCoefficient: 1, thermalVoltage: 0.025852 };
+const silicon = { saturationCurrent: 1e-14, emissionCoefficient: 1, thermalVoltage: 0.025852, seriesResistance: 0 };
 
 function circuit(overrides: Partial<ReferenceCircuit> = {}): ReferenceCircuit {
   return {
@@ -123,9 +123,35 @@ describe("ngspice netlist", () => {
     expect(() => buildNgspiceNetlist(circuit({ line: { resistance: 0.1, inductance: 5e-7, capacitance: 5e-11, conductance: 0, length: 1 } }))).toThrow(/lossless/);
   });
 
-  it("sets the temperature so that kT/q equals the diode law's thermal voltage", () => {
+  it("sets the temperature so that kT/q equals the diode law's thermal voltage, and gives the diode its series resistance", () => {
     expect(temperatureCelsiusFor(0.025852)).toBeCloseTo(26.85, 1);
-    expect(buildNgspiceNetlist(circuit({ clampDiodes: true }))).toMatch(/^\.model clamp D\(IS=1\.00000000000e-14 N=1\.00000000000e\+0\)$/m);
+    expect(buildNgspiceNetlist(circuit({ clampDiodes: true }))).toMatch(/^\.model clamp D\(IS=1\.00000000000e-14 N=1\.00000000000e\+0 RS=0\)$/m);
+    const resisted = circuit({ clampDiodes: true, diode: { ...silicon, seriesResistance: 4.7 } });
+    expect(buildNgspiceNetlist(resisted)).toMatch(/^\.model clamp D\(IS=1\.00000000000e-14 N=1\.00000000000e\+0 RS=4\.70000000000e\+0\)$/m);
+  });
+
+  it("settles a clamped pin where the diode-and-resistor law puts it (RS = 0 and 20 Ω)", async () => {
+    // 8 V behind 150 Ω into a 5 V pin: the upper clamp carries about 15 mA once the line is quiet.
+    const settled = async (seriesResistance: number) => {
+      const held = circuit({ highVoltage: 8, clampDiodes: true, diode: { ...silicon, seriesResistance } });
+      const result = await runNgspice(held);
+      return valueAt(result.time, result.vectors["v(far)"], held.leadIn + held.oneHigh - 0.1e-6);
+    };
+    /** The pin x volts above 5 V passes (8 − 5 − x)/150 A, which the law needs at junction x − I·Rs: bisection on x. */
+    const law = (rs: number) => {
+      let [low, high] = [0, 3];
+      for (let k = 0; k < 100; k++) {
+        const x = 0.5 * (low + high);
+        const current = (3 - x) / 150;
+        if (current > silicon.saturationCurrent * Math.expm1((x - current * rs) / silicon.thermalVoltage)) low = x;
+        else high = x;
+      }
+      return 5 + 0.5 * (low + high);
+    };
+    const [bare, resisted] = [await settled(0), await settled(20)];
+    expect(Math.abs(bare - law(0))).toBeLessThan(2e-3);
+    expect(Math.abs(resisted - law(20))).toBeLessThan(2e-3);
+    expect(resisted - bare).toBeGreaterThan(0.2);
   });
 
   it("clamped far end stays within the rails plus a diode drop while the open line would reach 2·V", async () => {

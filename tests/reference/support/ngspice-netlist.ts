@@ -1,8 +1,8 @@
 /**
  * Netlist for ngspice (Debian package) of a reference circuit, using the lossless `T` element, which
  * docs/simulator.md ("Reference tools: what to trust") names as the trustworthy line model.
- * Clamp diodes use ngspice's junction diode with only IS and N set (no series resistance, no
- * junction capacitance), i.e. the plain exponential law the solver uses; the simulation temperature is
+ * Clamp diodes use ngspice's junction diode with IS, N and RS set (no junction capacitance), i.e. the
+ * exponential law behind a series resistance that the solver uses; the simulation temperature is
  * chosen so that ngspice's thermal voltage kT/q equals the solver's.
  */
 import { lineDelay, losslessImpedance, stopTime, type ReferenceCircuit } from "./reference-circuit";
@@ -61,7 +61,7 @@ export function buildNgspiceNetlist(circuit: ReferenceCircuit, options: NetlistO
   }
   lines.push(`cin far 0 ${spiceNumber(circuit.inputCapacitance)}`);
   if (circuit.clampDiodes) {
-    const { saturationCurrent, emissionCoefficient, thermalVoltage } = circuit.diode;
+    const { saturationCurrent, emissionCoefficient, thermalVoltage, seriesResistance } = circuit.diode;
     const celsius = spiceNumber(temperatureCelsiusFor(thermalVoltage));
     // The 0 V source in the lower clamp's path only serves to read its current.
     lines.push(
@@ -69,7 +69,7 @@ export function buildNgspiceNetlist(circuit: ReferenceCircuit, options: NetlistO
       "vclamplow gndclamp 0 DC 0",
       "dclamplow gndclamp far clamp",
       "dclamphigh far vdd clamp",
-      `.model clamp D(IS=${spiceNumber(saturationCurrent)} N=${spiceNumber(emissionCoefficient)})`,
+      `.model clamp D(IS=${spiceNumber(saturationCurrent)} N=${spiceNumber(emissionCoefficient)} RS=${spiceNumber(seriesResistance)})`,
       `.options temp=${celsius} tnom=${celsius}`,
     );
   }

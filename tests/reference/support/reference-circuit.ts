@@ -6,10 +6,12 @@
 import { catalogueFromGeometry, type CableKind } from "./cable-geometry";
 
 export interface DiodeLaw {
-  /** Saturation current Is (A) of the exponential law I = Is·(exp(V/(n·Vt)) − 1). */
+  /** Saturation current Is (A) of the exponential law I = Is·(exp((V − I·Rs)/(n·Vt)) − 1). */
   saturationCurrent: number;
   emissionCoefficient: number;
   thermalVoltage: number;
+  /** Ohmic series resistance Rs (Ω), a SPICE diode's RS. */
+  seriesResistance: number;
 }
 
 export interface ReferenceCircuit {
@@ -43,6 +45,7 @@ export interface DocSimInput {
     supplyVoltage: number;
     inputCapacitance: number;
     clampDiodes: boolean;
+    clampSeriesResistance?: number;
     highThreshold?: number;
     lowThreshold?: number;
     deglitchTime: number;
@@ -87,6 +90,7 @@ export function perMetreOf(cable: DocSimInput["cable"]): PerMetre {
   return "kind" in cable ? catalogueFromGeometry[cable.kind].perMetre : cable.perMetre;
 }
 
+/** `diode` gives the law; the input's own `clampSeriesResistance`, when set, replaces its series resistance. */
 export function resolveReferenceCircuit(
   input: DocSimInput,
   diode: DiodeLaw,
@@ -106,7 +110,7 @@ export function resolveReferenceCircuit(
     supplyVoltage: input.receiver.supplyVoltage,
     inputCapacitance: input.receiver.inputCapacitance,
     clampDiodes: input.receiver.clampDiodes,
-    diode,
+    diode: { ...diode, seriesResistance: input.receiver.clampSeriesResistance ?? diode.seriesResistance },
     receiver: {
       highThreshold: input.receiver.highThreshold ?? DOC_DEFAULTS.highThreshold,
       lowThreshold: input.receiver.lowThreshold ?? DOC_DEFAULTS.lowThreshold,

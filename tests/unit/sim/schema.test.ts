@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { parseSimInput, SimInputError, simInputSchema } from "@/lib/sim";
+import { CLAMP_DIODE_MODEL, parseSimInput, SimInputError, simInputSchema } from "@/lib/sim";
 
 const valid = { cable: { kind: "beside-ground", length: 10 }, signal: { bits: "0101" } };
 
@@ -17,12 +17,17 @@ describe("the simulator input schema", () => {
   it("fills the defaults docs/simulator.md gives", () => {
     const resolved = parseSimInput(valid);
     expect(resolved.receiver).toMatchObject({ highThreshold: 0.7, lowThreshold: 0.3, minPulse: 0.15e-6, decisionTime: 0.6e-6 });
+    expect(resolved.receiver.clampSeriesResistance).toBe(CLAMP_DIODE_MODEL.seriesResistance);
     expect(resolved.signal).toMatchObject({ bitPeriod: 1.25e-6, zeroHigh: 0.4e-6, oneHigh: 0.8e-6, leadIn: 1e-6, byteOrder: "GRB" });
   });
 
   it("accepts its own output again unchanged", () => {
     const resolved = parseSimInput(valid);
     expect(parseSimInput(resolved)).toEqual(resolved);
+  });
+
+  it("names a negative clamp series resistance", () => {
+    expect(issuesOf({ ...valid, receiver: { clampSeriesResistance: -1 } })).toEqual([{ path: "receiver.clampSeriesResistance", message: "must be at least 0 Ω" }]);
   });
 
   it("names the field of a negative length", () => {

@@ -1,12 +1,13 @@
 /**
  * The solver's building blocks on their own: the pin trace keeps every step within its
- * tolerance, the clamp solve lands on the root of the diode equation, and recorded stretches
- * are only reused where the edges ahead are the same.
+ * tolerance, the clamp solve lands on the root of the diode equation (with and without the
+ * clamps' series resistance), and recorded stretches are only reused where the edges ahead are
+ * the same.
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { CLAMP_DIODE_MODEL } from "@/lib/sim";
-import { clampStepFrom, solveClamped } from "@/lib/sim/far-node";
+import { clampStepFrom, FarNode, pinEquilibrium, solveClamped } from "@/lib/sim/far-node";
 import { SegmentLibrary, type SegmentRecording } from "@/lib/sim/segment-replays";
 import { Trace, TRACE_TOLERANCE } from "@/lib/sim/trace";
 import { expandTrace } from "@/lib/sim/waveform";
@@ -76,7 +77,7 @@ describe("the clamp solve", () => {
     return 0.5 * (low + high);
   }
 
-  it("lands within 10 µV of the root from any guess, above the supply and below ground", () => {
+  it("without series resistance, lands within 10 µV of the root from any guess, above the supply and below ground", () => {
     fc.assert(
       fc.property(
         fc.double({ min: 1e-3, max: 0.5, noNaN: true }),
@@ -87,8 +88,8 @@ describe("the clamp solve", () => {
         (g, overdrive, above, supply, guessOffset) => {
           const open = above ? supply + overdrive : -overdrive;
           const root = bisect(g, g * open, supply);
-          expect(Math.abs(solveClamped(g, g * open, supply, root + guessOffset) - root)).toBeLessThan(1e-5);
-          expect(Math.abs(solveClamped(g, g * open, supply, root + guessOffset * 1e-3) - root)).toBeLessThan(1e-5);
+          expect(Math.abs(solveClamped(g, g * open, supply, root + guessOffset, 0) - root)).toBeLessThan(1e-5);
+          expect(Math.abs(solveClamped(g, g * open, supply, root + guessOffset * 1e-3, 0) - root)).toBeLessThan(1e-5);
         },
       ),
       { numRuns: 300 },
@@ -96,36 +97,127 @@ describe("the clamp solve", () => {
   });
 });
 
+describe("the clamp solve with series resistance", () => {
+  const { saturationCurrent: is, thermalVoltage: vt } = CLAMP_DIODE_MODEL;
+  /**
+   * The current into the conducting rail from a source `open` volts (through conductance g) with
+   * the pin left free, solved on its own law, I = Is·(e^((x − I/g − I·Rs)/Vt) − 1) with x the open
+   * voltage's distance beyond the rail: I − Is·(e^(…) − 1) rises with I from −∞·… to I = g·x, so
+   * bisection on [0, g·x] to 1e-15 A finds it.
+   */
+  function bisectCurrent(g: number, open: number, supply: number, rs: number): number {
+    const beyond = open > supply ? open - supply : -open;
+    let low = 0;
+    let high = g * beyond;
+    for (let k = 0; k < 200 && high - low > 1e-15; k += 1) {
+      const current = 0.5 * (low + high);
+      if (current - is * Math.expm1((beyond - current / g - current * rs) / vt) > 0) high = current;
+      else low = current;
+    }
+    return 0.5 * (low + high);
+  }
+  const pinOf = (g: number, open: number, supply: number, current: number) => (open > supply ? open - current / g : open + current / g);
+  const circuits = fc.record({
+    g: fc.double({ min: 1e-3, max: 0.5, noNaN: true }),
+    overdrive: fc.double({ min: 0.45, max: 8, noNaN: true }),
+    above: fc.boolean(),
+    supply: fc.constantFrom(3.3, 5),
+    rs: fc.oneof(fc.double({ min: 0, max: 100, noNaN: true }), fc.constantFrom(0, 5, 1000)),
+    guessOffset: fc.double({ min: -3, max: 3, noNaN: true }),
+  });
+
+  it("gives the clamp current of the diode-and-resistor law through a known source, from any guess", () => {
+    fc.assert(
+      fc.property(circuits, ({ g, overdrive, above, supply, rs, guessOffset }) => {
+        const open = above ? supply + overdrive : -overdrive;
+        const current = bisectCurrent(g, open, supply, rs);
+        const pin = pinOf(g, open, supply, current);
+        for (const guess of [pin + guessOffset, pin + guessOffset * 1e-3]) {
+          const v = solveClamped(g, g * open, supply, guess, rs);
+          expect(Math.abs(v - pin)).toBeLessThan(1e-5);
+          // The current follows from the pin through the source: within g·10 µV of the law's.
+          expect(Math.abs(Math.abs(g * open - g * v) - current)).toBeLessThan(g * 1e-5 + 1e-12);
+        }
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it("is what the pin node steps to with no capacitance, and what it settles to", () => {
+    fc.assert(
+      fc.property(circuits, ({ g, overdrive, above, supply, rs }) => {
+        const open = above ? supply + overdrive : -overdrive;
+        const current = bisectCurrent(g, open, supply, rs);
+        const node = new FarNode(0, 1e-10, supply, true, rs);
+        const v = node.step(open, g);
+        expect(Math.abs(v - pinOf(g, open, supply, current))).toBeLessThan(1e-5);
+        expect(Math.abs(Math.abs(node.current) - current)).toBeLessThan(g * 1e-5 + 1e-12);
+        expect(Math.sign(node.current)).toBe(above ? 1 : -1);
+        expect(Math.abs(node.equilibrium(open, g) - v)).toBeLessThan(1e-5);
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it("with no series resistance is the law without it, and more resistance lets the pin further past its rail", () => {
+    const g = 1 / 53;
+    const open = 5;
+    const supply = 3.3;
+    const bare = pinEquilibrium(open, g, supply, true, 0);
+    expect(bare).toBe(solveClamped(g, g * open, supply, open, 0));
+    const current = bisectCurrent(g, open, supply, 0);
+    expect(Math.abs(bare - pinOf(g, open, supply, current))).toBeLessThan(1e-5);
+    const withFive = pinEquilibrium(open, g, supply, true, 5);
+    const withFifty = pinEquilibrium(open, g, supply, true, 50);
+    expect(withFive).toBeGreaterThan(bare);
+    expect(withFifty).toBeGreaterThan(withFive);
+    // Between the two the junction's drop changes by Vt·ln of the currents' ratio: the rest is the resistance.
+    const [i5, i50] = [g * (open - withFive), g * (open - withFifty)];
+    expect(withFifty - withFive).toBeCloseTo(50 * i50 - 5 * i5 + vt * Math.log(i50 / i5), 5);
+  });
+});
+
 describe("the quick clamp step from the last step's answer", () => {
   const { saturationCurrent: is, thermalVoltage: vt } = CLAMP_DIODE_MODEL;
-  const diodeCurrent = (v: number, supply: number) => is * Math.expm1((v - supply) / vt) - is * Math.expm1(-v / vt);
 
-  it("lands within 25 µV of the new root when it answers, and declines a long step", () => {
+  it("lands within 25 µV of the new root when it answers, with and without series resistance, and declines a long step", () => {
     let answered = 0;
+    let answeredWithResistance = 0;
     fc.assert(
       fc.property(
         fc.double({ min: 1e-3, max: 0.5, noNaN: true }),
         fc.double({ min: 0.45, max: 6, noNaN: true }),
         fc.boolean(),
         fc.double({ min: -0.05, max: 0.05, noNaN: true }),
-        (g, overdrive, above, change) => {
+        fc.oneof(fc.constant(0), fc.double({ min: 0, max: 100, noNaN: true })),
+        (g, overdrive, above, change, rs) => {
           const supply = 5;
           const open = above ? supply + overdrive : -overdrive;
-          const previous = solveClamped(g, g * open, supply, open);
+          const previous = solveClamped(g, g * open, supply, open, rs);
           const previousCurrent = g * open - g * previous;
           const next = g * (open + change);
-          const root = solveClamped(g, next, supply, previous);
-          const quick = clampStepFrom(g, next, supply, previous, previousCurrent);
+          const root = solveClamped(g, next, supply, previous, rs);
+          const quick = clampStepFrom(g, next, supply, previous, previousCurrent, rs);
           if (Number.isNaN(quick)) return;
           answered += 1;
+          if (rs > 0) answeredWithResistance += 1;
           expect(Math.abs(quick - root)).toBeLessThan(2.5e-5);
-          expect(Math.abs(g * quick - next + diodeCurrent(quick, supply))).toBeLessThan(2.5e-5 * (g + Math.abs(diodeCurrent(quick, supply)) / vt));
+          // The junction behind the resistance sits on its own law: G'·u − D' + Is·(e^(u/Vt) − 1) = 0.
+          const sign = above ? 1 : -1;
+          const rail = above ? supply : 0;
+          const current = sign * (next - g * quick);
+          const junction = sign * (quick - rail) - rs * current;
+          const scale = 1 / (1 + g * rs);
+          const residual = g * scale * junction - sign * (next - g * rail) * scale + is * Math.expm1(junction / vt);
+          expect(Math.abs(residual)).toBeLessThan(2.5e-5 * (g * scale + (current + is) / vt));
         },
       ),
       { numRuns: 300 },
     );
     expect(answered).toBeGreaterThan(20);
-    expect(clampStepFrom(0.1, 0.1 * 6.5, 5, 5.6, 0.05)).toBeNaN();
+    expect(answeredWithResistance).toBeGreaterThan(10);
+    expect(clampStepFrom(0.1, 0.1 * 6.5, 5, 5.6, 0.05, 0)).toBeNaN();
+    expect(clampStepFrom(0.1, 0.1 * 6.5, 5, 5.9, 0.05, 5)).toBeNaN();
   });
 });
 
