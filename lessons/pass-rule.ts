@@ -1,4 +1,7 @@
-import { OUTCOME_WORDS, RECEIVER_DEFAULTS, clampCurrentLimit, type JudgementName, type SimResult } from "@/lib/sim";
+import type { SimResult } from "@/lib/sim";
+// The workbench runs this rule in the browser: the receiver and verdict modules bring no zod with them.
+import { RECEIVER_DEFAULTS, clampCurrentLimit, type JudgementName } from "@/lib/sim/receiver";
+import { OUTCOME_WORDS } from "@/lib/sim/verdict";
 import type { PassRule } from "./schema";
 
 export type RuleFailureCode =
