@@ -1,3 +1,4 @@
+import ipaddr from "ipaddr.js";
 import { z } from "zod";
 
 // Each part of the app reads only the settings it needs, on first use, so a script that only
@@ -35,6 +36,20 @@ const mailRetryEnvSchema = z.object({
   INVITATION_MAIL_RETRY_SECONDS: z.coerce.number().positive().max(3_600).default(60),
 });
 
+// The proxies whose X-Forwarded-For entries are believed (lib/client-address): addresses, CIDR
+// ranges, or the names proxy-addr knows for the loopback, link-local and unique-local ranges.
+const proxyNames = new Set(["loopback", "linklocal", "uniquelocal"]);
+const isProxyEntry = (entry: string) => proxyNames.has(entry) || ipaddr.isValid(entry) || ipaddr.isValidCIDR(entry);
+const trustedProxiesEnvSchema = z.object({
+  TRUSTED_PROXIES: z
+    .string()
+    .default("")
+    .transform((value) => value.split(",").map((entry) => entry.trim()).filter((entry) => entry !== ""))
+    .refine((entries) => entries.every(isProxyEntry), {
+      error: "must list IP addresses or CIDR ranges (such as 10.0.0.0/8), separated by commas",
+    }),
+});
+
 export type DatabaseEnv = z.infer<typeof databaseEnvSchema>;
 export type AppEnv = z.infer<typeof appEnvSchema>;
 export type MailEnv = z.infer<typeof mailEnvSchema>;
@@ -65,4 +80,5 @@ export const readAppEnv = once(() => {
 });
 export const readMailEnv = once(() => readEnv(mailEnvSchema));
 export const readMailSinkUrl = once(() => readEnv(mailSinkEnvSchema).MAIL_SINK_URL?.replace(/\/+$/, ""));
+export const readTrustedProxies = once(() => readEnv(trustedProxiesEnvSchema).TRUSTED_PROXIES);
 export const readMailRetryEnv = once(() => readEnv(mailRetryEnvSchema));

@@ -120,7 +120,10 @@ async function main(): Promise<void> {
   const load = loadavg()[0];
   console.log(`Load benchmark: ${settings.learners} learners, ${settings.seconds} s mix, ${settings.burstSeconds} s burst phases; ${availableParallelism()} cores, load average ${load.toFixed(2)}`);
   console.log("Starting the private instance (build if stale, fresh database)…");
-  const instance = await startAppInstance({ name: "load", portBase: settings.portBase, build: true, appEnv: {} });
+  // The driver stands in for the load balancer of a deployment: the instance believes the
+  // X-Forwarded-For it sends with each learner's own address, so rate limits count per learner.
+  const behindBalancer = { TRUSTED_PROXIES: "127.0.0.1" };
+  const instance = await startAppInstance({ name: "load", portBase: settings.portBase, build: true, appEnv: behindBalancer });
   const driver = startDriver();
   try {
     Object.assign(process.env, instance.env);
@@ -163,8 +166,8 @@ async function main(): Promise<void> {
     const pooledRounds: BurstFigures[] = [];
     const inlineRounds: BurstFigures[] = [];
     for (let round = 1; round <= settings.burstRounds; round++) {
-      pooledRounds.push(await burstRound(`round ${round}, grading threads (${threads})`, {}));
-      inlineRounds.push(await burstRound(`round ${round}, request thread (reference)`, { GRADING_THREADS: "0" }));
+      pooledRounds.push(await burstRound(`round ${round}, grading threads (${threads})`, behindBalancer));
+      inlineRounds.push(await burstRound(`round ${round}, request thread (reference)`, { ...behindBalancer, GRADING_THREADS: "0" }));
     }
     const pooled = meanOf(pooledRounds);
     const inline = meanOf(inlineRounds);

@@ -3,6 +3,7 @@ import { buttonClass } from "@/components/ui/button-class";
 import { formatCertificateCode } from "@/lib/certificates/code";
 import { formatCertificateDate } from "@/lib/certificates/dates";
 import type { Verification } from "@/lib/certificates/verification";
+import { describeWait } from "@/lib/http/errors";
 
 const tones = {
   valid: "border-ok/40 bg-ok-soft text-ok",
@@ -71,8 +72,8 @@ export function VerificationResult({ result }: { result: Exclude<Verification, {
             Too many checks from your network
           </h1>
           <p className={`mt-5 rounded-lg border px-4 py-3 font-medium ${tones["rate-limited"]}`}>
-            Wait a minute, then load this page again. Checks are limited per network address to keep the service
-            fair for everyone.
+            Wait {describeWait(result.retryAfterSeconds)}, then load this page again. Checks are limited per network
+            address to keep the service fair for everyone.
           </p>
         </>
       )}

@@ -1,4 +1,4 @@
-import { and, desc, eq, isNull, lt, sql } from "drizzle-orm";
+import { and, desc, eq, isNull, sql } from "drizzle-orm";
 import { db } from "../client";
 import type { Executor } from "../connection";
 import { findLearnerCohort } from "./cohorts";
@@ -9,7 +9,6 @@ import {
   labAttempts,
   schools,
   users,
-  verificationBuckets,
   type Certificate,
   type CertificateScoreSummary,
   type Role,
@@ -174,31 +173,4 @@ export async function revokeCertificateInSchool(params: {
     )
     .returning();
   return row;
-}
-
-/**
- * Takes one token from the address's bucket in a single statement, refilling it first for the time
- * since its last use; true when there was a token to take. A refused look-up costs a token too (down
- * to a floor of one owed), so hammering the page keeps it refused. A new bucket starts full; when one
- * is created, buckets idle long enough to be full again are deleted.
- */
-export async function takeVerificationToken(params: {
-  clientAddress: string;
-  capacity: number;
-  refillPerSecond: number;
-}): Promise<boolean> {
-  const { capacity, refillPerSecond } = params;
-  const refilled = sql`least(${capacity}::float8, ${verificationBuckets.tokens} + extract(epoch from (now() - ${verificationBuckets.updatedAt})) * ${refillPerSecond}::float8)`;
-  const result = await db.execute<{ allowed: boolean; created: boolean }>(sql`
-    insert into ${verificationBuckets} (client_address, tokens, updated_at)
-    values (${params.clientAddress}, ${capacity - 1}::float8, now())
-    on conflict (client_address) do update set tokens = greatest(${refilled} - 1, -1), updated_at = now()
-    returning tokens >= 0 as allowed, (xmax = 0) as created`);
-  const row = result.rows[0]!;
-  if (row.created) {
-    await db
-      .delete(verificationBuckets)
-      .where(lt(verificationBuckets.updatedAt, sql`now() - make_interval(secs => ${capacity / refillPerSecond}::float8)`));
-  }
-  return row.allowed;
 }

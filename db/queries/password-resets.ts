@@ -1,17 +1,9 @@
-import { and, count, eq, gt, isNull } from "drizzle-orm";
+import { and, eq, isNull } from "drizzle-orm";
 import { db } from "../client";
 import { passwordResets, users, type PasswordReset, type Role } from "../schema";
 
 export async function createPasswordReset(params: { userId: string; tokenHash: string; expiresAt: Date }): Promise<void> {
   await db.insert(passwordResets).values(params);
-}
-
-export async function countPasswordResetsSince(params: { userId: string; since: Date }): Promise<number> {
-  const [row] = await db
-    .select({ value: count() })
-    .from(passwordResets)
-    .where(and(eq(passwordResets.userId, params.userId), gt(passwordResets.createdAt, params.since)));
-  return row?.value ?? 0;
 }
 
 export async function findPasswordResetByTokenHash(params: { tokenHash: string }): Promise<PasswordReset | undefined> {

@@ -1,5 +1,5 @@
 import { relations, sql } from "drizzle-orm";
-import { check, doublePrecision, index, jsonb, pgTable, primaryKey, text, timestamp, unique, uuid } from "drizzle-orm/pg-core";
+import { check, index, jsonb, pgTable, text, timestamp, unique, uuid } from "drizzle-orm/pg-core";
 import { cohorts } from "./cohorts";
 import { courses } from "./course";
 import { schools } from "./schools";
@@ -47,20 +47,6 @@ export const certificates = pgTable(
     index("certificates_school_issued_idx").on(table.schoolId, table.issuedAt),
     check("certificates_revocation_complete", sql`(${table.revokedAt} is null) = (${table.revokeReason} is null)`),
   ],
-);
-
-/**
- * Token buckets for the public verification page, one per client address. Kept in PostgreSQL so the
- * limit holds across app server replicas; a bucket untouched long enough to be full again is deleted.
- */
-export const verificationBuckets = pgTable(
-  "verification_buckets",
-  {
-    clientAddress: text("client_address").notNull(),
-    tokens: doublePrecision("tokens").notNull(),
-    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
-  },
-  (table) => [primaryKey({ columns: [table.clientAddress] }), index("verification_buckets_updated_idx").on(table.updatedAt)],
 );
 
 export const certificatesRelations = relations(certificates, ({ one }) => ({

@@ -4,7 +4,7 @@ export * from "./sessions";
 export * from "./cohorts";
 export * from "./invitations";
 export * from "./password-resets";
-export * from "./sign-in-attempts";
+export * from "./rate-limits";
 export * from "./course";
 export * from "./bench";
 export * from "./certificates";

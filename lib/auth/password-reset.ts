@@ -1,6 +1,5 @@
 import {
   completePasswordReset as completePasswordResetRecord,
-  countPasswordResetsSince,
   createPasswordReset,
   describePasswordResetState,
   findPasswordResetByTokenHash,
@@ -10,24 +9,30 @@ import { findUserByEmail } from "@/db/queries/users";
 import type { Role } from "@/db/schema";
 import { readAppEnv } from "@/lib/env";
 import { sendPasswordResetEmail } from "@/lib/mail/send";
+import { spendRateLimits, type LimitDecision } from "@/lib/rate-limit/rate-limiter";
 import { hashPassword } from "./password";
 import { createSession, invalidateUserSessions, type SessionCookie } from "./session-store";
 import { generateToken, hashToken } from "./tokens";
 
 export const passwordResetLifetimeMinutes = 60;
-// Caps how many reset e-mails one account can be sent, so the form cannot be used to flood an inbox.
-export const passwordResetsPerHour = 3;
+
+/**
+ * Counts a reset request against the limits per e-mail (so the form cannot flood an inbox) and
+ * per client address (lib/rate-limit/limits.ts), before anything is looked up: the answer is the
+ * same whether or not the e-mail has an account.
+ */
+export async function admitPasswordResetRequest(params: { email: string; clientAddress: string }): Promise<LimitDecision> {
+  return spendRateLimits("password-reset", { person: params.email, address: params.clientAddress });
+}
 
 /**
  * Sends a reset link when the address belongs to an active account and quietly does nothing
- * otherwise; the caller answers the same either way.
+ * otherwise; the caller answers the same either way. Admit the request first.
  */
 export async function requestPasswordReset(params: { email: string; now?: Date }): Promise<void> {
   const now = params.now ?? new Date();
   const user = await findUserByEmail({ email: params.email });
   if (!user?.active) return;
-  const recent = await countPasswordResetsSince({ userId: user.id, since: new Date(now.getTime() - 60 * 60_000) });
-  if (recent >= passwordResetsPerHour) return;
 
   const token = generateToken();
   const expiresAt = new Date(now.getTime() + passwordResetLifetimeMinutes * 60_000);

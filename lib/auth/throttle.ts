@@ -1,60 +1,20 @@
-import {
-  deleteSignInAttemptsBefore,
-  listRecentSignInFailuresByAddress,
-  listRecentSignInFailuresByEmail,
-  recordSignInAttempt,
-} from "@/db/queries/sign-in-attempts";
+import "server-only";
+import { clearRateLimit, refundRateLimit, spendRateLimits, type LimitDecision } from "@/lib/rate-limit/rate-limiter";
 
-// A classroom often shares one public address, so the per-address limit is far looser than the
-// per-account one: it stops a sweep across many accounts, not a class having a bad morning.
-export const signInLimits = {
-  windowMinutes: 15,
-  failuresPerAccount: 5,
-  failuresPerAddress: 50,
-} as const;
+// Failed sign-ins are limited per account (the e-mail as typed, whether or not it has an account)
+// and per client address (lib/rate-limit/limits.ts). The failure is counted before the password
+// is checked: each attempt first takes a slot in one atomic statement per counter, and only an
+// attempt holding a slot is checked. So however many attempts arrive at once, no more passwords
+// are checked than the limit; the slot is given back when the password turns out right.
 
-const windowMs = signInLimits.windowMinutes * 60_000;
-const attemptRetentionMs = 24 * 60 * 60_000;
+export async function reserveSignInAttempt(params: { email: string; clientAddress: string }): Promise<LimitDecision> {
+  return spendRateLimits("sign-in-failure", { person: params.email, address: params.clientAddress });
+}
 
-export type ThrottleDecision = { allowed: true } | { allowed: false; retryAfterMinutes: number };
-
-export async function checkSignInThrottle(params: {
-  email: string;
-  clientAddress: string;
-  now: Date;
-}): Promise<ThrottleDecision> {
-  const since = new Date(params.now.getTime() - windowMs);
-  const [byEmail, byAddress] = await Promise.all([
-    listRecentSignInFailuresByEmail({ email: params.email, since, limit: signInLimits.failuresPerAccount }),
-    listRecentSignInFailuresByAddress({
-      clientAddress: params.clientAddress,
-      since,
-      limit: signInLimits.failuresPerAddress,
-    }),
+/** A right password: the account starts counting afresh and the address gets its slot back. */
+export async function settleSuccessfulSignIn(params: { email: string; clientAddress: string }): Promise<void> {
+  await Promise.all([
+    clearRateLimit("sign-in-failure", "person", params.email),
+    refundRateLimit("sign-in-failure", "address", params.clientAddress),
   ]);
-  const unlockTimes = [
-    unlockTime(byEmail, signInLimits.failuresPerAccount),
-    unlockTime(byAddress, signInLimits.failuresPerAddress),
-  ].filter((time): time is number => time !== null);
-  if (unlockTimes.length === 0) return { allowed: true };
-  const waitMs = Math.max(...unlockTimes) - params.now.getTime();
-  return { allowed: false, retryAfterMinutes: Math.max(1, Math.ceil(waitMs / 60_000)) };
-}
-
-/** With the limit reached, the lock lifts when the oldest of the counted failures leaves the window. */
-function unlockTime(newestFirst: Date[], limit: number): number | null {
-  if (newestFirst.length < limit) return null;
-  return newestFirst[limit - 1]!.getTime() + windowMs;
-}
-
-export async function noteSignInAttempt(params: {
-  email: string;
-  clientAddress: string;
-  succeeded: boolean;
-  now: Date;
-}): Promise<void> {
-  await recordSignInAttempt({ email: params.email, clientAddress: params.clientAddress, succeeded: params.succeeded });
-  if (params.succeeded) {
-    await deleteSignInAttemptsBefore({ before: new Date(params.now.getTime() - attemptRetentionMs) });
-  }
 }

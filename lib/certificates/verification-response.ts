@@ -1,20 +1,17 @@
 import "server-only";
 import { NextResponse } from "next/server";
+import { clientAddressOf } from "@/lib/client-address/client-address";
+import { describeWait, RateLimitedError } from "@/lib/http/errors";
+import { errorResponse } from "@/lib/http/respond";
 import { formatCertificateCode } from "./code";
 import { verifyCertificate } from "./verification";
-
-/** The first X-Forwarded-For hop behind a load balancer, as for sign-in throttling. */
-function clientAddressOf(request: Request): string {
-  const forwarded = request.headers.get("x-forwarded-for")?.split(",")[0]?.trim();
-  return forwarded || request.headers.get("x-real-ip")?.trim() || "unknown";
-}
 
 /**
  * The public check for programs: the same answer as the page, with the status a program expects
  * (200 valid or revoked, 404 unknown or malformed, 429 over the limit).
  */
 export async function answerVerificationRequest(params: { request: Request; code: string }): Promise<Response> {
-  const result = await verifyCertificate({ code: params.code, clientAddress: clientAddressOf(params.request) });
+  const result = await verifyCertificate({ code: params.code, clientAddress: clientAddressOf(params.request.headers) });
   const headers = { "cache-control": "no-store" };
   switch (result.status) {
     case "valid":
@@ -40,11 +37,12 @@ export async function answerVerificationRequest(params: { request: Request; code
         },
         { headers },
       );
-    case "rate-limited":
-      return NextResponse.json(
-        { error: { code: "rate-limited", message: "Too many checks from your network. Wait a minute, then try again." } },
-        { status: 429, headers: { ...headers, "retry-after": "60" } },
-      );
+    case "rate-limited": {
+      const wait = describeWait(result.retryAfterSeconds);
+      const refusal = errorResponse(new RateLimitedError(result.retryAfterSeconds, `Too many checks from your network. Wait ${wait}, then try again.`));
+      refusal.headers.set("cache-control", "no-store");
+      return refusal;
+    }
     case "not-found":
       return NextResponse.json({ error: { code: "not-found", message: "No certificate has this code." } }, { status: 404, headers });
   }

@@ -28,6 +28,24 @@ export class AppError extends Error {
   }
 }
 
+/** Over a rate limit: answered 429 with Retry-After, and a message that says how long to wait. */
+export class RateLimitedError extends AppError {
+  override name = "RateLimitedError";
+  constructor(
+    readonly retryAfterSeconds: number,
+    message = `Too many requests. Try again in ${describeWait(retryAfterSeconds)}.`,
+  ) {
+    super("rate-limited", message);
+  }
+}
+
+/** "40 seconds", "1 minute", "15 minutes": a wait as a person reads it, rounded up. */
+export function describeWait(seconds: number): string {
+  if (seconds < 60) return `${seconds} second${seconds === 1 ? "" : "s"}`;
+  const minutes = Math.ceil(seconds / 60);
+  return `${minutes} minute${minutes === 1 ? "" : "s"}`;
+}
+
 export type ErrorBody = { error: { code: ErrorCode; message: string; fieldErrors?: Record<string, string[]> } };
 
 // Connection refused, database missing or shutting down, too many clients, connection lost, a
@@ -55,11 +73,15 @@ export function isServiceOutage(error: unknown): boolean {
   return false;
 }
 
+export type DescribedError = { status: number; body: ErrorBody; headers?: Record<string, string> };
+
 /** Maps any thrown value to a status and a safe body; logs what the client must not see. */
-export function describeError(error: unknown): { status: number; body: ErrorBody } {
+export function describeError(error: unknown): DescribedError {
   if (error instanceof AppError) {
     const { status } = errorCatalogue[error.code];
-    return { status, body: { error: { code: error.code, message: error.message, fieldErrors: error.fieldErrors } } };
+    const body: ErrorBody = { error: { code: error.code, message: error.message, fieldErrors: error.fieldErrors } };
+    if (error instanceof RateLimitedError) return { status, body, headers: { "retry-after": String(error.retryAfterSeconds) } };
+    return { status, body };
   }
   if (error instanceof z.ZodError) {
     const { fieldErrors } = z.flattenError(error);

@@ -2,8 +2,8 @@ import { NextResponse } from "next/server";
 import { describeError } from "./errors";
 
 export function errorResponse(error: unknown): NextResponse {
-  const { status, body } = describeError(error);
-  return NextResponse.json(body, { status });
+  const { status, body, headers } = describeError(error);
+  return NextResponse.json(body, { status, headers });
 }
 
 /** Runs a route handler's work and answers whatever it throws (a database outage, say) as a JSON error. */

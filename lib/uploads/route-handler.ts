@@ -4,6 +4,8 @@ import { createRouteHandler } from "uploadthing/next";
 import type { RouteHandlerConfig } from "uploadthing/types";
 import { AppError } from "@/lib/http/errors";
 import { errorResponse } from "@/lib/http/respond";
+import { limitRequest } from "@/lib/rate-limit/limit-request";
+import { findViewerOfRequest } from "./request-viewer";
 import { uploadRouter } from "./upload-router";
 
 // Far deeper than anything the upload client or the service sends; deeper bodies are refused
@@ -19,12 +21,29 @@ export function createUploadRouteHandler(config: RouteHandlerConfig = {}) {
   return {
     GET: handlers.GET,
     POST: async (request: NextRequest) => {
+      const refusal = await refuseUploadOverLimit(request);
+      if (refusal) return refusal;
       const body = await request.text();
       const problem = describeBodyProblem(body);
       if (problem) return errorResponse(new AppError("bad-request", problem));
       return handlers.POST(new NextRequest(request, { body }));
     },
   };
+}
+
+/**
+ * Counts a browser's upload request against the upload limits of its user and address, before its
+ * body is read. The upload service's completion callbacks are not counted: they come from the
+ * service's few addresses on behalf of every user, and carry a signature the library checks.
+ */
+async function refuseUploadOverLimit(request: NextRequest): Promise<Response | null> {
+  if (request.headers.has("uploadthing-hook")) return null;
+  try {
+    await limitRequest(request, "upload", (await findViewerOfRequest(request))?.id);
+    return null;
+  } catch (error) {
+    return errorResponse(error);
+  }
 }
 
 function describeBodyProblem(body: string): string | null {

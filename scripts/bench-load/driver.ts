@@ -97,9 +97,10 @@ function connectionRequests(learners: BenchLearner[], recorder: PhaseRecorder, c
       const state = states[turn++ % states.length];
       const submits = mode === "submits" || (mode === "mix" && state.turns++ % 2 === 0);
       inFlight = submits ? nextSubmission(state) : { learnerState: state, kind: "page" };
-      const { cookie, labSlug } = state.learner;
-      if (inFlight.body === undefined) return { ...base, method: "GET", path: `/labs/${labSlug}`, headers: { cookie } };
-      return { ...base, method: "POST", path: `/api/labs/${labSlug}/attempts`, headers: { cookie, "content-type": "application/json" }, body: inFlight.body };
+      const { cookie, address, labSlug } = state.learner;
+      const headers = { cookie, "x-forwarded-for": address };
+      if (inFlight.body === undefined) return { ...base, method: "GET", path: `/labs/${labSlug}`, headers };
+      return { ...base, method: "POST", path: `/api/labs/${labSlug}/attempts`, headers: { ...headers, "content-type": "application/json" }, body: inFlight.body };
     },
     onResponse(status, body) {
       const sent = inFlight!;
@@ -175,7 +176,7 @@ async function settleUnanswered(baseUrl: string, recorder: PhaseRecorder): Promi
   for (const { learner, body } of recorder.unanswered) {
     const response = await fetch(`${baseUrl}/api/labs/${learner.labSlug}/attempts`, {
       method: "POST",
-      headers: { cookie: learner.cookie, "content-type": "application/json" },
+      headers: { cookie: learner.cookie, "x-forwarded-for": learner.address, "content-type": "application/json" },
       body,
     });
     await response.arrayBuffer();

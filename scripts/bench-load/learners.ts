@@ -6,9 +6,7 @@
  * Needs process.env to hold the instance's environment before it is imported.
  */
 import { and, eq, inArray, like } from "drizzle-orm";
-import type { Pool } from "pg";
 import { db } from "@/db/client";
-import type { Database } from "@/db/connection";
 import { demoCohorts, demoSchool } from "@/db/demo-data";
 import { markLessonsCompleted } from "@/db/queries/progress";
 import { cohortMemberships, cohorts, labAttempts, schools, users } from "@/db/schema";
@@ -52,21 +50,22 @@ export async function createBenchLearners(count: number): Promise<BenchLearner[]
     created.map(async (user, i): Promise<BenchLearner> => {
       await markLessonsCompleted({ userId: user.id, completions });
       const cookie = await createSession(user.id);
-      return { userId: user.id, cookie: `${cookie.name}=${cookie.value}`, ...labWork(labs[i % labs.length]) };
+      // Each learner in a /64 of its own in the IPv6 documentation range (RFC 3849): a header value only.
+      const address = `2001:db8:${(i + 1).toString(16)}::1`;
+      return { userId: user.id, cookie: `${cookie.name}=${cookie.value}`, address, ...labWork(labs[i % labs.length]) };
     }),
   );
 }
 
 /** The lab's own reference solution and its first catalogued mistake (valid for every learner's variant), and right answers. */
-function labWork(lab: Lab): Omit<BenchLearner, "cookie" | "userId"> {
+function labWork(lab: Lab): Omit<BenchLearner, "cookie" | "userId" | "address"> {
   const answers = Object.fromEntries(lab.questions.map((q) => [q.id, formatInUnit(q.answer.value, q.answer.unit)]));
   return { labSlug: lab.slug, passing: lab.reference.solution, failing: lab.reference.mistakes[0].choices, answers };
 }
 
 /** Lets the instance's database stop without this process's idle connections erroring. */
 export async function closeBenchDatabase(): Promise<void> {
-  // db/client keeps its pool to itself; its proxy still hands out drizzle's own $client, the pg Pool.
-  await (db as Database & { $client: Pool }).$client.end();
+  await db.$client.end();
 }
 
 /** Attempts stored for the bench learners, all labs together. */

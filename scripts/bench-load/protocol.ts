@@ -1,8 +1,12 @@
 // What the load benchmark's orchestrator (scripts/bench-load.ts) and its traffic driver
 // (driver.ts, a child process) say to each other.
 
-/** A bench learner with a session, the lab they work on, choices that pass and fail it, and the answers to its questions. */
-export type BenchLearner = { userId: string; cookie: string; labSlug: string; passing: unknown; failing: unknown; answers: Record<string, string> };
+/**
+ * A bench learner with a session, the lab they work on, choices that pass and fail it, the answers
+ * to its questions, and the address they connect from, as the load balancer in front of the
+ * instance reports it (X-Forwarded-For), so the rate limits count each learner's own address.
+ */
+export type BenchLearner = { userId: string; cookie: string; address: string; labSlug: string; passing: unknown; failing: unknown; answers: Record<string, string> };
 
 export type RequestKind = "submit" | "retry" | "page";
 

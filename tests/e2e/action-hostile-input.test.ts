@@ -7,7 +7,7 @@
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { uniqueAddress } from "../integration/support/people";
+import { uniqueLoopbackAddress } from "../support/loopback-client";
 import { expectNoInternals, hostileText, hugeLength, pollutingKey } from "../support/hostile-input";
 import { actionForms, planActionCall, type ActionForm, type FieldValue } from "./support/action-forms";
 import { setUpAccessWorld, type AccessWorld } from "./support/access-world";
@@ -120,7 +120,7 @@ describe("hostile input on every server action", () => {
         fc.asyncProperty(attack, async (attackPlan) => {
           const { spoiled, ...call } = await hostileCall(form, attackPlan);
           const before = await readDatabaseState(form.bookkeeping);
-          const reply = await callAction({ ...call, actionId, headers: { "x-forwarded-for": uniqueAddress() } });
+          const reply = await callAction({ ...call, actionId, from: uniqueLoopbackAddress() });
           expectClearRefusal(reply, `${key} with ${spoiled} spoiled`);
           expect(changedTables(before, await readDatabaseState(form.bookkeeping)), `${key} with ${spoiled} spoiled`).toEqual([]);
         }),

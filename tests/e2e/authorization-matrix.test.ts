@@ -9,7 +9,7 @@ import { randomUUID } from "node:crypto";
 import { describe, expect, it } from "vitest";
 import { homePathFor } from "@/lib/auth/permissions";
 import { protectedRoutes } from "@/lib/auth/route-access";
-import { uniqueAddress } from "../integration/support/people";
+import { uniqueLoopbackAddress } from "../support/loopback-client";
 import { actionForms, planActionCall } from "./support/action-forms";
 import { benchExercise, cookieOf, gradedLab, personas, setUpAccessWorld, type AccessWorld, type Persona } from "./support/access-world";
 import { builtActionId, discoverPages, discoverRouteHandlers, discoverServerActions, readBuiltActions } from "./support/app-surface";
@@ -224,7 +224,7 @@ describe("the authorization matrix", () => {
         const plan = await planActionCall(form, world, persona, cookieOf(world, persona));
         const before = await readDatabaseState();
         // Each call from its own client address, so the matrix's sign-ins never trip the sign-in throttle.
-        const reply = await callAction({ ...plan, actionId: builtActionId(key), headers: { "x-forwarded-for": uniqueAddress() } });
+        const reply = await callAction({ ...plan, actionId: builtActionId(key), from: uniqueLoopbackAddress() });
         const outcome = actionOutcome(reply);
         const changed = changedTables(before, await readDatabaseState());
         const wroteOnRefusal = outcome !== "accepted" && changed.length > 0 ? ` but wrote to ${changed.join(", ")}` : "";

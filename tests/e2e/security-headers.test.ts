@@ -5,9 +5,6 @@
  * an upload to the upload service, server-action forms), and inline scripts carry the nonce. HSTS
  * is sent only by a production server whose APP_URL is https.
  */
-import { spawn } from "node:child_process";
-import { once } from "node:events";
-import { createServer, type AddressInfo } from "node:net";
 import type { Browser, BrowserContext, Page, Response } from "playwright-core";
 import { PNG } from "pngjs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -16,6 +13,7 @@ import { cohortMemberships } from "@/db/schema";
 import { findDemoCohortId } from "../integration/support/people";
 import { launchBrowser, openPage, signInAs, signInThroughForm } from "./support/browser";
 import { createLearnerAtLab } from "./support/learner-at-lab";
+import { startProductionServer } from "./support/second-server";
 
 const LAB = "lone-lead-termination";
 const password = "headers on every page";
@@ -209,41 +207,11 @@ describe("security headers and the Content-Security-Policy", () => {
   });
 });
 
-async function freePort(): Promise<number> {
-  const server = createServer().listen(0, "127.0.0.1");
-  await once(server, "listening");
-  const { port } = server.address() as AddressInfo;
-  await new Promise((resolve) => server.close(resolve));
-  return port;
-}
-
-/** A second `next start` of the same build, under an APP_URL of its own; stopped by the caller. */
-async function startProductionServer(appUrl: string): Promise<{ origin: string; stop: () => Promise<void> }> {
-  const port = await freePort();
-  const child = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(port)], {
-    env: { ...process.env, NODE_ENV: "production", APP_URL: appUrl },
-    stdio: "ignore",
-  });
-  const exited = once(child, "exit");
-  const origin = `http://127.0.0.1:${port}`;
-  const stop = async () => {
-    if (child.exitCode === null) child.kill("SIGTERM");
-    await exited;
-  };
-  for (const deadline = Date.now() + 60_000; Date.now() < deadline; await new Promise((r) => setTimeout(r, 250))) {
-    if (child.exitCode !== null) throw new Error(`next start exited with ${child.exitCode}`);
-    const ready = await fetch(`${origin}/sign-in`, { redirect: "manual" }).then(() => true, () => false);
-    if (ready) return { origin, stop };
-  }
-  await stop();
-  throw new Error("next start did not answer within 60 s");
-}
-
 describe("Strict-Transport-Security", () => {
   // The TLS-terminating proxy in front of a real deployment is not run here: the server decides
   // from APP_URL, so one started with an https APP_URL answers as it would behind that proxy.
   it("is sent on every page by the production server when APP_URL is https, for two years with subdomains", async () => {
-    const server = await startProductionServer("https://edgewise.example");
+    const server = await startProductionServer({ APP_URL: "https://edgewise.example" });
     try {
       for (const path of ["/", "/sign-in", "/verify", "/learn"]) {
         const response = await fetch(`${server.origin}${path}`, { redirect: "manual" });

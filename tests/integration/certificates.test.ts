@@ -5,18 +5,18 @@
  * the school's admin only; and the PDF download read back, QR code included.
  */
 import { randomBytes } from "node:crypto";
-import { and, eq } from "drizzle-orm";
+import { and, eq, like } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { GET as getCertificatePdf } from "@/app/api/certificates/[certificateId]/pdf/route";
 import { GET as getVerification } from "@/app/api/certificates/verify/[code]/route";
 import { db } from "@/db/client";
-import { certificates, verificationBuckets } from "@/db/schema";
+import { certificates, rateLimits } from "@/db/schema";
 import { getCourse } from "@/lessons";
 import { createSession } from "@/lib/auth/session-store";
 import { encodeCertificateCode, formatCertificateCode } from "@/lib/certificates/code";
 import { issueCertificateIfComplete } from "@/lib/certificates/issue";
 import { revokeCertificate } from "@/lib/certificates/revoke";
-import { verificationLimits, verifyCertificate } from "@/lib/certificates/verification";
+import { verifyCertificate } from "@/lib/certificates/verification";
 import { readAppEnv } from "@/lib/env";
 import { findLinks } from "@/lib/mail/sink";
 import { validateSessionToken, type SessionUser } from "@/lib/auth/session-store";
@@ -31,9 +31,11 @@ import {
   type CourseResults,
 } from "./certificate-fixtures";
 import { countMessagesTo, waitForMessage } from "./support/mail-sink";
-import { uniqueAddress } from "./support/people";
+import { ruleOf } from "@/lib/rate-limit/limits";
+import { fromAddress, uniqueAddress } from "./support/people";
 
 const course = getCourse();
+const lookupLimit = ruleOf("certificate-lookup", "address");
 let cohort: { id: string; name: string };
 let instructor: { id: string };
 
@@ -185,33 +187,33 @@ describe("the public check", () => {
     for (const code of ["", "hello", "7K2M-QX9P-4TDW-8HB", "7K2M-QX9P-4TDW-8HBU", "'; drop table certificates; --", "%00".repeat(20)]) {
       expect(await verifyCertificate({ code, clientAddress: address })).toEqual({ status: "not-found" });
     }
-    // No bucket was even created for the address: the malformed codes never reached the database.
-    expect(await db.$count(verificationBuckets, eq(verificationBuckets.clientAddress, address))).toBe(0);
+    // No count was even started for the address: the malformed codes never reached the database.
+    expect(await db.$count(rateLimits, like(rateLimits.key, `%${address}`))).toBe(0);
   });
 
   it("limits look-ups per client address and leaves other addresses alone", async () => {
     const { certificate } = await graduate();
     const address = uniqueAddress();
-    for (let i = 0; i < verificationLimits.burst; i++) {
+    for (let i = 0; i < lookupLimit.points; i++) {
       expect((await verifyCertificate({ code: certificate.code, clientAddress: address })).status, `look-up ${i + 1}`).toBe("valid");
     }
-    expect((await verifyCertificate({ code: certificate.code, clientAddress: address })).status).toBe("rate-limited");
+    const refused = await verifyCertificate({ code: certificate.code, clientAddress: address });
+    expect(refused.status).toBe("rate-limited");
+    if (refused.status !== "rate-limited") return;
+    expect(refused.retryAfterSeconds).toBeGreaterThan(lookupLimit.windowSeconds - 30);
+    expect(refused.retryAfterSeconds).toBeLessThanOrEqual(lookupLimit.windowSeconds);
     expect((await verifyCertificate({ code: encodeCertificateCode(randomBytes(10)), clientAddress: address })).status).toBe("rate-limited");
     expect((await verifyCertificate({ code: certificate.code, clientAddress: uniqueAddress() })).status).toBe("valid");
 
-    // Ten seconds of refill buys one more look-up (the bucket's clock is moved back, not waited for).
-    await db
-      .update(verificationBuckets)
-      .set({ updatedAt: new Date(Date.now() - 25_000) })
-      .where(eq(verificationBuckets.clientAddress, address));
+    // Once the window is over the address starts afresh (its end is moved forward, not waited for).
+    await db.update(rateLimits).set({ expire: Date.now() - 1 }).where(eq(rateLimits.key, `certificate-lookup:address:${address}`));
     expect((await verifyCertificate({ code: certificate.code, clientAddress: address })).status).toBe("valid");
-    expect((await verifyCertificate({ code: certificate.code, clientAddress: address })).status).toBe("rate-limited");
   });
 });
 
 describe("the public check for programs", () => {
   const ask = (code: string, address: string) =>
-    getVerification(new Request(`http://app.test/api/certificates/verify/${code}`, { headers: { "x-forwarded-for": `${address}, 10.0.0.1` } }), {
+    getVerification(new Request(`http://app.test/api/certificates/verify/${code}`, { headers: fromAddress(address) }), {
       params: Promise.resolve({ code }),
     });
 
@@ -230,10 +232,13 @@ describe("the public check for programs", () => {
     });
     expect((await ask(encodeCertificateCode(randomBytes(10)), address)).status).toBe(404);
     expect((await ask("not-a-code", address)).status).toBe(404);
-    for (let i = 2; i < verificationLimits.burst; i++) await ask(certificate.code, address);
+    for (let i = 2; i < lookupLimit.points; i++) await ask(certificate.code, address);
     const limited = await ask(certificate.code, address);
     expect(limited.status).toBe(429);
-    expect(limited.headers.get("retry-after")).toBe("60");
+    expect(Number(limited.headers.get("retry-after"))).toBeGreaterThan(lookupLimit.windowSeconds - 30);
+    expect(await limited.json()).toEqual({
+      error: { code: "rate-limited", message: expect.stringMatching(/^Too many checks from your network\. Wait \d+ minutes?, then try again\.$/) },
+    });
     expect((await ask(certificate.code, uniqueAddress())).status).toBe(200);
   });
 });

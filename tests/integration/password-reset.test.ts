@@ -2,7 +2,8 @@ import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { passwordResets } from "@/db/schema";
-import { checkPasswordResetToken, completePasswordReset, passwordResetsPerHour, requestPasswordReset } from "@/lib/auth/password-reset";
+import { admitPasswordResetRequest, checkPasswordResetToken, completePasswordReset, requestPasswordReset } from "@/lib/auth/password-reset";
+import { ruleOf } from "@/lib/rate-limit/limits";
 import { createSession, validateSessionToken } from "@/lib/auth/session-store";
 import { signInWithPassword } from "@/lib/auth/sign-in";
 import { hashToken } from "@/lib/auth/tokens";
@@ -96,14 +97,21 @@ describe("password reset", () => {
 
     await requestPasswordReset({ email: unknown });
     await requestPasswordReset({ email: inactive.email });
-    for (let i = 0; i < passwordResetsPerHour + 2; i += 1) await requestPasswordReset({ email: active.email });
+    const perEmail = ruleOf("password-reset", "person").points;
+    const admitted = [];
+    for (let i = 0; i < perEmail + 2; i += 1) {
+      const decision = await admitPasswordResetRequest({ email: active.email, clientAddress: uniqueAddress() });
+      admitted.push(decision.allowed);
+      if (decision.allowed) await requestPasswordReset({ email: active.email });
+    }
+    expect(admitted).toEqual([...Array<boolean>(perEmail).fill(true), false, false]);
 
     // Mail to the active account proves the sink has caught up with everything sent before it.
     await waitForMessage({ to: active.email });
     await new Promise((resolve) => setTimeout(resolve, 300));
     expect(await countMessagesTo(unknown)).toBe(0);
     expect(await countMessagesTo(inactive.email)).toBe(0);
-    expect(await countMessagesTo(active.email)).toBe(passwordResetsPerHour);
+    expect(await countMessagesTo(active.email)).toBe(perEmail);
   });
 
   it("refuses an unknown token", async () => {

@@ -3,8 +3,17 @@
 import { after } from "next/server";
 import { z } from "zod";
 import { emailSchema } from "@/lib/auth/fields";
-import { passwordResetLifetimeMinutes, requestPasswordReset } from "@/lib/auth/password-reset";
-import { formDataOrEmpty, invalidFormState, readFormValues, type FormState } from "@/lib/http/form-state";
+import { admitPasswordResetRequest, passwordResetLifetimeMinutes, requestPasswordReset } from "@/lib/auth/password-reset";
+import { readClientAddress } from "@/lib/client-address/client-address";
+import { describeWait } from "@/lib/http/errors";
+import {
+  failedFormState,
+  formDataOrEmpty,
+  invalidFormState,
+  readFormValues,
+  unexpectedFormState,
+  type FormState,
+} from "@/lib/http/form-state";
 
 export type RequestResetField = "email";
 export type RequestResetState = FormState<RequestResetField>;
@@ -19,6 +28,16 @@ export async function requestPasswordResetAction(
   const values = readFormValues(formData, ["email"] as const);
   const parsed = requestSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) return invalidFormState(parsed.error, values);
+
+  let admitted: Awaited<ReturnType<typeof admitPasswordResetRequest>>;
+  try {
+    admitted = await admitPasswordResetRequest({ email: parsed.data.email, clientAddress: await readClientAddress() });
+  } catch (error) {
+    return unexpectedFormState(error, values);
+  }
+  if (!admitted.allowed) {
+    return failedFormState(`Too many reset requests. Try again in ${describeWait(admitted.retryAfterSeconds)}.`, values);
+  }
 
   // The lookup and the e-mail happen after the response, so the answer comes back equally fast
   // whether or not the address has an account.

@@ -3,11 +3,12 @@
 import { redirect } from "next/navigation";
 import { z } from "zod";
 import { safeReturnPath } from "@/lib/auth/access";
-import { readClientAddress } from "@/lib/auth/client-address";
 import { emailSchema } from "@/lib/auth/fields";
 import { homePathFor } from "@/lib/auth/permissions";
 import { replaceSessionCookie } from "@/lib/auth/session-cookie";
 import { signInWithPassword, type SignInResult } from "@/lib/auth/sign-in";
+import { readClientAddress } from "@/lib/client-address/client-address";
+import { describeWait } from "@/lib/http/errors";
 import {
   failedFormState,
   formDataOrEmpty,
@@ -43,8 +44,7 @@ export async function signIn(_previous: SignInState, formData: FormData): Promis
     return unexpectedFormState(error, values);
   }
   if (!result.ok && result.reason === "throttled") {
-    const minutes = result.retryAfterMinutes;
-    return failedFormState(`Too many attempts. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`, values);
+    return failedFormState(`Too many attempts. Try again in ${describeWait(result.retryAfterSeconds)}.`, values);
   }
   if (!result.ok) return failedFormState("That e-mail and password do not match an account. Check both and try again.", values);
 

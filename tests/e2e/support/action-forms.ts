@@ -98,7 +98,7 @@ export const actionForms: Record<string, ActionForm> = {
     fields: async (world) => ({ email: (await world.createLearner()).email, password: personPassword }),
     guarded: ["email", "password"],
     session: throwawaySession,
-    bookkeeping: ["sign_in_attempts"],
+    bookkeeping: ["rate_limits"],
   },
   "app/(auth)/sign-out/actions.ts#signOut": {
     allowed: "learnerA",

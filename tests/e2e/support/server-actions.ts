@@ -1,4 +1,5 @@
 import { createRequire } from "node:module";
+import { fetchFrom } from "../../support/loopback-client";
 import { baseUrl } from "./browser";
 
 // Calls server actions over HTTP the way the app's own browser code does: a POST to a page with
@@ -20,6 +21,8 @@ export type ActionCall = {
   /** Defaults to the app's own origin, as a browser sends on a same-origin POST. */
   origin?: string;
   headers?: Record<string, string>;
+  /** The loopback address to connect from (uniqueLoopbackAddress), so the call has a client address of its own. */
+  from?: string;
 };
 
 export type ActionReply = {
@@ -35,7 +38,8 @@ export type ActionReply = {
 
 export async function callAction(call: ActionCall): Promise<ActionReply> {
   const body = await encodeReply(call.args);
-  const response = await fetch(`${baseUrl}${call.path}`, {
+  const send = call.from ? fetchFrom.bind(null, call.from) : fetch;
+  const response = await send(`${baseUrl}${call.path}`, {
     method: "POST",
     redirect: "manual",
     headers: {

@@ -4,6 +4,7 @@ import { db } from "@/db/client";
 import { demoAdmin, demoCohorts, demoSchool } from "@/db/demo-data";
 import { cohorts, schools, users, type Role } from "@/db/schema";
 import { hashPassword } from "@/lib/auth/password";
+import { peerHeader, peerStamp } from "@/lib/client-address/peer-address";
 
 // Rows for integration tests, made in the seeded demo school with addresses no other test uses.
 
@@ -11,10 +12,18 @@ export function uniqueEmail(label: string): string {
   return `${label}.${randomUUID().slice(0, 8)}@integration.example`;
 }
 
-/** A client address from the IPv6 documentation range (RFC 3849), different for every call. */
+/**
+ * A client address from the IPv6 documentation range (RFC 3849), in a /64 network of its own for
+ * every call, since IPv6 clients are limited by their /64 (lib/client-address).
+ */
 export function uniqueAddress(): string {
   const hex = randomUUID().replaceAll("-", "");
-  return `2001:db8::${hex.slice(0, 4)}:${hex.slice(4, 8)}:${hex.slice(8, 12)}`;
+  return `2001:db8:${hex.slice(0, 4)}:${hex.slice(4, 8)}::${hex.slice(8, 12)}`;
+}
+
+/** Headers of a request that came over a connection from `address`, as the server stamps them. */
+export function fromAddress(address: string, headers: Record<string, string> = {}): Record<string, string> {
+  return { ...headers, [peerHeader]: peerStamp(address) };
 }
 
 export async function findDemoSchoolId(): Promise<string> {

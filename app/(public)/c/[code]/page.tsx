@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { VerificationResult } from "@/components/certificate/verification-result";
 import { AppFrame } from "@/components/shell/app-frame";
-import { readClientAddress } from "@/lib/auth/client-address";
+import { readClientAddress } from "@/lib/client-address/client-address";
 import { getCurrentUser } from "@/lib/auth/current-user";
 import { verifyCertificate } from "@/lib/certificates/verification";
 

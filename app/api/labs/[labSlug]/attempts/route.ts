@@ -9,6 +9,7 @@ import { gradeWorkOffThread } from "@/lib/grading/grade-off-thread";
 import { invalidInput, issuesOf } from "@/lib/grading/input-error";
 import { AppError } from "@/lib/http/errors";
 import { errorResponse } from "@/lib/http/respond";
+import { limitRequest } from "@/lib/rate-limit/limit-request";
 import { findLab, requireLearner, requireOpenLab, withSession } from "../../learner-request";
 
 export const dynamic = "force-dynamic";
@@ -41,6 +42,7 @@ async function readJson(request: Request): Promise<unknown> {
 export async function POST(request: Request, context: Context): Promise<NextResponse> {
   try {
     const learner = await requireLearner(request);
+    await limitRequest(request, "grading", learner.user.id);
     const lab = findLab((await context.params).labSlug);
     await requireOpenLab(learner.user, lab);
     const body = submissionSchema.safeParse(await readJson(request));
