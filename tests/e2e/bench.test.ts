@@ -149,7 +149,7 @@ describe("a bench exercise from upload to feedback", () => {
       await page.waitForURL(/\/reviews\/[0-9a-f-]{36}$/);
       await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe(`${learnerName}: Build and measure a run of your design`);
       expect(await page.getByRole("cell", { name: "14 ns" }).isVisible()).toBe(true);
-      expect(await page.getByText(/^Verdict: /).isVisible()).toBe(true);
+      expect(await page.getByText(/^Simulator verdict: /).isVisible()).toBe(true);
       expect(await page.locator(".recharts-line").count()).toBe(2);
       await saveLoadedScreenshot(page, "bench-review-page-wide");
 
