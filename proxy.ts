@@ -1,10 +1,16 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { findActionBodyProblem } from "@/lib/http/action-body";
+import { formBodyLimitFor } from "@/lib/http/body-limits";
+import { readBodyWithin } from "@/lib/http/bounded-body";
+import { AppError } from "@/lib/http/errors";
+import { errorResponse } from "@/lib/http/respond";
 import { isDatabaseReachable } from "@/lib/outage/database-probe";
 import { unavailablePageResponse } from "@/lib/outage/unavailable-page";
 
-// Sets the per-request Content-Security-Policy (and HSTS) on every page, and refuses form posts
-// from other sites. The headers that never change per request (referrer, nosniff, framing,
-// permissions) are in next.config.ts so that static files carry them too.
+// Sets the per-request Content-Security-Policy (and HSTS) on every page, refuses form posts from
+// other sites, and reads every body posted to a page within that page's limit. The headers that
+// never change per request (referrer, nosniff, framing, permissions) are in next.config.ts so that
+// static files carry them too.
 
 const isProduction = process.env.NODE_ENV === "production";
 const servedOverHttps = process.env.APP_URL?.startsWith("https://") ?? false;
@@ -69,17 +75,30 @@ function isCrossSitePost(request: NextRequest): boolean {
   return !URL.canParse(origin) || new URL(origin).host !== host;
 }
 
-// Next's default limit on a server action's body (serverActions.bodySizeLimit, "1 MB" = 1024² bytes).
-const actionBodyLimitBytes = 1024 * 1024;
-
-/** Next refuses a larger action body with a 500; it is answered here with 413 before Next reads it. */
-function isOversizedPost(request: NextRequest): boolean {
-  if (request.method === "GET" || request.method === "HEAD") return false;
-  return Number(request.headers.get("content-length") ?? 0) > actionBodyLimitBytes;
+function isPrefetch(request: NextRequest): boolean {
+  return request.headers.has("next-router-prefetch") || request.headers.get("purpose") === "prefetch";
 }
 
-function refusal(status: number, message: string): NextResponse {
-  return new NextResponse(message, { status, headers: { "content-type": "text/plain; charset=utf-8", "cache-control": "no-store" } });
+/**
+ * A POST to a page is read here, within the page's limit, and checked the way Next will read it:
+ * Next answers a server action whose body is too large or malformed with a 500, and reads a body
+ * of any length when no length is declared. Refusals are the app's JSON errors (lib/http).
+ */
+async function refuseUnreadableBody(request: NextRequest): Promise<NextResponse | null> {
+  try {
+    const body = await readBodyWithin(request, formBodyLimitFor(request.nextUrl.pathname));
+    // Next reads only a POST as a server action.
+    const problem = request.method === "POST" ? await findActionBodyProblem(request.headers, body) : null;
+    return problem ? refusal(new AppError("bad-request", problem)) : null;
+  } catch (error) {
+    return refusal(error);
+  }
+}
+
+function refusal(error: unknown): NextResponse {
+  const response = errorResponse(error);
+  response.headers.set("cache-control", "no-store");
+  return withTransportSecurity(response);
 }
 
 function withTransportSecurity<T extends Response>(response: T): T {
@@ -90,11 +109,15 @@ function withTransportSecurity<T extends Response>(response: T): T {
 }
 
 export async function proxy(request: NextRequest) {
+  const readsNoBody = request.method === "GET" || request.method === "HEAD";
+  // Prefetches only ask for what a link leads to; the page they fetch gets its policy when it is opened.
+  if (readsNoBody && isPrefetch(request)) return NextResponse.next();
   if (isCrossSitePost(request)) {
-    return refusal(403, "This form was sent from another site, so it was not accepted. Open the page on this site and send it again.");
+    return refusal(new AppError("forbidden", "This form was sent from another site, so it was not accepted. Open the page on this site and send it again."));
   }
-  if (isOversizedPost(request)) {
-    return refusal(413, "This form is larger than 1 MB, so it was not accepted. Shorten what you typed or attach a smaller file.");
+  if (!readsNoBody) {
+    const refused = await refuseUnreadableBody(request);
+    if (refused) return refused;
   }
   // Pages read the session and their records from the database, and a page cannot set its status
   // once it has failed, so an outage is answered here. Server actions go on: their forms keep what
@@ -112,14 +135,8 @@ export async function proxy(request: NextRequest) {
 }
 
 export const config = {
-  matcher: [
-    {
-      // Pages only: route handlers answer JSON and files, and build assets never render scripts.
-      source: "/((?!api/|_next/static|_next/image|icon.svg|favicon.ico).*)",
-      missing: [
-        { type: "header", key: "next-router-prefetch" },
-        { type: "header", key: "purpose", value: "prefetch" },
-      ],
-    },
-  ],
+  // Pages only: route handlers answer JSON and files, and build assets never render scripts.
+  // Prefetches are let through inside, not left out here: a header must not take a POST past the
+  // body checks.
+  matcher: ["/((?!api/|_next/static|_next/image|icon.svg|favicon.ico).*)"],
 };

@@ -57,8 +57,11 @@ export function submitAttempt(labSlug: string, submission: Submission): Promise<
   return call(attemptsUrl(labSlug), { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(submission) });
 }
 
-export async function listAttempts(labSlug: string): Promise<AttemptView[]> {
-  return (await call<{ attempts: AttemptView[] }>(attemptsUrl(labSlug))).attempts;
+export type AttemptPage = { attempts: AttemptView[]; nextCursor: string | null };
+
+/** One page of the learner's attempts, newest first; `cursor` is the previous page's `nextCursor`. */
+export function listAttempts(labSlug: string, cursor: string | null): Promise<AttemptPage> {
+  return call(cursor === null ? attemptsUrl(labSlug) : `${attemptsUrl(labSlug)}?cursor=${encodeURIComponent(cursor)}`);
 }
 
 export function fetchAttempt(labSlug: string, attemptId: string): Promise<{ attempt: AttemptView; runs: StoredRun[] }> {

@@ -1,6 +1,6 @@
 "use client";
 
-import { QueryClient, QueryClientProvider, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { QueryClient, QueryClientProvider, useInfiniteQuery, useMutation, useQueryClient } from "@tanstack/react-query";
 import { useRef, useState } from "react";
 import type { LabChoices } from "@/lessons";
 import { buildSimInput } from "@/lessons/build-run";
@@ -51,7 +51,13 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
   const pendingKey = useRef<PendingKey | null>(null);
   const { dragging, startDrag } = useControlDrag();
 
-  const history = useQuery({ queryKey: historyKey, queryFn: () => listAttempts(labSlug) });
+  const history = useInfiniteQuery({
+    queryKey: historyKey,
+    queryFn: ({ pageParam }) => listAttempts(labSlug, pageParam),
+    initialPageParam: null as string | null,
+    getNextPageParam: (page) => page.nextCursor,
+  });
+  const attempts = history.data?.pages.flatMap((page) => page.attempts);
 
   const submit = useMutation({
     mutationFn: (submission: Submission) => submitAttempt(labSlug, submission),
@@ -97,7 +103,7 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
       : submit.error
         ? { message: submit.error.message, fieldErrors: {} }
         : null;
-  const nextAttempt = (history.data?.[0]?.attemptNumber ?? 0) + 1;
+  const nextAttempt = (attempts?.[0]?.attemptNumber ?? 0) + 1;
 
   return (
     <div className="space-y-6">
@@ -196,9 +202,18 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
         ) : null}
         <AttemptHistory
           runs={runs}
-          attempts={history.data}
+          attempts={attempts}
           loading={history.isPending}
-          error={history.error ? history.error.message : null}
+          error={history.isError && !attempts ? history.error.message : null}
+          olderAttempts={
+            history.hasNextPage
+              ? {
+                  loading: history.isFetchingNextPage,
+                  error: history.isFetchNextPageError ? history.error.message : null,
+                  load: () => void history.fetchNextPage(),
+                }
+              : null
+          }
           shownAttemptId={replay?.attempt.id ?? null}
           openingAttemptId={reopen.isPending ? (reopen.variables?.id ?? null) : null}
           onOpen={(attempt) => reopen.mutate(attempt)}

@@ -1,4 +1,4 @@
-import { and, desc, eq, max, sql } from "drizzle-orm";
+import { and, desc, eq, lt, max, sql } from "drizzle-orm";
 import { db } from "../client";
 import { labAttempts, type LabAttempt } from "../schema";
 
@@ -72,12 +72,28 @@ function sameLab(attempt: LabAttempt, labSlug: string): RecordedAttempt {
 }
 
 /** The learner's attempts at a lab, newest first. */
-export async function listLabAttemptsByLearner(params: { userId: string; labSlug: string }): Promise<LabAttempt[]> {
+/**
+ * Up to `limit` of the learner's attempts at the lab, newest first, numbered below `beforeNumber`
+ * when given (read along the user, lab and number unique index).
+ */
+export async function listLabAttemptsByLearner(params: {
+  userId: string;
+  labSlug: string;
+  limit: number;
+  beforeNumber?: number;
+}): Promise<LabAttempt[]> {
   return db
     .select()
     .from(labAttempts)
-    .where(and(eq(labAttempts.userId, params.userId), eq(labAttempts.labSlug, params.labSlug)))
-    .orderBy(desc(labAttempts.attemptNumber));
+    .where(
+      and(
+        eq(labAttempts.userId, params.userId),
+        eq(labAttempts.labSlug, params.labSlug),
+        params.beforeNumber === undefined ? undefined : lt(labAttempts.attemptNumber, params.beforeNumber),
+      ),
+    )
+    .orderBy(desc(labAttempts.attemptNumber))
+    .limit(params.limit);
 }
 
 /** One attempt, only when it is the learner's own attempt at that lab. */

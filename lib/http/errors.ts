@@ -9,6 +9,7 @@ export const errorCatalogue = {
   forbidden: { status: 403, message: "Your account does not have access to this." },
   "not-found": { status: 404, message: "We could not find that." },
   conflict: { status: 409, message: "That conflicts with something that already exists." },
+  "payload-too-large": { status: 413, message: "The request is larger than this address accepts, so it was not read." },
   "invalid-input": { status: 422, message: "Some of the values are not valid." },
   "rate-limited": { status: 429, message: "Too many attempts. Wait a little, then try again." },
   unavailable: { status: 503, message: "A service we depend on is not answering. Try again shortly." },
@@ -46,7 +47,38 @@ export function describeWait(seconds: number): string {
   return `${minutes} minute${minutes === 1 ? "" : "s"}`;
 }
 
-export type ErrorBody = { error: { code: ErrorCode; message: string; fieldErrors?: Record<string, string[]> } };
+export type ErrorBody = {
+  error: { code: ErrorCode; message: string; fieldErrors?: Record<string, string[]>; moreFieldErrors?: number };
+};
+
+// An error reply names a few bad fields, never all of them: a body with thousands of unknown keys
+// must not come back several times its own size.
+export const errorReplyLimits = { fields: 5, messagesPerField: 3, nameLength: 100, messageLength: 300 } as const;
+
+function clip(text: string, length: number): string {
+  return text.length > length ? `${text.slice(0, length - 1)}…` : text;
+}
+
+/** The first few fields with their first few messages, each clipped; the rest are counted. */
+function boundFieldErrors(fieldErrors: Record<string, string[]>): { fieldErrors: Record<string, string[]>; more: number } {
+  const { fields, messagesPerField, nameLength, messageLength } = errorReplyLimits;
+  const names = Object.keys(fieldErrors);
+  // No prototype: a field named "__proto__" in hostile input must stay a plain key.
+  const bounded: Record<string, string[]> = Object.create(null);
+  for (const name of names.slice(0, fields)) {
+    bounded[clip(name, nameLength)] = (fieldErrors[name] ?? []).slice(0, messagesPerField).map((message) => clip(message, messageLength));
+  }
+  return { fieldErrors: bounded, more: Math.max(0, names.length - fields) };
+}
+
+function describeAppError(error: AppError): ErrorBody {
+  const message = clip(error.message, errorReplyLimits.messageLength);
+  if (!error.fieldErrors) return { error: { code: error.code, message } };
+  const { fieldErrors, more } = boundFieldErrors(error.fieldErrors);
+  if (more === 0) return { error: { code: error.code, message, fieldErrors } };
+  const counted = `${message.replace(/\.$/, "")} (and ${more} more ${more === 1 ? "field" : "fields"}).`;
+  return { error: { code: error.code, message: counted, fieldErrors, moreFieldErrors: more } };
+}
 
 // Connection refused, database missing or shutting down, too many clients, connection lost, a
 // statement cancelled by its timeout.
@@ -79,7 +111,7 @@ export type DescribedError = { status: number; body: ErrorBody; headers?: Record
 export function describeError(error: unknown): DescribedError {
   if (error instanceof AppError) {
     const { status } = errorCatalogue[error.code];
-    const body: ErrorBody = { error: { code: error.code, message: error.message, fieldErrors: error.fieldErrors } };
+    const body = describeAppError(error);
     if (error instanceof RateLimitedError) return { status, body, headers: { "retry-after": String(error.retryAfterSeconds) } };
     return { status, body };
   }

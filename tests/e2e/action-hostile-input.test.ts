@@ -2,18 +2,22 @@
  * Hostile input for every server action, sent over HTTP as a persona allowed to use it: valid
  * calls with at least one field, bound argument or the form itself spoiled — removed, replaced by
  * random, binary, unicode or huge text, by a file, by an id of nothing, by a value of another
- * type — plus junk and prototype-polluting keys and a forged previous state. Never a 500 or a stack trace: the action's own error state or
- * a 4xx, and not one row written.
+ * type — plus junk and prototype-polluting keys and a forged previous state; then bodies that are
+ * no valid call at all (not JSON, cut short, multipart without or with the wrong boundary, binary,
+ * empty, huge, references to parts never sent…), each with its length declared and chunked.
+ * Never a 500 or a stack trace: the action's own error state or a 4xx in the app's JSON error
+ * format, and not one row written.
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { uniqueLoopbackAddress } from "../support/loopback-client";
-import { expectNoInternals, hostileText, hugeLength, pollutingKey } from "../support/hostile-input";
+import { expectNoInternals, hostileBodies, hostileText, hugeLength, pollutingKey } from "../support/hostile-input";
 import { actionForms, planActionCall, type ActionForm, type FieldValue } from "./support/action-forms";
 import { setUpAccessWorld, type AccessWorld } from "./support/access-world";
 import { builtActionId } from "./support/app-surface";
 import { changedTables, readDatabaseState } from "./support/database-state";
-import { callAction, isRefusalState, type ActionReply } from "./support/server-actions";
+import { rawPost } from "./support/raw-post";
+import { callAction, isRefusalState, readActionResult, type ActionReply } from "./support/server-actions";
 
 const runsPerAction = 12;
 
@@ -128,6 +132,54 @@ describe("hostile input on every server action", () => {
         // counterexample with the spoiled part named is readable as it is.
         { numRuns: runsPerAction, endOnFailure: true },
       );
+    });
+  }
+});
+
+/** A body that is no valid call: a 4xx from the proxy in the app's JSON format, or the action's own refusal. */
+function expectBodyRefused(reply: { status: number; text: string; redirect: string | null }, guardsInput: boolean, context: string): void {
+  expect(reply.status, `${context} → ${reply.status} ${reply.text.slice(0, 300)}`).toBeLessThan(500);
+  expectNoInternals(reply.text, context);
+  if (reply.status >= 400) {
+    const { error } = JSON.parse(reply.text) as { error: { code: string; message: string } };
+    expect(error.message.length, context).toBeGreaterThan(10);
+    return;
+  }
+  // Signing out takes no input, so any call of it signs out.
+  if (!guardsInput) return;
+  expect(reply.redirect, `${context}: the action went on to ${reply.redirect}`).toBeNull();
+  const { result } = readActionResult(reply.text);
+  expect(isRefusalState(result), `${context}: not a refusal: ${JSON.stringify(result).slice(0, 300)}`).toBe(true);
+}
+
+describe("bodies that are no valid call, on every server action", () => {
+  // Larger than the largest form's limit, so every page refuses it.
+  const bodies = hostileBodies(2 * 1024 * 1024);
+
+  for (const [key, form] of Object.entries(actionForms)) {
+    it(`${key.split("#")[1]} refuses every malformed kind, chunked and with a length, and writes nothing`, async () => {
+      const actionId = builtActionId(key);
+      const plan = await planActionCall(form, world, form.allowed, world.people[form.allowed].cookie);
+      const guardsInput = Boolean(form.guarded || form.guardedArgs);
+      // Signing out ends the session it is sent with, whatever else it is sent.
+      const bookkeeping = guardsInput ? form.bookkeeping : [...(form.bookkeeping ?? []), "sessions"];
+      const before = await readDatabaseState(bookkeeping);
+      for (const { kind, contentType, body } of bodies) {
+        for (const chunked of [false, true]) {
+          // As a script sends an action (its id in a header), and multipart kinds also as a form posted without scripts.
+          for (const script of contentType?.startsWith("multipart/") ? [true, false] : [true]) {
+            const headers: Record<string, string> = {
+              ...(script ? { "next-action": actionId, accept: "text/x-component" } : {}),
+              ...(contentType ? { "content-type": contentType } : {}),
+              ...(plan.cookie ? { cookie: plan.cookie } : {}),
+            };
+            const reply = await rawPost({ path: plan.path, headers, body, chunked, from: uniqueLoopbackAddress() });
+            const redirect = typeof reply.headers["x-action-redirect"] === "string" ? reply.headers["x-action-redirect"] : null;
+            expectBodyRefused({ ...reply, redirect }, guardsInput, `${key}: ${kind}${chunked ? ", chunked" : ""}${script ? "" : ", without scripts"}`);
+          }
+        }
+      }
+      expect(changedTables(before, await readDatabaseState(bookkeeping)), key).toEqual([]);
     });
   }
 });

@@ -90,7 +90,7 @@ const handlerTable: Record<string, HandlerCase> = {
   "POST /api/uploadthing": {
     path: () => "/api/uploadthing?actionType=upload&slug=benchPhoto",
     body: (w) => ({ files: [{ name: "scope.png", size: 1000, type: "image/png", lastModified: Date.now() }], input: { submissionId: w.draftSubmissionId } }),
-    expect: [403, 200, 404, 403, 403, 403, 403],
+    expect: [401, 200, 404, 403, 403, 403, 403],
   },
 };
 

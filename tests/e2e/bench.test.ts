@@ -8,7 +8,10 @@ import { randomUUID } from "node:crypto";
 import path from "node:path";
 import type { Browser, Page } from "playwright-core";
 import { PNG } from "pngjs";
+import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { db } from "@/db/client";
+import { sessions, users } from "@/db/schema";
 import { findDemoCohortId } from "../integration/support/people";
 import { createNamedLearner } from "../integration/support/bench-people";
 import { waitForMessage } from "../integration/support/mail-sink";
@@ -251,6 +254,32 @@ describe("a bench exercise from upload to feedback", () => {
       } finally {
         await close();
       }
+    }
+  });
+
+  it("tells a learner whose session ended on the page to sign in again, not that the photo service is down", async () => {
+    const other = await createNamedLearner({ cohortId: await findDemoCohortId(), name: `Ines Varga-${randomUUID().slice(0, 4)}`, password });
+    const [{ id }] = await db.select({ id: users.id }).from(users).where(eq(users.email, other.email));
+    const { context, page } = await openPage(browser, "wide");
+    try {
+      await signInThroughForm(page, { email: other.email, password });
+      await page.goto("/bench/build-a-run");
+      // The session ends while the page is open: the draft is opened, then the upload route is asked.
+      let asked = false;
+      await page.route("**/api/uploadthing?**", async (route) => {
+        if (route.request().method() === "POST" && !asked) {
+          asked = true;
+          await db.delete(sessions).where(eq(sessions.userId, id!));
+        }
+        await route.continue();
+      });
+      await page.locator('input[type="file"]').setInputFiles({ name: "scope-edge.png", mimeType: "image/png", buffer: scopeScreenPhoto(320, 200) });
+      await page.getByText("Sign in again to upload photos.").waitFor({ timeout: 30_000 });
+      expect(asked).toBe(true);
+      expect(await page.getByText("The photo service is not answering", { exact: false }).count()).toBe(0);
+      await saveScreenshot(page, "bench-learner-signed-out-upload-wide");
+    } finally {
+      await context.close();
     }
   });
 

@@ -3,7 +3,8 @@
  * against the built app: each page answers with the headers, the browser reports no policy
  * violation while the page's interactive parts are used (live previews in the simulator worker,
  * an upload to the upload service, server-action forms), and inline scripts carry the nonce. HSTS
- * is sent only by a production server whose APP_URL is https.
+ * is sent only by a production server whose APP_URL is https; no response names the framework
+ * that serves it (X-Powered-By).
  */
 import type { Browser, BrowserContext, Page, Response } from "playwright-core";
 import { PNG } from "pngjs";
@@ -11,7 +12,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { cohortMemberships } from "@/db/schema";
 import { findDemoCohortId } from "../integration/support/people";
-import { launchBrowser, openPage, signInAs, signInThroughForm } from "./support/browser";
+import { baseUrl, launchBrowser, openPage, signInAs, signInThroughForm } from "./support/browser";
 import { createLearnerAtLab } from "./support/learner-at-lab";
 import { startProductionServer } from "./support/second-server";
 
@@ -204,6 +205,30 @@ describe("security headers and the Content-Security-Policy", () => {
     await page.getByRole("button", { name: "Create cohort" }).click();
     await page.getByText("The last day cannot be before the first day.").waitFor({ timeout: 30_000 });
     await finish(watched);
+  });
+});
+
+describe("X-Powered-By", () => {
+  it("is sent by no kind of response: pages, redirects, route handlers, refusals, build files, the not-found page", async () => {
+    const landing = await fetch(`${baseUrl}/`);
+    const script = /<script[^>]+src="(\/_next\/static\/[^"]+\.js)"/.exec(await landing.text())?.[1];
+    expect(script).toBeTruthy();
+    const responses: [string, Promise<globalThis.Response>][] = [
+      ["landing page", Promise.resolve(landing)],
+      ["sign-in page", fetch(`${baseUrl}/sign-in`)],
+      ["redirect to sign-in", fetch(`${baseUrl}/learn`, { redirect: "manual" })],
+      ["not-found page", fetch(`${baseUrl}/no-such-page`)],
+      ["health check", fetch(`${baseUrl}/api/health`)],
+      ["route handler refusal", fetch(`${baseUrl}/api/labs/${LAB}/attempts`)],
+      ["server action refusal", fetch(`${baseUrl}/sign-in`, { method: "POST", headers: { origin: baseUrl, "next-action": "0".repeat(42) }, body: "not a call" })],
+      ["build file", fetch(`${baseUrl}${script}`)],
+      ["public file", fetch(`${baseUrl}/robots.txt`)],
+    ];
+    for (const [what, pending] of responses) {
+      const response = await pending;
+      expect(response.status, what).toBeLessThan(500);
+      expect(response.headers.get("x-powered-by"), what).toBeNull();
+    }
   });
 });
 

@@ -1,11 +1,15 @@
 /**
  * The workbench in a real browser against the built app: a learner moves the resistor and watches
  * the live preview change, submits a failing and then a passing choice, finds both in the
- * history, and redraws the first from what was stored.
+ * history, and redraws the first from what was stored; a learner with a long history sees the
+ * newest page of it and asks for older attempts.
  */
+import { randomUUID } from "node:crypto";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, openPage, saveScreenshot, signInThroughForm } from "./support/browser";
+import { createSession } from "@/lib/auth/session-store";
+import { attemptPageSizes } from "@/lib/grading/attempt-pages";
+import { baseUrl, launchBrowser, openPage, saveScreenshot, signInThroughForm } from "./support/browser";
 import { createLearnerAtLab } from "./support/learner-at-lab";
 
 const LAB = "lone-lead-termination";
@@ -118,6 +122,41 @@ describe("the workbench", () => {
       expect(await resistorShown(page)).toBe("240 Ω");
       await saveScreenshot(page, "workbench-wide-reopened");
       expect(pageErrors).toEqual([]);
+    } finally {
+      await context.close();
+    }
+  });
+
+  it("shows the newest attempts of a long history first and the older ones on request", async () => {
+    const person = await createLearnerAtLab({ labSlug: LAB, password, label: "workbench-history" });
+    const cookie = await createSession(person.id);
+    const count = attemptPageSizes.default + 3;
+    for (let i = 0; i < count; i += 1) {
+      const response = await fetch(`${baseUrl}/api/labs/${LAB}/attempts`, {
+        method: "POST",
+        headers: { "content-type": "application/json", cookie: `${cookie.name}=${cookie.value}` },
+        body: JSON.stringify({ choices: { main: { seriesResistance: i % 2 === 0 ? 33 : 150 } }, idempotencyKey: randomUUID() }),
+      });
+      expect(response.status).toBe(201);
+    }
+    const { context, page } = await openPage(browser, "wide");
+    try {
+      await signInThroughForm(page, person);
+      await page.goto(`/labs/${LAB}`);
+      const history = page.getByTestId("attempt-history");
+      await history.locator(`[data-attempt="${count}"]`).waitFor({ timeout: 30_000 });
+      const shown = () => history.locator("[data-attempt]").evaluateAll((items) => items.map((item) => Number(item.getAttribute("data-attempt"))));
+      expect(await shown()).toEqual(Array.from({ length: attemptPageSizes.default }, (_, i) => count - i));
+      // The next attempt is numbered from the newest, whatever the page holds.
+      expect(await page.getByText(`This will be attempt ${count + 1}:`).count()).toBe(1);
+      const older = page.getByRole("button", { name: "Show older attempts" });
+      await older.scrollIntoViewIfNeeded();
+      await saveScreenshot(page, "workbench-history-first-page");
+      await older.click();
+      await history.locator('[data-attempt="1"]').waitFor({ timeout: 30_000 });
+      expect(await shown()).toEqual(Array.from({ length: count }, (_, i) => count - i));
+      expect(await older.count()).toBe(0);
+      await saveScreenshot(page, "workbench-history-all");
     } finally {
       await context.close();
     }

@@ -1,7 +1,8 @@
 /**
  * Hostile input against every route handler under app/api, called directly with a Request that
  * carries a real session cookie: random and malformed bodies (wrong types, huge strings, deep
- * nesting, prototype-pollution keys, invalid JSON, wrong content types) and hostile route
+ * nesting, prototype-pollution keys, invalid JSON, wrong content types), every malformed kind of
+ * body sent with a length and chunked, bodies over their limit or that never end, and hostile route
  * parameters, and Cookie headers whose session value is mangled. Never a 500, never a stack trace,
  * a 4xx with a readable message, and no row written.
  */
@@ -17,7 +18,9 @@ import { benchPhotos, benchSubmissions, cohortMemberships, labAttempts, rateLimi
 import { getCourse, getLessonOfLab } from "@/lessons";
 import { createSession } from "@/lib/auth/session-store";
 import { openBenchDraft } from "@/lib/bench/submissions";
-import { expectNoInternals, hostileText, hugeString, pollutingKey } from "../support/hostile-input";
+import { bodyLimits, type BodyLimit } from "@/lib/http/body-limits";
+import { errorReplyLimits } from "@/lib/http/errors";
+import { expectNoInternals, hostileBodies, hostileText, hugeString, pollutingKey } from "../support/hostile-input";
 import { startBenchUploadService, type BenchUploadService } from "./support/bench-upload-service";
 import { createBenchSchool } from "./support/bench-people";
 import { createPerson, findDemoCohortId } from "./support/people";
@@ -283,5 +286,141 @@ describe("hostile input on every route handler", () => {
         { numRuns: params.length === 0 ? 3 : Math.ceil(runs / 3) },
       );
     }
+  });
+});
+
+/** A body as it may arrive: all at once with its length declared, or in chunks of 16 kB without one. */
+function sentAs(url: string, options: { body: Uint8Array<ArrayBuffer>; contentType: string | undefined; chunked: boolean; headers?: Record<string, string> }): Request {
+  const { body, contentType, chunked } = options;
+  const headers: Record<string, string> = { ...(contentType ? { "content-type": contentType } : {}), ...options.headers };
+  if (!chunked) return new Request(url, { method: "POST", body, headers: { ...headers, "content-length": String(body.byteLength) } });
+  let at = 0;
+  const stream = new ReadableStream<Uint8Array>({
+    pull(controller) {
+      if (at >= body.byteLength) return controller.close();
+      controller.enqueue(body.slice(at, (at += 16 * 1024)));
+    },
+  });
+  return new Request(url, { method: "POST", body: stream, headers, duplex: "half" } as RequestInit);
+}
+
+/** A body that never ends (or never starts), and how much of it the handler took. */
+function endlessBody(options: { stalls?: boolean } = {}): { stream: ReadableStream<Uint8Array>; taken: () => number } {
+  let taken = 0;
+  const stream = new ReadableStream<Uint8Array>(
+    {
+      pull(controller) {
+        if (options.stalls) return new Promise<void>(() => {});
+        taken += 16 * 1024;
+        controller.enqueue(new Uint8Array(16 * 1024).fill(0x5b));
+      },
+    },
+    // Nothing is produced before a reader asks.
+    { highWaterMark: 0 },
+  );
+  return { stream, taken: () => taken };
+}
+
+const attemptUrl = `http://app.test/api/labs/${LAB}/attempts`;
+const uploadUrl = "http://app.test/api/uploadthing?slug=benchPhoto&actionType=upload";
+const reportUrl = "http://app.test/api/uploadthing?slug=benchPhoto";
+const reportHeaders = { "uploadthing-hook": "callback", "x-uploadthing-signature": "hmac-sha256=00" };
+
+type BodyRoute = { name: string; route: string; url: string; limit: BodyLimit; cookie: () => string; headers?: Record<string, string> };
+const bodyRoutes: BodyRoute[] = [
+  { name: "a lab submission", route: "labs/[labSlug]/attempts", url: attemptUrl, limit: bodyLimits.labSubmission, cookie: () => cookies.learner },
+  { name: "a photo upload request", route: "uploadthing", url: uploadUrl, limit: bodyLimits.uploadRequest, cookie: () => uploadCookie },
+  { name: "an upload service report", route: "uploadthing", url: reportUrl, limit: bodyLimits.uploadCallback, cookie: () => "", headers: reportHeaders },
+];
+
+async function post(route: BodyRoute, request: Request): Promise<Response> {
+  const handlers = await loadRoute(route.route);
+  return handlers.POST!(request, { params: Promise.resolve({ labSlug: LAB }) });
+}
+
+describe("malformed and oversized bodies on every route that reads one", () => {
+  for (const route of bodyRoutes) {
+    it(`${route.name}: every malformed kind, with a length and chunked, is a clear 4xx and writes nothing`, async () => {
+      const before = await rowsWritten();
+      const keysBefore = uploads.storedKeys().length;
+      for (const { kind, contentType, body } of hostileBodies(route.limit.bytes)) {
+        for (const chunked of [false, true]) {
+          const request = sentAs(route.url, { body, contentType, chunked, headers: { cookie: route.cookie(), ...route.headers } });
+          await expectClearRefusal(await post(route, request), `${route.name}, ${kind}${chunked ? ", chunked" : ""}`);
+        }
+      }
+      expect(await rowsWritten()).toEqual(before);
+      expect(uploads.storedKeys()).toHaveLength(keysBefore);
+    });
+
+    it(`${route.name}: a declared length over ${route.limit.bytes} bytes is refused with 413 before a byte is read`, async () => {
+      const { stream, taken } = endlessBody();
+      const request = new Request(route.url, {
+        method: "POST",
+        body: stream,
+        duplex: "half",
+        headers: { "content-type": "application/json", "content-length": String(50 * 1024 * 1024), cookie: route.cookie(), ...route.headers },
+      } as RequestInit);
+      const response = await post(route, request);
+      expect(response.status).toBe(413);
+      expect(((await response.json()) as { error: { message: string } }).error.message).toMatch(/may be at most \d+ KB/);
+      expect(taken()).toBe(0);
+    });
+
+    it(`${route.name}: a chunked body that never ends is read only to its limit, then answered 413`, async () => {
+      const { stream, taken } = endlessBody();
+      const request = new Request(route.url, {
+        method: "POST",
+        body: stream,
+        duplex: "half",
+        headers: { "content-type": "application/json", cookie: route.cookie(), ...route.headers },
+      } as RequestInit);
+      const response = await post(route, request);
+      expect(response.status).toBe(413);
+      expect(((await response.json()) as { error: { code: string } }).error.code).toBe("payload-too-large");
+      // The chunk that crossed the limit and the one the stream readied next, no more.
+      expect(taken()).toBeLessThanOrEqual(route.limit.bytes + 2 * 16 * 1024);
+    });
+  }
+
+  it("refuses an upload request before reading its body: 401 signed out, 403 for an instructor", async () => {
+    const { POST } = await loadRoute("uploadthing");
+    for (const [cookie, status] of [["", 401], [cookies.instructor, 403]] as const) {
+      const { stream, taken } = endlessBody({ stalls: true });
+      const request = new Request(uploadUrl, { method: "POST", body: stream, duplex: "half", headers: { "content-type": "application/json", cookie } } as RequestInit);
+      const response = await POST!(request, { params: Promise.resolve({}) });
+      expect(response.status).toBe(status);
+      const body = (await response.json()) as { error: { message: string }; message: string };
+      expect(body.message).toBe(body.error.message);
+      expect(taken()).toBe(0);
+    }
+    const unsigned = endlessBody({ stalls: true });
+    const report = new Request(reportUrl, { method: "POST", body: unsigned.stream, duplex: "half", headers: { "uploadthing-hook": "callback" } } as RequestInit);
+    expect((await POST!(report, { params: Promise.resolve({}) })).status).toBe(401);
+  });
+
+  it("refuses a lab submission before reading its body when signed out", async () => {
+    const { POST } = await loadRoute("labs/[labSlug]/attempts");
+    const { stream, taken } = endlessBody({ stalls: true });
+    const request = new Request(attemptUrl, { method: "POST", body: stream, duplex: "half", headers: { "content-type": "application/json" } } as RequestInit);
+    expect((await POST!(request, { params: Promise.resolve({ labSlug: LAB }) })).status).toBe(401);
+    expect(taken()).toBe(0);
+  });
+
+  it("answers a submission of thousands of unknown keys naming five of them, in a reply far smaller than the body", async () => {
+    const { POST } = await loadRoute("labs/[labSlug]/attempts");
+    // Each `"k000123":1,` takes 12 bytes: as many as fit under the limit beside the valid fields.
+    const keys = Array.from({ length: Math.floor((bodyLimits.labSubmission.bytes - 200) / 12) }, (_, i) => `k${String(i).padStart(6, "0")}`);
+    const json = JSON.stringify({ choices: { main: { seriesResistance: 150 } }, idempotencyKey: "3f2b8c1e-9a4d-4e6b-8c7a-1d2e3f4a5b6c", ...Object.fromEntries(keys.map((key) => [key, 1])) });
+    expect(json.length).toBeLessThan(bodyLimits.labSubmission.bytes);
+    const response = await POST!(bodyRequest(attemptUrl, json, "application/json", cookies.learner), { params: Promise.resolve({ labSlug: LAB }) });
+    const reply = await response.text();
+    expect(response.status).toBe(422);
+    const { error } = JSON.parse(reply) as { error: { message: string; fieldErrors: Record<string, string[]>; moreFieldErrors: number } };
+    expect(Object.keys(error.fieldErrors)).toHaveLength(errorReplyLimits.fields);
+    expect(error.moreFieldErrors).toBe(keys.length - errorReplyLimits.fields);
+    expect(error.message).toContain(`and ${keys.length - errorReplyLimits.fields} more fields`);
+    expect(reply.length).toBeLessThan(1_000);
+    expect(json.length).toBeGreaterThan(30 * reply.length);
   });
 });

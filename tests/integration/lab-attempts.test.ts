@@ -13,6 +13,7 @@ import { cohortMemberships, labAttempts } from "@/db/schema";
 import { getCourse, getLab, getLessonOfLab, judgeRun, labVariant } from "@/lessons";
 import { createSession } from "@/lib/auth/session-store";
 import { gradeAttempt, type AttemptView, type VerdictLine } from "@/lib/grading";
+import { attemptPageSizes } from "@/lib/grading/attempt-pages";
 import { simulateRun, type SimInput } from "@/lib/sim";
 import { createPerson, findDemoCohortId } from "./support/people";
 
@@ -252,5 +253,84 @@ describe("GET /api/labs/[labSlug]/attempts and /[attemptId]", () => {
       params: Promise.resolve({ labSlug: LAB, attemptId: "42" }),
     });
     expect(notAnId.status).toBe(404);
+  });
+});
+
+describe("GET /api/labs/[labSlug]/attempts, a page at a time", () => {
+  type Page = { attempts: AttemptView[]; nextCursor: string | null };
+
+  async function page(person: Person, query = ""): Promise<{ status: number; json: Page & { error?: { fieldErrors: Record<string, string[]> } } }> {
+    const response = await listAttempts(request(`/api/labs/${LAB}/attempts${query}`, { person }), labParams());
+    return { status: response.status, json: await response.json() };
+  }
+
+  /** Follows nextCursor from the first page to the last, as the workbench does. */
+  async function allPages(person: Person, limit?: number): Promise<Page[]> {
+    const pages: Page[] = [];
+    for (let cursor: string | null = null; pages.length === 0 || cursor !== null; ) {
+      const query = new URLSearchParams({ ...(limit ? { limit: String(limit) } : {}), ...(cursor ? { cursor } : {}) }).toString();
+      const { status, json } = await page(person, query ? `?${query}` : "");
+      expect(status).toBe(200);
+      pages.push(json);
+      cursor = json.nextCursor;
+    }
+    return pages;
+  }
+
+  /** A learner with `count` graded attempts: one through the route, the rest copies of its stored row. */
+  async function learnerWithAttempts(count: number): Promise<Person> {
+    const learner = await signedIn("learner", cohortId);
+    await submit(learner, { choices: failing, idempotencyKey: randomUUID() });
+    const [first] = await rowsOf(learner.id);
+    const { id: _id, createdAt, ...stored } = first!;
+    const copies = Array.from({ length: count - 1 }, (_, i) => ({
+      ...stored,
+      idempotencyKey: randomUUID(),
+      attemptNumber: i + 2,
+      createdAt: new Date(createdAt.getTime() + (i + 1) * 1000),
+    }));
+    for (let i = 0; i < copies.length; i += 500) await db.insert(labAttempts).values(copies.slice(i, i + 500));
+    return learner;
+  }
+
+  it("returns 1,563 attempts in bounded pages, newest first, each once, with no cursor after the last", async () => {
+    const learner = await learnerWithAttempts(1563);
+    const pages = await allPages(learner);
+    expect(pages).toHaveLength(Math.ceil(1563 / attemptPageSizes.default));
+    expect(pages.slice(0, -1).every((p) => p.attempts.length === attemptPageSizes.default)).toBe(true);
+    const numbers = pages.flatMap((p) => p.attempts.map((attempt) => attempt.attemptNumber));
+    expect(numbers).toEqual(Array.from({ length: 1563 }, (_, i) => 1563 - i));
+    expect(pages.at(-1)!.nextCursor).toBeNull();
+
+    const widest = await allPages(learner, attemptPageSizes.max);
+    expect(widest.map((p) => p.attempts.length)).toEqual([100, 100, 100, 100, 100, 100, 100, 100, 100, 100, 100, 100, 100, 100, 100, 63]);
+    expect(JSON.stringify(widest[0]).length).toBeLessThan(JSON.stringify(pages.flatMap((p) => p.attempts)).length / 10);
+  });
+
+  it("keeps its place when the learner submits between two pages", async () => {
+    const learner = await learnerWithAttempts(30);
+    const first = (await page(learner, "?limit=10")).json;
+    expect(first.attempts.map((a) => a.attemptNumber)).toEqual([30, 29, 28, 27, 26, 25, 24, 23, 22, 21]);
+    await submit(learner, { choices: passing, idempotencyKey: randomUUID() });
+    const second = (await page(learner, `?limit=10&cursor=${first.nextCursor}`)).json;
+    expect(second.attempts.map((a) => a.attemptNumber)).toEqual([20, 19, 18, 17, 16, 15, 14, 13, 12, 11]);
+    expect((await page(learner, "?limit=1")).json.attempts[0]!.attemptNumber).toBe(31);
+  });
+
+  it("refuses a page size out of bounds or a cursor it did not give, naming the parameter", async () => {
+    const learner = await signedIn("learner", cohortId);
+    for (const [query, field] of [
+      ["?limit=0", "limit"],
+      [`?limit=${attemptPageSizes.max + 1}`, "limit"],
+      ["?limit=2.5", "limit"],
+      ["?limit=all", "limit"],
+      ["?cursor=-3", "cursor"],
+      ["?cursor=abc", "cursor"],
+      ["?cursor=99999999999999", "cursor"],
+    ] as const) {
+      const { status, json } = await page(learner, query);
+      expect(status, query).toBe(422);
+      expect(Object.keys(json.error!.fieldErrors), query).toEqual([field]);
+    }
   });
 });

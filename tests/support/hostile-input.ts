@@ -25,3 +25,50 @@ export const hostileText = fc.oneof(
 export function expectNoInternals(text: string, context?: string): void {
   expect(text, context).not.toMatch(/\n\s+at\s|\bat\s+\S+\s+\(|node_modules|\/work\/|\.tsx?:\d+|TypeError|RangeError|SyntaxError/);
 }
+
+/** A request body of one malformed kind, with the content type it is sent under (none when undefined). */
+export type HostileBody = { kind: string; contentType: string | undefined; body: Uint8Array<ArrayBuffer> };
+
+const text = (value: string) => new TextEncoder().encode(value);
+/** Bytes that are no text in any encoding: every value, in an order that repeats only after 256. */
+const garbage = Uint8Array.from({ length: 4096 }, (_, i) => (i * 167 + 13) % 256);
+const multipartBody = text('--edge\r\nContent-Disposition: form-data; name="0"\r\n\r\n["x"]\r\n--edge--\r\n');
+
+/**
+ * Malformed bodies of every kind a reporter tried against the server actions and routes, to be
+ * sent chunked and with a length: not JSON, JSON cut short or of the wrong shape, multipart without
+ * or with the wrong boundary or cut short, URL-encoded junk, bytes that are no text, nothing at all,
+ * a wrong or missing content type, nesting deeper than any parser's stack, references to parts that
+ * were never sent (the server-action reply format), and a body over `tooLargeBytes`.
+ */
+export function hostileBodies(tooLargeBytes: number): HostileBody[] {
+  const kinds: [string, string | undefined, Uint8Array<ArrayBuffer> | string][] = [
+    ["empty body", "text/plain;charset=UTF-8", ""],
+    ["plain text", "text/plain;charset=UTF-8", "This is a note, not a form or JSON."],
+    ["truncated JSON", "text/plain;charset=UTF-8", '[{"status":"idle"},{"choices":{"main":'],
+    ["truncated JSON as JSON", "application/json", '{"choices":{"main":{"seriesResistance":'],
+    ["JSON number", "text/plain;charset=UTF-8", "42"],
+    ["JSON null", "application/json", "null"],
+    ["JSON string", "text/plain;charset=UTF-8", '"a string"'],
+    ["JSON array of numbers", "application/json", "[1,2,3]"],
+    ["JSON object with polluting keys", "application/json", '{"__proto__":{"polluted":true},"constructor":{"prototype":{"polluted":true}}}'],
+    ["multipart without a boundary", "multipart/form-data", multipartBody],
+    ["multipart with another boundary", "multipart/form-data; boundary=elsewhere", multipartBody],
+    ["multipart cut short", "multipart/form-data; boundary=edge", multipartBody.subarray(0, 40)],
+    ["multipart with a base64 file", "multipart/form-data; boundary=edge", '--edge\r\nContent-Disposition: form-data; name="0"\r\n\r\n["$K1"]\r\n--edge\r\nContent-Disposition: form-data; name="_1_file"; filename="a.csv"\r\nContent-Transfer-Encoding: base64\r\n\r\nbmFtZQ==\r\n--edge--\r\n'],
+    ["URL-encoded junk", "application/x-www-form-urlencoded", "a=%zz&&=&%E0%A4%A=b&&"],
+    ["binary garbage", "application/octet-stream", garbage],
+    ["binary garbage as text", "text/plain;charset=UTF-8", garbage],
+    ["binary garbage as JSON", "application/json", garbage],
+    ["wrong content type", "application/xml", "<submission><choices/></submission>"],
+    ["no content type", undefined, '{"choices":{}}'],
+    ["nesting 100,000 deep", "text/plain;charset=UTF-8", "[".repeat(100_000) + "]".repeat(100_000)],
+    ["reference to a missing part", "text/plain;charset=UTF-8", '["$1","$@5"]'],
+    ["reference to a map of a missing part", "text/plain;charset=UTF-8", '[{"status":"idle"},"$Q1"]'],
+    ["reference to an action as an argument", "text/plain;charset=UTF-8", '["$h1"]'],
+    ["reference to a value that is not there", "text/plain;charset=UTF-8", '[{"a":1},"$0:0:b"]'],
+    ["over-long BigInt", "text/plain;charset=UTF-8", `["$n${"9".repeat(400)}"]`],
+    ["huge body", "text/plain;charset=UTF-8", `["${"x".repeat(tooLargeBytes)}"]`],
+  ];
+  return kinds.map(([kind, contentType, body]) => ({ kind, contentType, body: typeof body === "string" ? text(body) : new Uint8Array(body) }));
+}

@@ -18,6 +18,18 @@ const serviceDownMessage = "The photo service is not answering, so no photo was 
 const serviceFailureCodes = new Set<string>(["INTERNAL_SERVER_ERROR", "INTERNAL_CLIENT_ERROR", "UPLOAD_FAILED", "URL_GENERATION_FAILED"]);
 
 /**
+ * The sentence of a refusal the app's upload route answered itself (a signed-out learner, a body
+ * too large): the library keeps the reply as the error's cause, under a code it guesses from the
+ * status (401 has none of its own, so it would read as a service failure). The route's reply is
+ * the app's JSON error with its sentence repeated at the top; other causes (a failed fetch) are not.
+ */
+function appRefusalOf(error: { cause?: unknown }): string | null {
+  const reply = error.cause as { message?: unknown; error?: { code?: unknown; message?: unknown } } | null | undefined;
+  const sentence = reply?.error?.message;
+  return typeof sentence === "string" && typeof reply?.error?.code === "string" && reply.message === sentence ? sentence : null;
+}
+
+/**
  * Picks or takes photos and sends them through the upload route. Files are checked here first for
  * an instant answer, and redrawn from their pixels so that no location or camera details travel
  * with them; the server checks them again, and checks what arrived by its content.
@@ -30,7 +42,8 @@ export function PhotoUploader({ exerciseSlug, storedCount }: { exerciseSlug: str
   const [dragging, setDragging] = useState(false);
   const { startUpload, isUploading } = useUploadThing("benchPhoto", {
     onUploadProgress: setProgress,
-    onUploadError: (error) => setNotices([{ tone: "error", text: serviceFailureCodes.has(error.code) ? serviceDownMessage : error.message }]),
+    onUploadError: (error) =>
+      setNotices([{ tone: "error", text: appRefusalOf(error) ?? (serviceFailureCodes.has(error.code) ? serviceDownMessage : error.message) }]),
   });
   const room = benchPhotoLimits.maxPhotos - storedCount;
   const busy = isUploading || progress !== null;

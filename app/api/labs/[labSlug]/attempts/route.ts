@@ -5,9 +5,12 @@ import { findLearnerCohortId } from "@/db/queries/cohorts";
 import { getCourse } from "@/lessons";
 import { checkCertificateAfterCourseWork } from "@/lib/certificates";
 import { outcomeOf, scoreWork, toAttemptView, variantSeedFor, verdictLines } from "@/lib/grading";
+import { readAttemptPageQuery, toAttemptPage } from "@/lib/grading/attempt-pages";
 import { gradeWorkOffThread } from "@/lib/grading/grade-off-thread";
 import { invalidInput, issuesOf } from "@/lib/grading/input-error";
+import { bodyLimits } from "@/lib/http/body-limits";
 import { AppError } from "@/lib/http/errors";
+import { readJsonBody } from "@/lib/http/json-body";
 import { errorResponse } from "@/lib/http/respond";
 import { limitRequest } from "@/lib/rate-limit/limit-request";
 import { findLab, requireLearner, requireOpenLab, withSession } from "../../learner-request";
@@ -22,18 +25,6 @@ const submissionSchema = z.strictObject({
   idempotencyKey: z.uuid({ error: "must be a UUID made by the client for this submission" }),
 });
 
-async function readJson(request: Request): Promise<unknown> {
-  // Only JSON is read, so a cross-site form post (which cannot send application/json) is never graded.
-  if (!request.headers.get("content-type")?.toLowerCase().startsWith("application/json")) {
-    throw new AppError("bad-request", "Send the submission as application/json.");
-  }
-  try {
-    return await request.json();
-  } catch {
-    throw new AppError("bad-request", "The body must be JSON.");
-  }
-}
-
 /**
  * Grades a submission on the server (the browser's own preview is never trusted) and stores it as
  * the learner's next attempt. A retried submission with the same idempotency key gets the stored
@@ -45,7 +36,8 @@ export async function POST(request: Request, context: Context): Promise<NextResp
     await limitRequest(request, "grading", learner.user.id);
     const lab = findLab((await context.params).labSlug);
     await requireOpenLab(learner.user, lab);
-    const body = submissionSchema.safeParse(await readJson(request));
+    // The learner, the lab and its lock are checked first: a refused request's body is never read.
+    const body = submissionSchema.safeParse(await readJsonBody(request, bodyLimits.labSubmission));
     if (!body.success) throw invalidInput(issuesOf(body.error));
     const { user } = learner;
     const seed = variantSeedFor(user.id, lab.slug);
@@ -81,13 +73,18 @@ export async function POST(request: Request, context: Context): Promise<NextResp
   }
 }
 
-/** The learner's own attempts at the lab, newest first. */
+/**
+ * The learner's own attempts at the lab, newest first, a page at a time: `?limit=` (20 unless
+ * given, at most 100) and `?cursor=` from the previous page's `nextCursor`, null on the last page.
+ */
 export async function GET(request: Request, context: Context): Promise<NextResponse> {
   try {
     const learner = await requireLearner(request);
     const lab = findLab((await context.params).labSlug);
-    const attempts = await listLabAttemptsByLearner({ userId: learner.user.id, labSlug: lab.slug });
-    return withSession(NextResponse.json({ attempts: attempts.map(toAttemptView) }), learner);
+    const { limit, cursor } = readAttemptPageQuery(request.url);
+    const rows = await listLabAttemptsByLearner({ userId: learner.user.id, labSlug: lab.slug, limit: limit + 1, beforeNumber: cursor });
+    const page = toAttemptPage(rows, limit);
+    return withSession(NextResponse.json({ attempts: page.items.map(toAttemptView), nextCursor: page.nextCursor }), learner);
   } catch (error) {
     return errorResponse(error);
   }
