@@ -335,6 +335,7 @@ const bodyRoutes: BodyRoute[] = [
 
 async function post(route: BodyRoute, request: Request): Promise<Response> {
   const handlers = await loadRoute(route.route);
+  await forgetRateLimits();
   return handlers.POST!(request, { params: Promise.resolve({ labSlug: LAB }) });
 }
 
@@ -385,6 +386,7 @@ describe("malformed and oversized bodies on every route that reads one", () => {
 
   it("refuses an upload request before reading its body: 401 signed out, 403 for an instructor", async () => {
     const { POST } = await loadRoute("uploadthing");
+    await forgetRateLimits();
     for (const [cookie, status] of [["", 401], [cookies.instructor, 403]] as const) {
       const { stream, taken } = endlessBody({ stalls: true });
       const request = new Request(uploadUrl, { method: "POST", body: stream, duplex: "half", headers: { "content-type": "application/json", cookie } } as RequestInit);
@@ -401,6 +403,7 @@ describe("malformed and oversized bodies on every route that reads one", () => {
 
   it("refuses a lab submission before reading its body when signed out", async () => {
     const { POST } = await loadRoute("labs/[labSlug]/attempts");
+    await forgetRateLimits();
     const { stream, taken } = endlessBody({ stalls: true });
     const request = new Request(attemptUrl, { method: "POST", body: stream, duplex: "half", headers: { "content-type": "application/json" } } as RequestInit);
     expect((await POST!(request, { params: Promise.resolve({ labSlug: LAB }) })).status).toBe(401);
@@ -409,6 +412,7 @@ describe("malformed and oversized bodies on every route that reads one", () => {
 
   it("answers a submission of thousands of unknown keys naming five of them, in a reply far smaller than the body", async () => {
     const { POST } = await loadRoute("labs/[labSlug]/attempts");
+    await forgetRateLimits();
     // Each `"k000123":1,` takes 12 bytes: as many as fit under the limit beside the valid fields.
     const keys = Array.from({ length: Math.floor((bodyLimits.labSubmission.bytes - 200) / 12) }, (_, i) => `k${String(i).padStart(6, "0")}`);
     const json = JSON.stringify({ choices: { main: { seriesResistance: 150 } }, idempotencyKey: "3f2b8c1e-9a4d-4e6b-8c7a-1d2e3f4a5b6c", ...Object.fromEntries(keys.map((key) => [key, 1])) });
