@@ -51,6 +51,7 @@ export async function issueInvitation(params: {
   });
   try {
     await sendInvitationEmail({
+      schoolId: params.schoolId,
       to: params.email,
       schoolName: school.name,
       cohortName: cohort?.name ?? null,

@@ -56,6 +56,7 @@ export async function enrolLearner(params: {
   }
   const school = await findSchoolById({ schoolId });
   const letters = await sendInvitationLetters({
+    schoolId,
     schoolName: school?.name ?? "your school",
     inviterName: params.actor.name,
     letters: [{ invitationId: invitationIds.get(params.email)!, to: params.email, token, cohortName: cohort.name, expiresAt }],

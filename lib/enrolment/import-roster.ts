@@ -99,6 +99,7 @@ export async function importRoster(params: {
   const school = await findSchoolById({ schoolId: params.actor.schoolId });
   const mailStarted = performance.now();
   const letters = await sendInvitationLetters({
+    schoolId: params.actor.schoolId,
     schoolName: school?.name ?? "your school",
     inviterName: params.actor.name,
     letters: cohortLetters(people, invitationIds, { cohortName: cohort.name, expiresAt }),

@@ -66,7 +66,7 @@ describe(`a roster of ${size.toLocaleString("en-GB")} learners`, () => {
     expect(issued).toHaveLength(size);
     expect(issued.every((invitation) => invitation.cohortId === school.cohortId)).toBe(true);
 
-    const caught = (await (await fetch(`${sink.listUrl}?to=${encodeURIComponent(school.domain)}`)).json()) as { to: string }[];
+    const caught = (await (await fetch(`${sink.listUrl}?to=${encodeURIComponent(school.domain)}`, { headers: sink.headers })).json()) as { to: string }[];
     expect(caught).toHaveLength(size);
     expect(new Set(caught.map((message) => message.to))).toEqual(new Set(emails));
   });
