@@ -4,7 +4,8 @@
 import { existsSync, readFileSync } from "node:fs";
 import path from "node:path";
 
-const dataDir = process.env.EDGEWISE_DATA_DIR ?? path.resolve(import.meta.dirname, "../.data");
+// npm runs scripts from the project's folder; drizzle-kit loads its config where import.meta has no dirname.
+const dataDir = process.env.EDGEWISE_DATA_DIR ?? path.resolve(".data");
 
 /** Without the password file (no cluster made yet) the URL has none, and the server says so on connecting. */
 export function devDatabaseUrl(database = "edgewise"): string {

@@ -1,8 +1,7 @@
 import { and, count, eq, inArray } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { unsetPasswordHash } from "@/db/queries/users";
-import { cohortMemberships, invitations, users } from "@/db/schema";
+import { cohortMemberships, invitations, unsetPasswordHash, users } from "@/db/schema";
 import { importRoster, previewRoster } from "@/lib/enrolment";
 import { createTestSchool, csvFile, freePort, rosterCsv, startPrivateMailSink, type PrivateMailSink, type TestSchool } from "./enrolment-fixtures";
 
