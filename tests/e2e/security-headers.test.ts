@@ -44,7 +44,7 @@ async function watchedPage(): Promise<Watched> {
   await context.addInitScript(() => {
     const report = (event: SecurityPolicyViolationEvent) =>
       (window as unknown as { reportPolicyViolation: (text: string) => void }).reportPolicyViolation(
-        `${event.effectiveDirective} blocked ${event.blockedURI || "inline"} on ${location.pathname}`,
+        `${event.effectiveDirective} blocked ${event.blockedURI || "inline"} on ${location.pathname} (from ${event.sourceFile || "the page"}:${event.lineNumber})`,
       );
     document.addEventListener("securitypolicyviolation", report);
   });
