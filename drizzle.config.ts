@@ -1,8 +1,9 @@
 import { defineConfig } from "drizzle-kit";
+import { devDatabaseUrl } from "./scripts/dev-database-url";
 
 export default defineConfig({
   dialect: "postgresql",
   schema: "./db/schema",
   out: "./drizzle",
-  dbCredentials: { url: process.env.DATABASE_URL ?? "postgres://postgres@127.0.0.1:54329/edgewise" },
+  dbCredentials: { url: process.env.DATABASE_URL ?? devDatabaseUrl() },
 });

@@ -42,8 +42,13 @@ function contentSecurityPolicy(nonce: string): string {
     "default-src 'self'",
     // React in development rebuilds server error stacks with eval; production needs no eval.
     `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${isProduction ? "" : " 'unsafe-eval'"}`,
-    // The chart library and Tailwind's runtime values write style attributes.
-    "style-src 'self' 'unsafe-inline'",
+    // Style sheets: the built CSS files, and the <style> elements Next writes, which carry the
+    // nonce. In development Next's dev overlay and hot reload insert <style> elements of their own,
+    // without it (and a nonce in the list would make browsers ignore 'unsafe-inline').
+    `style-src 'self' ${isProduction ? `'nonce-${nonce}'` : "'unsafe-inline'"}`,
+    // Style attributes (style={…} in React, the chart library's sizes) cannot carry a nonce, and
+    // their values are computed, so no hash fits either; they cannot load or select anything.
+    "style-src-attr 'unsafe-inline'",
     "img-src 'self' data: blob:",
     "font-src 'self'",
     `connect-src ${connectSources}`,

@@ -26,9 +26,15 @@ const mailEnvSchema = z.object({
   MAIL_FROM: z.string().min(3, "must be a sender such as Edgewise <no-reply@school.example>"),
 });
 
-const mailSinkEnvSchema = z.object({
-  MAIL_SINK_URL: z.preprocess((value) => (value === "" ? undefined : value), z.url().optional()),
-});
+const emptyAsUnset = (value: unknown) => (value === "" ? undefined : value);
+
+// The local sink's message API answers only requests bearing its token (scripts/mail-sink.mjs).
+const mailSinkEnvSchema = z
+  .object({
+    MAIL_SINK_URL: z.preprocess(emptyAsUnset, z.url().optional()),
+    MAIL_SINK_TOKEN: z.preprocess(emptyAsUnset, z.string().min(16, "must be the mail sink's token (16 characters or more)").optional()),
+  })
+  .refine((env) => !env.MAIL_SINK_URL || env.MAIL_SINK_TOKEN, { path: ["MAIL_SINK_TOKEN"], error: "must be set with MAIL_SINK_URL" });
 
 // How soon an invitation e-mail that did not go out is tried again; each failed try doubles the
 // wait, up to 30 times this.
@@ -79,6 +85,10 @@ export const readAppEnv = once(() => {
   return { ...env, APP_URL: env.APP_URL.replace(/\/+$/, "") };
 });
 export const readMailEnv = once(() => readEnv(mailEnvSchema));
-export const readMailSinkUrl = once(() => readEnv(mailSinkEnvSchema).MAIL_SINK_URL?.replace(/\/+$/, ""));
+/** The local mail sink's API, when the scripts started one. */
+export const readMailSinkEnv = once((): { url: string; token: string } | undefined => {
+  const env = readEnv(mailSinkEnvSchema);
+  return env.MAIL_SINK_URL && env.MAIL_SINK_TOKEN ? { url: env.MAIL_SINK_URL.replace(/\/+$/, ""), token: env.MAIL_SINK_TOKEN } : undefined;
+});
 export const readTrustedProxies = once(() => readEnv(trustedProxiesEnvSchema).TRUSTED_PROXIES);
 export const readMailRetryEnv = once(() => readEnv(mailRetryEnvSchema));

@@ -11,11 +11,12 @@ cd "$ROOT"
 
 name="$1" base="$2"
 export PGDATA="$DATA_DIR/pg-$name" PGPORT=$((base + 1))
-export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/edgewise_$name"
 export APP_PORT=$((base + 2)) APP_URL="http://127.0.0.1:$((base + 2))"
 
 ensure_node_modules
 bash scripts/postgres.sh recreate "edgewise_$name"
+DATABASE_URL=$(local_database_url "edgewise_$name")
+export DATABASE_URL
 npx tsx scripts/migrate.ts >/dev/null
 npx tsx scripts/seed.ts >/dev/null
 
@@ -27,8 +28,11 @@ rm -rf "$UPLOAD_FAKE_DIR" "$MAIL_SINK_FILE"
 [ "${3:-}" = --build ] && ensure_production_build
 [ -f .next/BUILD_ID ] || fail "there is no production build in .next; run 'npx next build' first."
 
+# It holds the database password and the mail sink's token.
+umask 077
+rm -f "$DATA_DIR/instance-$name.env"
 for variable in PGDATA PGPORT DATABASE_URL APP_PORT APP_URL SMTP_HOST SMTP_PORT SMTP_SECURE MAIL_SINK_API_PORT \
-  MAIL_SINK_URL MAIL_SINK_FILE MAIL_FROM UPLOADTHING_TOKEN UPLOAD_FAKE_PORT UPLOAD_FAKE_API_PORT UPLOADTHING_INGEST_URL \
+  MAIL_SINK_URL MAIL_SINK_TOKEN MAIL_SINK_FILE MAIL_FROM UPLOADTHING_TOKEN UPLOAD_FAKE_PORT UPLOAD_FAKE_API_PORT UPLOADTHING_INGEST_URL \
   UPLOADTHING_API_URL UPLOADTHING_IS_DEV UPLOADTHING_LOG_LEVEL UPLOAD_FAKE_DIR; do
   printf '%s=%s\n' "$variable" "${!variable}"
 done >"$DATA_DIR/instance-$name.env"

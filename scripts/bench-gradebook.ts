@@ -42,6 +42,7 @@ import { getCourse, type Course, type Lesson } from "../lessons";
 import { formatInUnit } from "../lib/answers";
 import { gradebookItems } from "../lib/gradebook";
 import { gradeWork, outcomeOf, scoreWork } from "../lib/grading";
+import { devDatabaseUrl } from "./dev-database-url";
 
 const TARGET_MS = 300;
 const LEARNERS = 500;
@@ -86,7 +87,7 @@ function mulberry32(seed: number): () => number {
 }
 
 function scratchUrls(): { admin: string; scratch: string } {
-  const base = new URL(process.env.DATABASE_URL ?? "postgres://postgres@127.0.0.1:54329/edgewise");
+  const base = new URL(process.env.DATABASE_URL ?? devDatabaseUrl());
   const admin = new URL(base);
   admin.pathname = "/postgres";
   const scratch = new URL(base);

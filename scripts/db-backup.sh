@@ -1,12 +1,12 @@
 #!/usr/bin/env bash
 # `npm run db:backup`: a pg_dump custom-format archive of the private cluster's database, written to
 # .data/backups/edgewise-<UTC timestamp>.dump. Restore it with `npm run db:restore -- <file>`.
-# DATABASE_URL chooses the database (default: the dev database on 127.0.0.1:54329);
-# BACKUP_DIR overrides the folder.
+# DATABASE_URL chooses the database (default: the dev database on 127.0.0.1:54329, signed in with
+# .data/pg.password); BACKUP_DIR overrides the folder.
 set -euo pipefail
 source "$(dirname "$0")/lib.sh"
 
-DATABASE_URL="${DATABASE_URL:-postgres://postgres@127.0.0.1:54329/edgewise}"
+DATABASE_URL="${DATABASE_URL:-$(PGDATA="$DATA_DIR/pg" PGPORT=54329 local_database_url edgewise)}"
 BACKUP_DIR="${BACKUP_DIR:-$DATA_DIR/backups}"
 
 # Debian's client must be at least as new as the server, so take the newest one installed.
@@ -23,7 +23,7 @@ partial="$file.partial"
 trap 'rm -f "$partial"' EXIT
 step "Backing up ${DATABASE_URL##*/} to ${file#$ROOT/}"
 "$BIN/pg_dump" --format=custom --no-owner --no-privileges --file="$partial" --dbname="$DATABASE_URL" ||
-  fail "pg_dump could not back up the database at ${DATABASE_URL%%\?*} (is it running? 'npm run dev' or 'bash scripts/postgres.sh up' starts it)."
+  fail "pg_dump could not back up the database at $(redact_url "${DATABASE_URL%%\?*}") (is it running? 'npm run dev' or 'bash scripts/postgres.sh up' starts it)."
 mv "$partial" "$file"
 trap - EXIT
 

@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # `npm run db:restore -- <file> [target-db] [--force]`: pg_restore a backup made by `npm run db:backup`
-# into a database on the same cluster as DATABASE_URL (default: the dev database on 127.0.0.1:54329).
+# into a database on the same cluster as DATABASE_URL (default: the dev database on 127.0.0.1:54329,
+# signed in with .data/pg.password).
 # The target defaults to edgewise_restore_<UTC timestamp>, a fresh database. Restoring over an
 # existing database — the live one included — needs --force, which drops and recreates it.
 set -euo pipefail
@@ -25,7 +26,7 @@ target="${args[1]:-edgewise_restore_$(date -u +%Y%m%dT%H%M%SZ)}"
 [[ "$target" =~ ^[A-Za-z_][A-Za-z0-9_]{0,62}$ ]] ||
   fail "'$target' is not a plain database name (letters, digits and _, not starting with a digit)."
 
-DATABASE_URL="${DATABASE_URL:-postgres://postgres@127.0.0.1:54329/edgewise}"
+DATABASE_URL="${DATABASE_URL:-$(PGDATA="$DATA_DIR/pg" PGPORT=54329 local_database_url edgewise)}"
 live="${DATABASE_URL##*/}"; live="${live%%\?*}"
 server="${DATABASE_URL%/*}"
 admin_url="$server/postgres"
@@ -38,7 +39,7 @@ BIN=$(ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -n 1)
 psql_admin() { PGOPTIONS="-c client_min_messages=warning" "$BIN/psql" -X -q -v ON_ERROR_STOP=1 --dbname="$admin_url" "$@"; }
 
 exists=$(psql_admin -tAc "select 1 from pg_database where datname = '$target'") ||
-  fail "cannot reach the database server at $server (is it running? 'npm run dev' or 'bash scripts/postgres.sh up' starts it)."
+  fail "cannot reach the database server at $(redact_url "$server") (is it running? 'npm run dev' or 'bash scripts/postgres.sh up' starts it)."
 if [ "$exists" = 1 ]; then
   if [ "$force" != 1 ]; then
     what="database $target already exists"
@@ -54,4 +55,4 @@ psql_admin -c "create database \"$target\""
 step "Restoring ${file#$ROOT/} into $target"
 "$BIN/pg_restore" --no-owner --no-privileges --exit-on-error --single-transaction --dbname="$server/$target" "$file" ||
   fail "pg_restore failed; $target was left empty or partly restored — drop it before trying again."
-echo "Restored into $target ($server/$target)"
+echo "Restored into $target ($(redact_url "$server/$target"))"

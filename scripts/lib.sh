@@ -31,6 +31,27 @@ apt_install_package() {
   } || fail "apt-get could not install $package (see $DATA_DIR/apt-$package.log)."
 }
 
+# local_secret FILE: prints the secret kept in FILE, making a random one (readable by this user only)
+# the first time. Local services' passwords and tokens live in the git-ignored data folder this way.
+local_secret() {
+  local file="$1"
+  if [ ! -s "$file" ]; then
+    mkdir -p "$(dirname "$file")"
+    (umask 077 && od -An -tx1 -N24 /dev/urandom | tr -d ' \n' >"$file.partial" && mv "$file.partial" "$file")
+  fi
+  cat "$file"
+}
+
+# local_database_url DB: the URL of database DB on this checkout's cluster ($PGDATA on $PGPORT),
+# signed in with the password scripts/postgres.sh keeps beside the cluster.
+local_database_url() {
+  [ -s "$PGDATA.password" ] || fail "${PGDATA#$ROOT/}.password is missing: 'bash scripts/postgres.sh up' makes it."
+  echo "postgres://postgres:$(cat "$PGDATA.password")@127.0.0.1:$PGPORT/$1"
+}
+
+# A database URL as it may be printed: without its password.
+redact_url() { sed -E 's#(://[^:/@]+):[^@/]*@#\1@#' <<<"$1"; }
+
 port_in_use() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 
 require_free_port() {

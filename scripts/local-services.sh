@@ -3,11 +3,14 @@
 # Profiles: dev (ports 540xx) and test (ports 550xx) so a test run never touches a running demo.
 
 # The environment the app and the mail sink share, for a sink on ports BASE+25 (SMTP) and BASE+26
-# (messages) keeping what it catches in .data/mail-PROFILE.jsonl.
+# (messages, read with the token in .data/mail-PROFILE.token) keeping what it catches in
+# .data/mail-PROFILE.jsonl.
 mail_sink_env() {
   local profile="$1" base="$2"
   export SMTP_HOST=127.0.0.1 SMTP_PORT=$((base + 25)) SMTP_SECURE=false
   export MAIL_SINK_API_PORT=$((base + 26)) MAIL_SINK_URL="http://127.0.0.1:$((base + 26))" MAIL_SINK_FILE="$DATA_DIR/mail-$profile.jsonl"
+  MAIL_SINK_TOKEN=$(local_secret "$DATA_DIR/mail-$profile.token")
+  export MAIL_SINK_TOKEN
   export MAIL_FROM="${MAIL_FROM:-Edgewise <no-reply@edgewise.example.test>}"
 }
 

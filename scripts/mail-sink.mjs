@@ -1,7 +1,10 @@
 // Local SMTP sink for development and tests: accepts every message on 127.0.0.1 and keeps it
 // (in MAIL_SINK_FILE, one JSON message a line, so a restart of `npm start` loses none; in memory
 // when unset), and lists what it caught over a small JSON API so the dev mail page and the tests
-// can read invitation and reset links. Never used in production.
+// can read invitation and reset links. The messages hold sign-in links, so the API answers only
+// requests bearing MAIL_SINK_TOKEN (the scripts keep it in .data/mail-<profile>.token). Never
+// used in production.
+import { timingSafeEqual } from "node:crypto";
 import { appendFileSync, existsSync, readFileSync, writeFileSync } from "node:fs";
 import http from "node:http";
 import { SMTPServer } from "smtp-server";
@@ -10,6 +13,17 @@ import { simpleParser } from "mailparser";
 const smtpPort = Number(process.env.SMTP_PORT ?? 54025);
 const apiPort = Number(process.env.MAIL_SINK_API_PORT ?? 54026);
 const keptIn = process.env.MAIL_SINK_FILE || null;
+const token = process.env.MAIL_SINK_TOKEN ?? "";
+if (token.length < 16) {
+  console.error("Mail sink: MAIL_SINK_TOKEN must be set (16 characters or more); the scripts keep one in .data/mail-<profile>.token.");
+  process.exit(1);
+}
+const expectedAuthorization = Buffer.from(`Bearer ${token}`);
+
+function isAuthorized(req) {
+  const given = Buffer.from(req.headers.authorization ?? "");
+  return given.length === expectedAuthorization.length && timingSafeEqual(given, expectedAuthorization);
+}
 
 function keptMessages() {
   if (!keptIn || !existsSync(keptIn)) return [];
@@ -40,10 +54,14 @@ const smtp = new SMTPServer({
   onData(stream, _session, callback) {
     simpleParser(stream)
       .then((mail) => {
+        const to = mail.to ? [mail.to].flat() : [];
         keep({
           id: nextId++,
           from: mail.from?.text ?? "",
-          to: mail.to ? [mail.to].flat().map((a) => a.text).join(", ") : "",
+          to: to.map((a) => a.text).join(", "),
+          recipients: to.flatMap((a) => a.value.map((v) => v.address?.toLowerCase() ?? "")).filter(Boolean),
+          // The school the app sent the message for (lib/mail/transport.ts), which the caught-mail page filters on.
+          school: String(mail.headers.get("x-edgewise-school") ?? ""),
           subject: mail.subject ?? "",
           text: mail.text ?? "",
           html: typeof mail.html === "string" ? mail.html : "",
@@ -61,6 +79,10 @@ const api = http.createServer((req, res) => {
     res.writeHead(404).end();
     return;
   }
+  if (!isAuthorized(req)) {
+    res.writeHead(401, { "www-authenticate": "Bearer", "content-type": "text/plain" }).end("This mail sink's API needs its token: Authorization: Bearer <MAIL_SINK_TOKEN>.\n");
+    return;
+  }
   if (req.method === "DELETE") {
     messages.length = 0;
     if (keptIn) writeFileSync(keptIn, "");
@@ -68,7 +90,8 @@ const api = http.createServer((req, res) => {
     return;
   }
   const to = url.searchParams.get("to")?.toLowerCase();
-  const list = to ? messages.filter((m) => m.to.toLowerCase().includes(to)) : messages;
+  const school = url.searchParams.get("school");
+  const list = messages.filter((m) => (!to || m.to.toLowerCase().includes(to)) && (school === null || m.school === school));
   res.writeHead(200, { "content-type": "application/json" }).end(JSON.stringify([...list].reverse()));
 });
 

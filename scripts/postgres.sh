@@ -1,6 +1,9 @@
 #!/usr/bin/env bash
 # Provisions the private PostgreSQL cluster: installs Debian's server if absent, creates the
 # cluster under .data/pg, starts it on 127.0.0.1:$PGPORT and creates the named databases.
+# Every connection signs in as postgres with the password kept in $PGDATA.password (.data/pg.password
+# for the dev cluster), made at the cluster's creation; a cluster made before passwords were
+# required gets one on its next start, its data untouched.
 # Usage: scripts/postgres.sh up [DB…] | recreate DB | stop
 set -euo pipefail
 source "$(dirname "$0")/lib.sh"
@@ -8,6 +11,7 @@ source "$(dirname "$0")/lib.sh"
 PGPORT="${PGPORT:-54329}"
 PGDATA="${PGDATA:-$DATA_DIR/pg}"
 PGLOG="$PGDATA.log"
+PASSWORD_FILE="$PGDATA.password"
 mkdir -p "$DATA_DIR"
 
 # The newest installed server's programs. The client package alone also fills
@@ -23,6 +27,29 @@ run_as_postgres() {
 }
 
 is_ready() { "$BIN/pg_isready" -q -U postgres -h 127.0.0.1 -p "$PGPORT"; }
+
+# The first line of the pg_hba.conf this script writes; a cluster without it still trusts every
+# loopback connection, as clusters made by earlier versions of this script did.
+hba_marker="# Written by scripts/postgres.sh: every connection signs in with the password kept beside the cluster (its .password file)."
+
+requires_password() { head -n 1 "$PGDATA/pg_hba.conf" 2>/dev/null | grep -qxF "$hba_marker"; }
+
+# Gives the postgres role the password kept in $PASSWORD_FILE (made now if missing) and lets in
+# only connections that prove it (SCRAM). The server must be stopped: the role's password is set in
+# single-user mode, which needs no connection and so works whatever pg_hba.conf said before.
+require_password() {
+  local password
+  password=$(local_secret "$PASSWORD_FILE")
+  echo "alter role postgres password '$password';" |
+    run_as_postgres "$BIN/postgres" --single -D "$PGDATA" -c exit_on_error=on -c password_encryption=scram-sha-256 postgres >/dev/null 2>>"$PGLOG" ||
+    fail "could not set the database password (see ${PGLOG#$ROOT/})."
+  local hba="$PGDATA/pg_hba.conf"
+  printf '%s\n%s\n%s\n' "$hba_marker" \
+    "host all all 127.0.0.1/32 scram-sha-256" \
+    "host all all ::1/128 scram-sha-256" >"$hba.new"
+  [ "$(id -u)" -eq 0 ] && chown postgres:postgres "$hba.new"
+  mv "$hba.new" "$hba"
+}
 
 up() {
   [ -n "$(pg_bin)" ] || apt_install_package postgresql
@@ -49,10 +76,21 @@ ${PG_EXTRA_CONF:-}
 CONF
   fi
 
+  touch "$PGLOG"; [ "$(id -u)" -eq 0 ] && chown postgres:postgres "$PGLOG"
+  if ! requires_password; then
+    # A cluster left running by an earlier version of this script is stopped to be given its password.
+    if [ -f "$PGDATA/postmaster.pid" ]; then run_as_postgres "$BIN/pg_ctl" -D "$PGDATA" -m fast -w stop >/dev/null 2>&1 || true; fi
+    step "Giving the database cluster in ${PGDATA#$ROOT/} a password (kept in ${PASSWORD_FILE#$ROOT/})"
+    require_password
+  fi
+  [ -s "$PASSWORD_FILE" ] ||
+    fail "${PASSWORD_FILE#$ROOT/} is missing, so nothing can sign in to the cluster in ${PGDATA#$ROOT/}. Stop the cluster, delete the first line of its pg_hba.conf, and run this again to set a new password."
+  export PGPASSWORD
+  PGPASSWORD=$(cat "$PASSWORD_FILE")
+
   if ! is_ready; then
     require_free_port "$PGPORT" "the database needs it; set PGPORT to use another"
     step "Starting PostgreSQL on 127.0.0.1:$PGPORT"
-    touch "$PGLOG"; [ "$(id -u)" -eq 0 ] && chown postgres:postgres "$PGLOG"
     run_as_postgres "$BIN/pg_ctl" -D "$PGDATA" -l "$PGLOG" -o "-p $PGPORT" -w -t 60 start >/dev/null ||
       fail "PostgreSQL did not start (see $PGLOG)."
   fi

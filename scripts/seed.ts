@@ -19,7 +19,11 @@ async function ensureSchool(db: Database): Promise<string> {
 }
 
 async function ensureUser(db: Database, schoolId: string, account: Account, passwordHash: () => Promise<string>) {
-  const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, account.email));
+  // The demo school's own account: another school may have enrolled the same address.
+  const [existing] = await db
+    .select({ id: users.id })
+    .from(users)
+    .where(and(eq(users.schoolId, schoolId), eq(users.email, account.email)));
   if (existing) return { id: existing.id, created: false };
   const [created] = await db
     .insert(users)

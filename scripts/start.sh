@@ -8,8 +8,7 @@ cd "$ROOT"
 MODE=production
 [ "${1:-}" = "--dev" ] && MODE=development
 PORT="${PORT:-3000}"
-export PGPORT="${PGPORT:-54329}"
-export DATABASE_URL="${DATABASE_URL:-postgres://postgres@127.0.0.1:$PGPORT/edgewise}"
+export PGPORT="${PGPORT:-54329}" PGDATA="${PGDATA:-$DATA_DIR/pg}"
 export APP_URL="${APP_URL:-http://127.0.0.1:$PORT}"
 mkdir -p "$DATA_DIR"
 
@@ -34,6 +33,8 @@ pg_was_running=0
 if command -v pg_isready >/dev/null && pg_isready -q -U postgres -h 127.0.0.1 -p "$PGPORT" 2>/dev/null; then pg_was_running=1; fi
 bash scripts/postgres.sh up edgewise
 [ "$pg_was_running" = 0 ] && started_postgres=1
+DATABASE_URL="${DATABASE_URL:-$(local_database_url edgewise)}"
+export DATABASE_URL
 
 step "Applying database migrations"
 npx tsx scripts/migrate.ts

@@ -11,7 +11,6 @@ mkdir -p "$DATA_DIR" test-results
 offset="${TEST_PORT_OFFSET:-0}"
 export PGPORT=$((54339 + offset)) PGDATA="$DATA_DIR/pg-test" PG_EXTRA_CONF="fsync = off
 synchronous_commit = off"
-export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/edgewise_test"
 export APP_PORT=$((3100 + offset))
 export APP_URL="http://127.0.0.1:$APP_PORT" E2E_BASE_URL="http://127.0.0.1:$APP_PORT"
 unset SMTP_HOST UPLOADTHING_TOKEN
@@ -30,9 +29,9 @@ set -e
 apt_install chromium /usr/bin/chromium
 apt_install ngspice /usr/bin/ngspice
 ensure_node_modules
-bash scripts/postgres.sh up
-
 bash scripts/postgres.sh recreate edgewise_test
+DATABASE_URL=$(local_database_url edgewise_test)
+export DATABASE_URL
 npx tsx scripts/migrate.ts
 npx tsx scripts/seed.ts >/dev/null
 

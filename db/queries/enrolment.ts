@@ -1,14 +1,14 @@
 import { and, count, desc, eq, inArray, isNull, ne, sql } from "drizzle-orm";
 import { db } from "../client";
 import type { Transaction } from "../connection";
-import { cohortMemberships, cohorts, invitations, sessions, users, type Invitation, type Role } from "../schema";
+import { cohortMemberships, cohorts, invitations, sessions, unsetPasswordHash, users, type Invitation, type Role } from "../schema";
 import { isOpenInvitation, isUsableInvitation } from "./invitation-conditions";
 import { awaitingFirstSend } from "./invitation-mail";
-import { unsetPasswordHash } from "./users";
 
 // Learners in cohorts as the school admin manages them: enrolment (one or thousands at once),
 // invitation links and whether an account may sign in. Every statement is scoped to the admin's
-// school; ids from another school match nothing.
+// school; ids from another school match nothing, and accounts of another school are never looked
+// at, so no answer tells an admin whether an address has an account elsewhere.
 
 // 1,000 rows of at most 8 columns stay far below PostgreSQL's 65,535 bind parameters per statement;
 // lookups by address take one parameter per address, and a roster has at most 10,000.
@@ -20,28 +20,27 @@ function inBatches<T>(items: readonly T[]): T[][] {
   return batches;
 }
 
-export type RosterConflicts = { inCohort: string[]; inSchool: string[]; elsewhere: string[]; invited: string[] };
+export type RosterConflicts = { inCohort: string[]; inSchool: string[]; invited: string[] };
 
-/** Which of `emails` the database already knows, and where, in two queries whatever the count. */
+/** Which of `emails` the school already knows, and how, in two queries whatever the count. */
 export async function findRosterConflicts(params: {
   schoolId: string;
   cohortId: string;
   emails: string[];
   now: Date;
 }): Promise<RosterConflicts> {
-  const conflicts: RosterConflicts = { inCohort: [], inSchool: [], elsewhere: [], invited: [] };
+  const conflicts: RosterConflicts = { inCohort: [], inSchool: [], invited: [] };
   if (params.emails.length === 0) return conflicts;
   const [accounts, invited] = await Promise.all([
     db
       .select({
         email: users.email,
-        sameSchool: sql<boolean>`${users.schoolId} = ${params.schoolId}`,
         inCohort: sql<boolean>`exists (
           select 1 from ${cohortMemberships} m where m.user_id = ${users.id} and m.cohort_id = ${params.cohortId}
         )`,
       })
       .from(users)
-      .where(inArray(users.email, params.emails)),
+      .where(and(eq(users.schoolId, params.schoolId), inArray(users.email, params.emails))),
     db
       .selectDistinct({ email: invitations.email })
       .from(invitations)
@@ -53,11 +52,7 @@ export async function findRosterConflicts(params: {
         ),
       ),
   ]);
-  for (const account of accounts) {
-    if (account.sameSchool && account.inCohort) conflicts.inCohort.push(account.email);
-    else if (account.sameSchool) conflicts.inSchool.push(account.email);
-    else conflicts.elsewhere.push(account.email);
-  }
+  for (const account of accounts) (account.inCohort ? conflicts.inCohort : conflicts.inSchool).push(account.email);
   conflicts.invited = invited.map((row) => row.email);
   return conflicts;
 }
@@ -67,7 +62,7 @@ export type NewEnrolment = { name: string; email: string; tokenHash: string };
 /**
  * Enrols learners in one transaction: an account that cannot sign in until its invitation is
  * accepted, the cohort membership, and the invitation. A batch of statements per thousand people;
- * any failure (an address taken meanwhile, say) leaves nothing behind. Returns each address's
+ * any failure (an address the school enrolled meanwhile, say) leaves nothing behind. Returns each address's
  * invitation id; the invitations wait for their e-mail (see ./invitation-mail).
  */
 export async function insertEnrolments(params: {
@@ -198,7 +193,11 @@ export async function listCohortRoster(params: {
         revokedAt: invitations.revokedAt,
         createdAt: invitations.createdAt,
         mailPendingSince: invitations.mailPendingSince,
-        hasAccount: sql<boolean>`exists (select 1 from ${users} u where u.email = ${invitations.email})`,
+        // Qualified by hand: in a select list without joins the columns would be printed bare, and
+        // inside the subquery a bare name means the users table's own column.
+        hasAccount: sql<boolean>`exists (
+          select 1 from ${users} u where u.email = ${invitations}.email and u.school_id = ${invitations}.school_id
+        )`,
       })
       .from(invitations)
       .where(
@@ -221,7 +220,8 @@ export async function findInvitationInSchool(params: { schoolId: string; invitat
       invitation: invitations,
       cohortName: cohorts.name,
       accountJoined: sql<boolean>`exists (
-        select 1 from ${users} u where u.email = ${invitations.email} and u.password_hash <> ${unsetPasswordHash}
+        select 1 from ${users} u
+        where u.email = ${invitations}.email and u.school_id = ${invitations}.school_id and u.password_hash <> ${unsetPasswordHash}
       )`,
     })
     .from(invitations)
@@ -307,7 +307,10 @@ export async function listWaitingInvitations(params: {
       and(
         isNull(latest.usedAt),
         isNull(latest.revokedAt),
-        sql`not exists (select 1 from ${users} u where u.email = ${latest.email} and u.password_hash <> ${unsetPasswordHash})`,
+        sql`not exists (
+          select 1 from ${users} u
+          where u.email = ${latest.email} and u.school_id = ${params.schoolId} and u.password_hash <> ${unsetPasswordHash}
+        )`,
       ),
     );
 }

@@ -39,6 +39,7 @@ export async function deferInvitationMail(params: { invitationIds: string[]; now
 export type DueInvitationMail = {
   invitationId: string;
   email: string;
+  schoolId: string;
   schoolName: string;
   cohortName: string | null;
   inviterName: string | null;
@@ -64,6 +65,7 @@ export async function claimDueInvitationMail(params: {
       .select({
         invitationId: invitations.id,
         email: invitations.email,
+        schoolId: invitations.schoolId,
         schoolName: schools.name,
         cohortName: cohorts.name,
         inviterName: users.name,

@@ -1,9 +1,10 @@
-import { and, desc, eq } from "drizzle-orm";
+import { and, desc, eq, or } from "drizzle-orm";
 import { db } from "../client";
-import { cohortMemberships, cohorts, invitations, schools, users, type Invitation, type Role } from "../schema";
+import { cohortMemberships, cohorts, invitations, schools, unsetPasswordHash, users, type Invitation, type Role } from "../schema";
+import { isUniqueViolation } from "./admin-cohorts";
 import { isOpenInvitation, isUsableInvitation } from "./invitation-conditions";
 import { awaitingFirstSend } from "./invitation-mail";
-import { unsetPasswordHash } from "./users";
+import { hasOwnPassword } from "./users";
 
 /**
  * Issues an invitation and revokes any earlier pending one for the same address, so one link is
@@ -67,7 +68,8 @@ export type AcceptInvitationResult =
 /**
  * Creates the account (or completes the one enrolment made), adds it to the invited cohort and
  * spends the invitation in one transaction; the row lock makes a double submit of the same link
- * create one account.
+ * create one account. An address that already signs in to an account, at this school or another,
+ * gets no second one: its owner is told to sign in.
  */
 export async function acceptInvitation(params: {
   tokenHash: string;
@@ -75,6 +77,16 @@ export async function acceptInvitation(params: {
   passwordHash: string;
   now: Date;
 }): Promise<AcceptInvitationResult> {
+  try {
+    return await acceptInTransaction(params);
+  } catch (error) {
+    // Another school's invitation to the same address was accepted at the same moment.
+    if (isUniqueViolation(error, "users_sign_in_email_unique")) return { ok: false, reason: "already-registered" };
+    throw error;
+  }
+}
+
+function acceptInTransaction(params: { tokenHash: string; name: string; passwordHash: string; now: Date }): Promise<AcceptInvitationResult> {
   return db.transaction(async (tx) => {
     const [invitation] = await tx
       .select()
@@ -85,15 +97,15 @@ export async function acceptInvitation(params: {
     const state = describeInvitationState(invitation, params.now);
     if (state !== "usable" || !invitation) return { ok: false, reason: state === "usable" ? "unknown" : state };
 
-    const [existing] = await tx
+    // The address's account at the inviting school (enrolment may have made one, waiting for
+    // this link) and the one it signs in with, wherever that is.
+    const accounts = await tx
       .select({ id: users.id, schoolId: users.schoolId, passwordHash: users.passwordHash })
       .from(users)
-      .where(eq(users.email, invitation.email))
-      .for("update")
-      .limit(1);
-    // An enrolled learner already has an account waiting for them; anyone else is registered.
-    const awaiting = existing?.schoolId === invitation.schoolId && existing.passwordHash === unsetPasswordHash;
-    if (existing && !awaiting) return { ok: false, reason: "already-registered" };
+      .where(and(eq(users.email, invitation.email), or(eq(users.schoolId, invitation.schoolId), hasOwnPassword())))
+      .for("update");
+    if (accounts.some((account) => account.passwordHash !== unsetPasswordHash)) return { ok: false, reason: "already-registered" };
+    const existing = accounts.find((account) => account.schoolId === invitation.schoolId);
 
     const [user] = existing
       ? await tx

@@ -7,7 +7,7 @@ import {
   type InvitationState,
 } from "@/db/queries/invitations";
 import { findSchoolById } from "@/db/queries/schools";
-import { findUserByEmail } from "@/db/queries/users";
+import { findSchoolUserByEmail } from "@/db/queries/users";
 import type { Role } from "@/db/schema";
 import { recordLetterOutcomes } from "@/lib/enrolment/letter-outcomes";
 import { readAppEnv } from "@/lib/env";
@@ -22,7 +22,11 @@ export type IssueInvitationResult =
   | { ok: true; invitationId: string; expiresAt: Date }
   | { ok: false; reason: "already-registered" | "unknown-cohort" };
 
-/** Creates an invitation and e-mails its link. The token itself is never stored. */
+/**
+ * Creates an invitation and e-mails its link. The token itself is never stored. Only the school's
+ * own accounts are looked at: an address with an account at another school is invited like any
+ * new one (its owner, on opening the link, is told to sign in), so the answer reveals nothing.
+ */
 export async function issueInvitation(params: {
   schoolId: string;
   email: string;
@@ -32,7 +36,7 @@ export async function issueInvitation(params: {
   now?: Date;
 }): Promise<IssueInvitationResult> {
   const now = params.now ?? new Date();
-  if (await findUserByEmail({ email: params.email })) return { ok: false, reason: "already-registered" };
+  if (await findSchoolUserByEmail({ schoolId: params.schoolId, email: params.email })) return { ok: false, reason: "already-registered" };
   const cohort = params.cohortId ? await findCohortInSchool({ cohortId: params.cohortId, schoolId: params.schoolId }) : null;
   if (params.cohortId && !cohort) return { ok: false, reason: "unknown-cohort" };
   const school = await findSchoolById({ schoolId: params.schoolId });
@@ -51,6 +55,7 @@ export async function issueInvitation(params: {
   });
   try {
     await sendInvitationEmail({
+      schoolId: params.schoolId,
       to: params.email,
       schoolName: school.name,
       cohortName: cohort?.name ?? null,

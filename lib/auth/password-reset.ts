@@ -38,6 +38,7 @@ export async function requestPasswordReset(params: { email: string; now?: Date }
   const expiresAt = new Date(now.getTime() + passwordResetLifetimeMinutes * 60_000);
   await createPasswordReset({ userId: user.id, tokenHash: hashToken(token), expiresAt });
   await sendPasswordResetEmail({
+    schoolId: user.schoolId,
     to: user.email,
     name: user.name,
     resetUrl: `${readAppEnv().APP_URL}/reset-password/${token}`,

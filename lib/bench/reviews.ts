@@ -85,6 +85,8 @@ export async function reviewBenchWork(params: {
   if (decision === "accept") await checkCertificateAfterCourseWork({ userId: recorded.submission.learnerId });
 
   const emailed = await sendReviewDoneEmail({
+    // The work was found in one of the reviewer's cohorts, so the learner is of the reviewer's school.
+    schoolId: reviewer.schoolId,
     to: recorded.submission.learnerEmail,
     learnerName: recorded.submission.learnerName,
     exerciseTitle: entry.exercise.title,

@@ -35,6 +35,7 @@ export async function issueCertificateIfComplete(params: { userId: string }): Pr
     const { certificate } = result;
     const appUrl = readAppEnv().APP_URL;
     await sendCertificateReadyEmail({
+      schoolId: certificate.schoolId,
       to: result.learnerEmail,
       learnerName: certificate.learnerName,
       courseTitle: certificate.courseTitle,

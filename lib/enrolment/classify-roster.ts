@@ -8,11 +8,13 @@ export type RowStatus = "valid" | "duplicate" | "invalid";
 
 export type ClassifiedRow = { row: number; name: string; email: string; status: RowStatus; reason: string | null };
 
-/** Addresses the school already knows, as found in the database for the file's addresses. */
+/**
+ * Addresses the school already knows, as found in the database for the file's addresses. Other
+ * schools' accounts are not among them: an address is new to this school or known to it.
+ */
 export type RosterContext = {
   inCohort: ReadonlySet<string>;
   inSchool: ReadonlySet<string>;
-  elsewhere: ReadonlySet<string>;
   invited: ReadonlySet<string>;
 };
 
@@ -21,14 +23,12 @@ export type RosterCounts = Record<RowStatus, number> & { total: number };
 export const emptyRosterContext: RosterContext = {
   inCohort: new Set(),
   inSchool: new Set(),
-  elsewhere: new Set(),
   invited: new Set(),
 };
 
 function existingReason(email: string, context: RosterContext): string | null {
   if (context.inCohort.has(email)) return "Already in this cohort.";
   if (context.inSchool.has(email)) return "Already has an account at this school. Enrol them one by one to add them to this cohort.";
-  if (context.elsewhere.has(email)) return "This address already has an Edgewise account.";
   if (context.invited.has(email)) return "Already has an open invitation to this school.";
   return null;
 }

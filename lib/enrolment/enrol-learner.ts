@@ -9,11 +9,13 @@ import { sendInvitationLetters, type LetterOutcome } from "./send-invitations";
 export type EnrolLearnerResult =
   | { ok: true; outcome: "invited"; letters: LetterOutcome }
   | { ok: true; outcome: "added-existing" }
-  | { ok: false; reason: "unknown-cohort" | "already-in-cohort" | "not-a-learner" | "address-taken" | "already-invited" };
+  | { ok: false; reason: "unknown-cohort" | "already-in-cohort" | "not-a-learner" | "enrolled-meanwhile" | "already-invited" };
 
 /**
- * Enrols one person: a learner of the school joins the cohort straight away; a new address gets
- * an account waiting for them, the membership and an e-mailed invitation.
+ * Enrols one person: a learner of the school joins the cohort straight away; an address new to
+ * the school gets an account waiting for them, the membership and an e-mailed invitation, whether
+ * or not it has an account at another school (its owner then cannot accept, and is told to sign
+ * in), so that the answer never tells one school about another's people.
  */
 export async function enrolLearner(params: {
   actor: Actor;
@@ -35,7 +37,6 @@ export async function enrolLearner(params: {
     return { ok: true, outcome: "added-existing" };
   }
   const conflicts = await findRosterConflicts({ schoolId, cohortId: cohort.id, emails: [params.email], now });
-  if (conflicts.elsewhere.length > 0) return { ok: false, reason: "address-taken" };
   if (conflicts.invited.length > 0) return { ok: false, reason: "already-invited" };
 
   const { token, tokenHash } = issueToken();
@@ -50,12 +51,13 @@ export async function enrolLearner(params: {
       people: [{ name: params.name, email: params.email, tokenHash }],
     }));
   } catch (error) {
-    // Someone registered or enrolled the address between the checks above and this insert.
-    if (isUniqueViolation(error, "users_email_unique")) return { ok: false, reason: "address-taken" };
+    // Someone at the school enrolled the address between the checks above and this insert.
+    if (isUniqueViolation(error, "users_school_email_unique")) return { ok: false, reason: "enrolled-meanwhile" };
     throw error;
   }
   const school = await findSchoolById({ schoolId });
   const letters = await sendInvitationLetters({
+    schoolId,
     schoolName: school?.name ?? "your school",
     inviterName: params.actor.name,
     letters: [{ invitationId: invitationIds.get(params.email)!, to: params.email, token, cohortName: cohort.name, expiresAt }],

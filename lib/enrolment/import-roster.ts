@@ -33,7 +33,6 @@ async function classifyFile(params: { actor: Actor; cohortId: string; file: unkn
   const rows = classifyRoster(parsed.entries, {
     inCohort: new Set(conflicts.inCohort),
     inSchool: new Set(conflicts.inSchool),
-    elsewhere: new Set(conflicts.elsewhere),
     invited: new Set(conflicts.invited),
   });
   const preview: RosterPreview = { fileName: read.fileName, rows, counts: countRoster(rows) };
@@ -86,7 +85,7 @@ export async function importRoster(params: {
       people: people.map(({ name, email, tokenHash }) => ({ name, email, tokenHash })),
     }));
   } catch (error) {
-    if (!isUniqueViolation(error, "users_email_unique")) throw error;
+    if (!isUniqueViolation(error, "users_school_email_unique")) throw error;
     const again = await classifyFile({ ...params, now });
     return {
       ok: false,
@@ -99,6 +98,7 @@ export async function importRoster(params: {
   const school = await findSchoolById({ schoolId: params.actor.schoolId });
   const mailStarted = performance.now();
   const letters = await sendInvitationLetters({
+    schoolId: params.actor.schoolId,
     schoolName: school?.name ?? "your school",
     inviterName: params.actor.name,
     letters: cohortLetters(people, invitationIds, { cohortName: cohort.name, expiresAt }),

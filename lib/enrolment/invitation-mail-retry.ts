@@ -15,12 +15,13 @@ export async function sendDueInvitationMail(now = new Date()): Promise<LetterOut
   const due = await claimDueInvitationMail({ now, limit: batchSize, leaseMs: firstSendLeaseMs, expiresAt: invitationExpiry(now), issueToken });
   const bySender = new Map<string, typeof due>();
   for (const letter of due) {
-    const sender = JSON.stringify([letter.schoolName, letter.inviterName]);
+    const sender = JSON.stringify([letter.schoolId, letter.inviterName]);
     bySender.set(sender, [...(bySender.get(sender) ?? []), letter]);
   }
   const total: LetterOutcome = { sent: 0, unsent: 0 };
   for (const letters of bySender.values()) {
     const outcome = await sendInvitationLetters({
+      schoolId: letters[0]!.schoolId,
       schoolName: letters[0]!.schoolName,
       inviterName: letters[0]!.inviterName,
       letters: letters.map((letter) => ({ ...letter, to: letter.email })),

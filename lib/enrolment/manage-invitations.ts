@@ -28,6 +28,7 @@ export async function resendInvitation(params: { actor: Actor; invitationId: str
     items: [{ email: invitation.email, role: invitation.role, cohortId: invitation.cohortId, tokenHash }],
   });
   const letters = await sendInvitationLetters({
+    schoolId: params.actor.schoolId,
     schoolName: await schoolName(params.actor.schoolId),
     inviterName: params.actor.name,
     letters: [{ invitationId: invitationIds.get(invitation.email)!, to: invitation.email, token, cohortName: invitation.cohortName, expiresAt }],
@@ -56,6 +57,7 @@ export async function resendWaitingInvitations(params: { actor: Actor; cohortId:
     items: items.map(({ token: _token, ...item }) => item),
   });
   const letters = await sendInvitationLetters({
+    schoolId: params.actor.schoolId,
     schoolName: await schoolName(params.actor.schoolId),
     inviterName: params.actor.name,
     letters: cohortLetters(items, invitationIds, { cohortName: cohort.name, expiresAt }),

@@ -44,6 +44,7 @@ export function cohortLetters(
 }
 
 export async function sendInvitationLetters(params: {
+  schoolId: string;
   schoolName: string;
   inviterName: string | null;
   letters: InvitationLetter[];
@@ -56,6 +57,7 @@ export async function sendInvitationLetters(params: {
       const letter = params.letters[next++]!;
       try {
         await sendInvitationEmail({
+          schoolId: params.schoolId,
           to: letter.to,
           schoolName: params.schoolName,
           cohortName: letter.cohortName,

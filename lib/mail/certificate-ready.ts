@@ -1,5 +1,5 @@
 import { escapeHtml, type ComposedMail } from "./compose";
-import { getTransport, mailSender } from "./transport";
+import { deliverMail } from "./transport";
 
 export type CertificateReadyMail = {
   learnerName: string;
@@ -38,7 +38,7 @@ export function composeCertificateReadyMail(params: CertificateReadyMail): Compo
   return { subject: `Your certificate for ${params.courseTitle}`, text, html };
 }
 
-export async function sendCertificateReadyEmail(params: CertificateReadyMail & { to: string }): Promise<void> {
-  const { to, ...content } = params;
-  await getTransport().sendMail({ from: mailSender(), to, ...composeCertificateReadyMail(content) });
+export async function sendCertificateReadyEmail(params: CertificateReadyMail & { schoolId: string; to: string }): Promise<void> {
+  const { schoolId, to, ...content } = params;
+  await deliverMail({ schoolId, to, mail: composeCertificateReadyMail(content) });
 }

@@ -1,5 +1,5 @@
 import { escapeHtml, layoutHtml, type ComposedMail } from "./compose";
-import { getTransport, mailSender } from "./transport";
+import { deliverMail } from "./transport";
 
 export type ReviewDoneMail = {
   learnerName: string;
@@ -41,7 +41,7 @@ export function composeReviewDoneMail(params: ReviewDoneMail): ComposedMail {
   return { subject, text, html };
 }
 
-export async function sendReviewDoneEmail(params: ReviewDoneMail & { to: string }): Promise<void> {
-  const { to, ...content } = params;
-  await getTransport().sendMail({ from: mailSender(), to, ...composeReviewDoneMail(content) });
+export async function sendReviewDoneEmail(params: ReviewDoneMail & { schoolId: string; to: string }): Promise<void> {
+  const { schoolId, to, ...content } = params;
+  await deliverMail({ schoolId, to, mail: composeReviewDoneMail(content) });
 }

@@ -1,7 +1,8 @@
 import { composeInvitationMail, composePasswordResetMail } from "./compose";
-import { getTransport, mailSender } from "./transport";
+import { deliverMail } from "./transport";
 
 export async function sendInvitationEmail(params: {
+  schoolId: string;
   to: string;
   schoolName: string;
   cohortName: string | null;
@@ -9,16 +10,17 @@ export async function sendInvitationEmail(params: {
   acceptUrl: string;
   expiresAt: Date;
 }): Promise<void> {
-  const { to, ...content } = params;
-  await getTransport().sendMail({ from: mailSender(), to, ...composeInvitationMail(content) });
+  const { schoolId, to, ...content } = params;
+  await deliverMail({ schoolId, to, mail: composeInvitationMail(content) });
 }
 
 export async function sendPasswordResetEmail(params: {
+  schoolId: string;
   to: string;
   name: string;
   resetUrl: string;
   expiresAt: Date;
 }): Promise<void> {
-  const { to, ...content } = params;
-  await getTransport().sendMail({ from: mailSender(), to, ...composePasswordResetMail(content) });
+  const { schoolId, to, ...content } = params;
+  await deliverMail({ schoolId, to, mail: composePasswordResetMail(content) });
 }

@@ -1,5 +1,6 @@
 import nodemailer, { type Transporter } from "nodemailer";
 import { readMailEnv } from "@/lib/env";
+import type { ComposedMail } from "./compose";
 
 let transporter: Transporter | undefined;
 
@@ -19,8 +20,20 @@ export function getTransport(): Transporter {
   return transporter;
 }
 
-export function mailSender(): string {
-  return readMailEnv().MAIL_FROM;
+/**
+ * Names the school a message is sent for. The local mail sink keeps it, and its caught-mail page
+ * shows a school's admin only their own school's mail (lib/mail/sink.ts).
+ */
+export const schoolHeader = "X-Edgewise-School";
+
+/** Sends one composed message to one person, on behalf of their school. */
+export async function deliverMail(params: { schoolId: string; to: string; mail: ComposedMail }): Promise<void> {
+  await getTransport().sendMail({
+    from: readMailEnv().MAIL_FROM,
+    to: params.to,
+    headers: { [schoolHeader]: params.schoolId },
+    ...params.mail,
+  });
 }
 
 function isLoopback(host: string): boolean {

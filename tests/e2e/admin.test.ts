@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { cohortMemberships, cohorts, schools, users } from "@/db/schema";
 import { hashPassword } from "@/lib/auth/password";
+import { listCaughtMessages } from "@/lib/mail/sink";
 import { launchBrowser, openPage, saveScreenshot, signInThroughForm } from "./support/browser";
 
 // A school admin in a real browser: creates a cohort, uploads a CSV, reads the preview with its
@@ -22,7 +23,6 @@ const newLearners = [
   { name: "Kalani Moreau", email: `kalani@${domain}` },
 ];
 const cohortName = `Evening runs ${tag}`;
-const mailSinkUrl = (process.env.MAIL_SINK_URL ?? "http://127.0.0.1:55026").replace(/\/+$/, "");
 
 let browser: Browser;
 let cohortPath = "";
@@ -158,8 +158,7 @@ describe("school admin: cohort, CSV import, invitation", () => {
 
   it("lets an invited learner accept from the caught e-mail and land signed in", async () => {
     const learner = newLearners[0]!;
-    const response = await fetch(`${mailSinkUrl}/messages?to=${encodeURIComponent(learner.email)}`);
-    const messages = (await response.json()) as { subject: string; text: string }[];
+    const messages = await listCaughtMessages({ to: learner.email });
     expect(messages).toHaveLength(1);
     expect(messages[0]!.subject).toMatch(/^Your invitation to Harrowgate Signal School/);
     const acceptUrl = messages[0]!.text.match(/https?:\/\/\S+\/invitations\/[A-Za-z0-9_-]{43}/)![0];

@@ -45,7 +45,7 @@ async function watchedPage(): Promise<Watched> {
   await context.addInitScript(() => {
     const report = (event: SecurityPolicyViolationEvent) =>
       (window as unknown as { reportPolicyViolation: (text: string) => void }).reportPolicyViolation(
-        `${event.effectiveDirective} blocked ${event.blockedURI || "inline"} on ${location.pathname}`,
+        `${event.effectiveDirective} blocked ${event.blockedURI || "inline"} on ${location.pathname} (from ${event.sourceFile || "the page"}:${event.lineNumber})`,
       );
     document.addEventListener("securitypolicyviolation", report);
   });
@@ -88,6 +88,10 @@ function expectHeadersOnEveryDocument(documents: Response[]): void {
     const nonce = policy.get("script-src")?.match(/'nonce-([A-Za-z0-9+/=]+)'/)?.[1];
     expect(nonce, `${where}: script-src ${policy.get("script-src")}`).toBeTruthy();
     expect(policy.get("script-src")).toBe(`'self' 'nonce-${nonce}' 'strict-dynamic'`);
+    // Style sheets and <style> elements need the nonce; only style attributes may be inline.
+    expect(policy.get("style-src")).toBe(`'self' 'nonce-${nonce}'`);
+    expect(policy.get("style-src-attr")).toBe("'unsafe-inline'");
+    expect(policy.has("style-src-elem")).toBe(false);
     expect(policy.get("frame-ancestors")).toBe("'none'");
     expect(policy.get("object-src")).toBe("'none'");
     expect(policy.get("base-uri")).toBe("'self'");
@@ -98,11 +102,16 @@ function expectHeadersOnEveryDocument(documents: Response[]): void {
   expect(nonces.size).toBe(documents.length);
 }
 
-/** The inline scripts Next writes into the page carry the nonce of the policy it was sent with. */
+/**
+ * The inline scripts Next writes into the page carry the nonce of the policy it was sent with, and
+ * so does any <style> element: the policy refuses those without it.
+ */
 async function expectInlineScriptsNonced(page: Page): Promise<void> {
   const scripts = await page.evaluate(() => [...document.scripts].map((script) => ({ inline: !script.src, nonce: script.nonce })));
   expect(scripts.filter((script) => script.inline).length).toBeGreaterThan(0);
   expect(scripts.filter((script) => !script.nonce)).toEqual([]);
+  const styles = await page.evaluate(() => [...document.querySelectorAll("style")].map((style) => style.nonce));
+  expect(styles.filter((nonce) => !nonce)).toEqual([]);
 }
 
 async function finish(watched: Watched): Promise<void> {
@@ -198,6 +207,8 @@ describe("security headers and the Content-Security-Policy", () => {
     await page.goto("/admin");
     await page.goto(`/admin/cohorts/${await findDemoCohortId()}`);
     await page.goto("/certificates");
+    await page.goto("/dev/mail");
+    await expectInlineScriptsNonced(page);
     await page.goto("/admin/cohorts/new");
     await page.getByLabel("Cohort name").fill("Policy check cohort");
     await page.getByLabel("First day").fill("2026-09-14");

@@ -79,7 +79,8 @@ async function waitForPort(port: number): Promise<void> {
   throw new Error(`Nothing listened on 127.0.0.1:${port} in time.`);
 }
 
-export type PrivateMailSink = { process: ChildProcess; listUrl: string };
+/** `headers` carry the sink's token, which its message list demands. */
+export type PrivateMailSink = { process: ChildProcess; listUrl: string; headers: Record<string, string> };
 
 /**
  * The project's real sink script on ports of this file's own, for tests that must stop mail or
@@ -88,12 +89,13 @@ export type PrivateMailSink = { process: ChildProcess; listUrl: string };
  */
 export async function startPrivateMailSink(smtpPort: number, keptIn = ""): Promise<PrivateMailSink> {
   const apiPort = await freePort();
+  const token = randomUUID();
   const child = spawn(process.execPath, ["scripts/mail-sink.mjs"], {
     // In memory unless a file is named: the shared sink's file is never this one's.
-    env: { ...process.env, SMTP_PORT: String(smtpPort), MAIL_SINK_API_PORT: String(apiPort), MAIL_SINK_FILE: keptIn },
+    env: { ...process.env, SMTP_PORT: String(smtpPort), MAIL_SINK_API_PORT: String(apiPort), MAIL_SINK_FILE: keptIn, MAIL_SINK_TOKEN: token },
     stdio: "ignore",
   });
   await waitForPort(smtpPort);
   await waitForPort(apiPort);
-  return { process: child, listUrl: `http://127.0.0.1:${apiPort}/messages` };
+  return { process: child, listUrl: `http://127.0.0.1:${apiPort}/messages`, headers: { authorization: `Bearer ${token}` } };
 }

@@ -3,8 +3,7 @@ import { and, eq, inArray } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { insertEnrolments } from "@/db/queries/enrolment";
-import { unsetPasswordHash } from "@/db/queries/users";
-import { cohortMemberships, invitations, users } from "@/db/schema";
+import { cohortMemberships, invitations, unsetPasswordHash, users } from "@/db/schema";
 import { importRoster, previewRoster } from "@/lib/enrolment";
 import { hashToken } from "@/lib/auth/tokens";
 import {

@@ -72,7 +72,7 @@ describe("enrolling while the mail server is down", () => {
     // The school-wide instructor invitation has no cohort, so it is not among the cohort's waiting.
     expect(resent).toEqual({ ok: true, reissued: 4, letters: { sent: 4, unsent: 0 } });
 
-    const response = await fetch(`${sink.listUrl}?to=${encodeURIComponent(school.domain)}`);
+    const response = await fetch(`${sink.listUrl}?to=${encodeURIComponent(school.domain)}`, { headers: sink.headers });
     const caught = (await response.json()) as { to: string; text: string }[];
     expect(caught.map((message) => message.to).sort()).toEqual([...roster().map((p) => p.email), `dina@${school.domain}`].sort());
 

@@ -1,8 +1,7 @@
 import { and, count, eq, inArray } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { unsetPasswordHash } from "@/db/queries/users";
-import { cohortMemberships, invitations, users } from "@/db/schema";
+import { cohortMemberships, invitations, unsetPasswordHash, users } from "@/db/schema";
 import { importRoster, previewRoster } from "@/lib/enrolment";
 import { createTestSchool, csvFile, freePort, rosterCsv, startPrivateMailSink, type PrivateMailSink, type TestSchool } from "./enrolment-fixtures";
 
@@ -66,7 +65,7 @@ describe(`a roster of ${size.toLocaleString("en-GB")} learners`, () => {
     expect(issued).toHaveLength(size);
     expect(issued.every((invitation) => invitation.cohortId === school.cohortId)).toBe(true);
 
-    const caught = (await (await fetch(`${sink.listUrl}?to=${encodeURIComponent(school.domain)}`)).json()) as { to: string }[];
+    const caught = (await (await fetch(`${sink.listUrl}?to=${encodeURIComponent(school.domain)}`, { headers: sink.headers })).json()) as { to: string }[];
     expect(caught).toHaveLength(size);
     expect(new Set(caught.map((message) => message.to))).toEqual(new Set(emails));
   });

@@ -159,7 +159,7 @@ describe("invitation links that cannot be used", () => {
     });
   });
 
-  it("does not invite an address that already has an account", async () => {
+  it("does not invite an address that already has an account at the school", async () => {
     const result = await issueInvitation({
       schoolId: await findDemoSchoolId(),
       email: demoAdmin.email,

@@ -40,8 +40,8 @@ export async function invitePerson(_previous: InviteState, formData: FormData): 
       inviter: { id: admin.id, name: admin.name },
     });
     if (!result.ok && result.reason === "already-registered") {
-      return failedFormState("Someone already has an account with that e-mail address.", values, {
-        email: "This address already has an account.",
+      return failedFormState("Someone at your school already has an account with that e-mail address.", values, {
+        email: "This address already has an account at your school.",
       });
     }
     if (!result.ok) return failedFormState("That cohort is not part of your school.", values, { cohortId: "Choose a cohort from the list." });

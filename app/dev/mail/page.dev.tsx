@@ -5,23 +5,24 @@ import { Card } from "@/components/ui/card";
 import { formatMoment } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
 import { requireRouteAccess } from "@/lib/auth/current-user";
-import { findLinks, isMailSinkEnabled, listCaughtMessages, type CaughtMessage } from "@/lib/mail/sink";
+import { findLinks, isMailSinkEnabled, listSchoolCaughtMessages, type CaughtMessage } from "@/lib/mail/sink";
 
 export const metadata: Metadata = { title: "Caught mail", robots: { index: false } };
 
 // Built only by the project's scripts (see next.config.ts), and answers only while the local mail
-// sink is configured; with real SMTP there is nothing to show, so the route is absent.
+// sink is configured; with real SMTP there is nothing to show, so the route is absent. An admin
+// sees their own school's mail only: other schools' links (password resets) would hand out accounts.
 export default async function CaughtMailPage() {
   if (!isMailSinkEnabled()) notFound();
   const user = await requireRouteAccess("/dev/mail");
-  const messages = await listCaughtMessages().catch(() => null);
+  const messages = await listSchoolCaughtMessages({ schoolId: user.schoolId }).catch(() => null);
 
   return (
     <AppFrame user={user}>
       <PageHeading
         eyebrow="Development only"
         title="Caught mail"
-        lead="Every message the app sent to the local mail sink, newest first. Nothing here reached a real inbox."
+        lead="Every message the app sent to people of your school through the local mail sink, newest first. Nothing here reached a real inbox."
       />
       {messages === null ? (
         <Card>

@@ -5,7 +5,7 @@ import { startAppInstance, type AppInstance } from "@/scripts/app-instance";
 // another and reuse one name and port range (FAULTS_PORT_BASE, set by scripts/test.sh).
 
 // What this process's own database helpers, mail-sink reader and upload settings must point at.
-const sharedSettings = ["DATABASE_URL", "APP_URL", "MAIL_SINK_URL", "UPLOADTHING_TOKEN", "UPLOADTHING_INGEST_URL", "UPLOADTHING_API_URL", "UPLOAD_FAKE_DIR"];
+const sharedSettings = ["DATABASE_URL", "APP_URL", "MAIL_SINK_URL", "MAIL_SINK_TOKEN", "UPLOADTHING_TOKEN", "UPLOADTHING_INGEST_URL", "UPLOADTHING_API_URL", "UPLOAD_FAKE_DIR"];
 
 export async function startFaultInstance(appEnv?: Record<string, string>): Promise<AppInstance> {
   // The suite's own cluster trades durability for speed; a cluster made for fault tests must not,

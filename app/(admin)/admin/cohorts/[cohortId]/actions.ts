@@ -21,7 +21,7 @@ const enrolRefusals: Record<Exclude<EnrolLearnerResult, { ok: true }>["reason"],
   "unknown-cohort": { message: "This cohort is not part of your school." },
   "already-in-cohort": { message: "This person is already in this cohort.", field: "email" },
   "not-a-learner": { message: "This address belongs to an instructor or admin of your school.", field: "email" },
-  "address-taken": { message: "This address already has an Edgewise account.", field: "email" },
+  "enrolled-meanwhile": { message: "Someone at your school enrolled this address a moment ago; reload the page to see where.", field: "email" },
   "already-invited": { message: "This address already has an open invitation to your school; resend it from the school page.", field: "email" },
 };
 
