@@ -31,6 +31,8 @@ export type AppInstance = {
   killPart(part: InstancePart): Promise<void>;
   /** `appEnv`, for app servers only: extra environment for this start instead of the options' one. */
   startPart(part: InstancePart, appEnv?: Record<string, string>): Promise<void>;
+  /** The running part's process id, which is also its process group's (what it spawned included). */
+  pidOf(part: InstancePart): number | undefined;
   /** Stops every process of the instance, its database cluster included. */
   stop(): Promise<void>;
 };
@@ -108,6 +110,7 @@ export async function startAppInstance(options: AppInstanceOptions): Promise<App
     stopPart,
     killPart: (part) => signalPart(part, "SIGKILL"),
     startPart,
+    pidOf: (part) => children.get(part)?.pid,
     async stop() {
       await Promise.all([...children.keys()].map(stopPart));
       await postgres("stop");
