@@ -62,8 +62,14 @@ function partCommand(part: InstancePart, env: Record<string, string>): PartComma
   if (part === "balancer") return { command: "/usr/sbin/haproxy", args: ["-f", env.BALANCER_CONFIG, "-db"], port: Number(env.APP_PORT) };
   const port = serverPorts(env)[part === "app" ? 0 : Number(part.slice("app-".length)) - 1];
   if (port === undefined) throw new Error(`The instance has no app server ${part}.`);
-  return node("node_modules/next/dist/bin/next", ["start", "-H", "127.0.0.1", "-p", port], port);
+  // Behind the balancer a server must not close a kept-alive connection the balancer is about to
+  // reuse (Node does after 5 s idle): haproxy then drops the client's connection without an answer.
+  const keepAlive = env.BALANCER_CONFIG ? ["--keepAliveTimeout", String(balancedKeepAliveMs)] : [];
+  return node("node_modules/next/dist/bin/next", ["start", "-H", "127.0.0.1", "-p", port, ...keepAlive], port);
 }
+
+/** Longer than haproxy keeps an idle server connection (it closes half its idle ones every 5 s). */
+const balancedKeepAliveMs = 65_000;
 
 const serverPorts = (env: Record<string, string>) => env.APP_SERVER_PORTS.split(",");
 const isAppServer = (part: InstancePart): part is AppServerPart => part.startsWith("app");

@@ -63,6 +63,14 @@ function percentile(sorted: number[], p: number): number | null {
 
 const isSuccess = (status: number) => status >= 200 && status < 300;
 
+function attemptIdOf(body: string): string | null {
+  try {
+    return (JSON.parse(body) as { attempt: { id: string } }).attempt.id;
+  } catch {
+    return null;
+  }
+}
+
 /** `offset` staggers the resends, so that some learners resend as early as their second submission. */
 type LearnerState = { learner: BenchLearner; offset: number; turns: number; submissions: number; last: { body: string; attemptId: string } | null };
 type Sent = { learnerState: LearnerState; kind: RequestKind; body?: string };
@@ -118,8 +126,15 @@ function connectionRequests(learners: BenchLearner[], recorder: PhaseRecorder, c
       // The workbench keeps the key of a submission answered 5xx and sends it again.
       if (sent.kind === "submit" && status >= 500) recorder.unanswered.push({ learner: sent.learnerState.learner, body: sent.body! });
       if (sent.kind === "page" || !isSuccess(status)) return;
-      const attemptId = (JSON.parse(body) as { attempt: { id: string } }).attempt.id;
+      const attemptId = attemptIdOf(body);
       const state = sent.learnerState;
+      if (attemptId === null) {
+        // autocannon keeps its response parser when it reconnects after a connection closed in the
+        // middle of an answer, so the rest of a page cut off can be read as this request's answer.
+        recorder.failures.push({ kind: sent.kind, status, lost: "unreadable answer", atMs: Date.now() });
+        if (sent.kind === "submit") recorder.unanswered.push({ learner: state.learner, body: sent.body! });
+        return;
+      }
       if (sent.kind === "submit") {
         recorder.firstTimeStored += 1;
         state.last = { body: sent.body!, attemptId };
