@@ -8,7 +8,7 @@
  * 1. Paced mix: REPLICAS_LEARNERS learners (default 200) submitting lab attempts (every 3rd a
  *    resend with the same idempotency key) and loading their workbench, REPLICAS_RATE requests a
  *    second in all (default 20), for REPLICAS_SECONDS (default 30): latency percentiles.
- * 2. Capacity: REPLICAS_CAPACITY_LEARNERS learners (default 40), each sending as soon as
+ * 2. Capacity: REPLICAS_CAPACITY_LEARNERS learners (default 100), each sending as soon as
  *    answered, for REPLICAS_CAPACITY_SECONDS (default 20): answers a second.
  * 3. A server killed under load: the paced mix through the balancer, and a third of the way in one
  *    server is killed (SIGKILL). Prints the requests that failed and when, against the kill; a
@@ -33,7 +33,7 @@ const settings = {
   seconds: envNumber("REPLICAS_SECONDS", 30),
   learners: envNumber("REPLICAS_LEARNERS", 200),
   rate: envNumber("REPLICAS_RATE", 20),
-  capacityLearners: envNumber("REPLICAS_CAPACITY_LEARNERS", 40),
+  capacityLearners: envNumber("REPLICAS_CAPACITY_LEARNERS", 100),
   capacitySeconds: envNumber("REPLICAS_CAPACITY_SECONDS", 20),
   portBase: envNumber("REPLICAS_PORT_BASE", 58100),
 };
