@@ -1,11 +1,11 @@
 /**
  * Two `next start` servers share one PostgreSQL behind a local load balancer (haproxy, round
  * robin), as replicas of a deployment do, and real traffic goes through the balancer or straight
- * to one server: a session made on one server works on the other and ends on both; failed
- * sign-ins made on either count against the one account; with both servers' invitation outbox
- * timers racing, each e-mail goes out once; the same submission sent to both at once is stored
- * once; and when one server is killed under load the other serves on, every acknowledged
- * submission stored.
+ * to one server: a session made on one server works on the other and ends on both; rate limits
+ * count requests to both against one counter, also when they arrive at once; with both servers'
+ * invitation outbox timers racing, each e-mail goes out once; the same submission sent to both at
+ * once is stored once; and when one server is killed under load the other serves on, every
+ * acknowledged submission stored.
  */
 import { randomUUID } from "node:crypto";
 import { inArray } from "drizzle-orm";
@@ -16,9 +16,9 @@ import { deferInvitationMail } from "@/db/queries/invitation-mail";
 import { invitations, labAttempts } from "@/db/schema";
 import { previewInvitation } from "@/lib/auth/invitations";
 import { sessionCookieName } from "@/lib/auth/session-store";
-import { signInLimits } from "@/lib/auth/throttle";
 import { invitationExpiry, issueToken } from "@/lib/enrolment/invitation-tokens";
 import { listCaughtMessages } from "@/lib/mail/sink";
+import { ruleOf } from "@/lib/rate-limit/limits";
 import type { AppInstance } from "@/scripts/app-instance";
 import { builtActionId } from "../e2e/support/app-surface";
 import { callAction, type ActionReply } from "../e2e/support/server-actions";
@@ -35,13 +35,15 @@ const outboxRetrySeconds = 0.05;
 // More than one round takes (200), so the second server always finds some left to claim.
 const outboxLetters = 300;
 
-type Exchange = { path: string; status: number | "no answer"; server: string | null; body: string; startedAt: number; answeredAt: number };
+type Exchange = { path: string; status: number | "no answer"; server: string | null; retryAfter: string | null; body: string; startedAt: number; answeredAt: number };
 
 let instance: AppInstance;
 let cohortId: string;
 
 beforeAll(async () => {
-  instance = await startFaultInstance({ servers: 2, appEnv: { INVITATION_MAIL_RETRY_SECONDS: String(outboxRetrySeconds) } });
+  // As in a deployment, the servers take the client's address from the balancer's X-Forwarded-For.
+  const appEnv = { TRUSTED_PROXIES: "127.0.0.1", INVITATION_MAIL_RETRY_SECONDS: String(outboxRetrySeconds) };
+  instance = await startFaultInstance({ servers: 2, appEnv });
   cohortId = await findDemoCohortId();
 });
 
@@ -57,10 +59,11 @@ async function exchange(baseUrl: string, path: string, init: RequestInit & { coo
   try {
     const response = await fetch(`${baseUrl}${path}`, { ...init, headers, redirect: "manual", signal: AbortSignal.timeout(30_000) });
     const body = await response.text();
-    return { path, status: response.status, server: response.headers.get("x-app-server"), body, startedAt, answeredAt: Date.now() };
+    const server = response.headers.get("x-app-server");
+    return { path, status: response.status, server, retryAfter: response.headers.get("retry-after"), body, startedAt, answeredAt: Date.now() };
   } catch (error) {
     const cause = error instanceof Error && error.cause instanceof Error ? `: ${error.cause.message}` : "";
-    return { path, status: "no answer", server: null, body: `${String(error)}${cause}`, startedAt, answeredAt: Date.now() };
+    return { path, status: "no answer", server: null, retryAfter: null, body: `${String(error)}${cause}`, startedAt, answeredAt: Date.now() };
   }
 }
 
@@ -125,22 +128,35 @@ describe("two app servers on one database behind a load balancer", () => {
     expect(afterSignOut.body).not.toContain(person.name);
   });
 
-  it("counts failed sign-ins made through either server against the one account", async () => {
+  it("checks no more wrong passwords than the account's limit when they arrive at both servers at once", async () => {
+    const limit = ruleOf("sign-in-failure", "person").points;
     const person = await createPerson({ role: "learner", password, label: "replicas-throttle" });
-    const failures = [];
-    for (let i = 0; i < signInLimits.failuresPerAccount; i++) {
-      const reply = await signIn(instance.baseUrl, person.email, `not the password ${i}`);
-      expect(reply.result).toMatchObject({ status: "error", message: expect.stringMatching(/do not match an account/) });
-      failures.push(reply.headers.get("x-app-server"));
-    }
-    // Neither server saw the limit's worth of failures on its own.
-    expect(new Set(failures)).toEqual(new Set(["app-1", "app-2"]));
+    const replies = await Promise.all(Array.from({ length: 30 }, (_, i) => signIn(instance.baseUrl, person.email, `not the password ${i}`)));
+    const messages = replies.map((reply) => (reply.result as { message?: string } | undefined)?.message ?? "");
+    expect(new Set(replies.map((reply) => reply.headers.get("x-app-server")))).toEqual(new Set(["app-1", "app-2"]));
+    expect(messages.filter((message) => /do not match an account/.test(message))).toHaveLength(limit);
+    expect(messages.filter((message) => /^Too many attempts/.test(message))).toHaveLength(30 - limit);
 
     for (const server of instance.servers) {
       const reply = await signIn(server.url, person.email, password);
       expect({ server: server.part, result: reply.result }).toMatchObject({ server: server.part, result: { status: "error", message: expect.stringMatching(/^Too many attempts/) } });
       expect(sessionCookieOf(reply)).toBeUndefined();
     }
+  });
+
+  it("grades no more of a learner's submissions than the limit when they arrive at both servers at once, and refuses the rest on both", async () => {
+    const limit = ruleOf("grading", "person").points;
+    const learner = await readyLearnerAtLab({ cohortId, labSlug, label: "replicas-limit" });
+    const answers = await Promise.all(Array.from({ length: limit + 10 }, () => submit(instance.baseUrl, learner, randomUUID())));
+    const graded = answers.filter(isSuccess);
+    expect(graded).toHaveLength(limit);
+    expect(new Set(graded.map((answer) => answer.server))).toEqual(new Set(["app-1", "app-2"]));
+    const refused = answers.filter((answer) => !isSuccess(answer));
+    expect(refused.map((answer) => answer.status)).toEqual(Array(10).fill(429));
+    expect(refused.every((answer) => Number(answer.retryAfter) > 0 && JSON.parse(answer.body).error.code === "rate-limited")).toBe(true);
+
+    for (const server of instance.servers) expect((await submit(server.url, learner, randomUUID())).status).toBe(429);
+    expect(await attemptsOf([learner])).toHaveLength(limit);
   });
 
   it("sends each waiting invitation e-mail once while both servers' outbox timers race for it", async () => {
@@ -186,15 +202,18 @@ describe("two app servers on one database behind a load balancer", () => {
   });
 
   it("serves on when one server is killed under load, keeping every acknowledged submission, and shares the load again once it is back", async () => {
-    const learners = await Promise.all(Array.from({ length: 6 }, () => readyLearnerAtLab({ cohortId, labSlug, label: "replicas-kill" })));
+    const learners = await Promise.all(Array.from({ length: 12 }, () => readyLearnerAtLab({ cohortId, labSlug, label: "replicas-kill" })));
     const submissions: { learner: FaultLearner; key: string; answer: Exchange }[] = [];
     const pages: Exchange[] = [];
     let stopped = false;
     const learnerLoop = async (learner: FaultLearner) => {
       while (!stopped) {
+        const started = Date.now();
         const key = randomUUID();
         submissions.push({ learner, key, answer: await submit(instance.baseUrl, learner, key) });
         pages.push(await exchange(instance.baseUrl, `/labs/${labSlug}`, { cookie: learner.cookie }));
+        // One submission a second at most, well within the grading limit a learner has.
+        await new Promise((resolve) => setTimeout(resolve, Math.max(0, 1_000 - (Date.now() - started))));
       }
     };
     const traffic = Promise.all(learners.map(learnerLoop));
@@ -224,7 +243,7 @@ describe("two app servers on one database behind a load balancer", () => {
       expect(answer.startedAt).toBeLessThanOrEqual(killedAt);
     }
     const after = all.filter((answer) => answer.startedAt > killedAt);
-    expect(after.length).toBeGreaterThan(20);
+    expect(after.length).toBeGreaterThan(30);
     expect(after.filter((answer) => !isSuccess(answer) || answer.server !== "app-2")).toEqual([]);
 
     const acknowledged = submissions.filter((s) => isSuccess(s.answer));
