@@ -63,7 +63,7 @@ async function submitNormally(baseUrl: string, learner: BenchLearner): Promise<{
   try {
     const response = await fetch(`${baseUrl}/api/labs/${learner.labSlug}/attempts`, {
       method: "POST",
-      headers: { "content-type": "application/json", cookie: learner.cookie },
+      headers: { "content-type": "application/json", cookie: learner.cookie, "x-forwarded-for": learner.address },
       body: JSON.stringify({ choices: learner.passing, answers: learner.answers, idempotencyKey: randomUUID() }),
     });
     await response.arrayBuffer();
@@ -130,7 +130,9 @@ async function main(): Promise<void> {
   const load = loadavg()[0];
   console.log(`Hostile-client benchmark: ${settings.clients} attackers, ${settings.bodyMegabytes} MB bodies; ${availableParallelism()} cores, load average ${load.toFixed(2)}`);
   console.log("Starting the private instance (build if stale, fresh database)…");
-  const instance = await startAppInstance({ name: "hostile", portBase: settings.portBase, build: true, appEnv: {} });
+  // Every client has an address of its own (X-Forwarded-For, trusted from loopback as from a
+  // deployment's balancer), so the normal learners never share a rate limit with an attacker.
+  const instance = await startAppInstance({ name: "hostile", portBase: settings.portBase, build: true, appEnv: { TRUSTED_PROXIES: "127.0.0.1" } });
   const attackers = startAttackers();
   try {
     Object.assign(process.env, instance.env);
@@ -141,8 +143,9 @@ async function main(): Promise<void> {
     await closeBenchDatabase();
     const normal = learners.slice(0, NORMAL_LEARNERS);
     const targets: AttackTarget[] = [
-      ...learners.slice(NORMAL_LEARNERS).map((learner): AttackTarget => ({ route: "grading", labSlug: learner.labSlug, cookie: learner.cookie })),
-      ...Array.from({ length: settings.clients - gradingAttackers }, (): AttackTarget => ({ route: "upload" })),
+      ...learners.slice(NORMAL_LEARNERS).map((learner): AttackTarget => ({ route: "grading", address: learner.address, labSlug: learner.labSlug, cookie: learner.cookie })),
+      // IPv6 documentation range (RFC 3849), apart from the learners' networks.
+      ...Array.from({ length: settings.clients - gradingAttackers }, (_, i): AttackTarget => ({ route: "upload", address: `2001:db8:ffff:${(i + 1).toString(16)}::1` })),
     ];
 
     await measure(instance, normal, WARM_UP_SUBMISSIONS);

@@ -59,7 +59,9 @@ async function main(): Promise<void> {
   const load = loadavg()[0];
   console.log(`Replicas benchmark: 2 servers behind haproxy on one database; ${availableParallelism()} cores, load average ${load.toFixed(2)}`);
   console.log("Starting the private instance (build if stale, fresh database, two servers and the balancer)…");
-  const instance = await startAppInstance({ name: "replicas", portBase: settings.portBase, servers: 2, build: true, appEnv: {} });
+  // The servers take each learner's own address (sent by the driver) from X-Forwarded-For, as
+  // behind the balancer of a deployment, so rate limits count per learner.
+  const instance = await startAppInstance({ name: "replicas", portBase: settings.portBase, servers: 2, build: true, appEnv: { TRUSTED_PROXIES: "127.0.0.1" } });
   const driver = startDriver();
   try {
     Object.assign(process.env, instance.env);

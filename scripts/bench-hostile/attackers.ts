@@ -65,7 +65,7 @@ function send(baseUrl: URL, target: AttackTarget, body: Body, live: Set<() => vo
       tally.count += 1;
       resolve();
     };
-    const headers: Record<string, string> = { "content-type": body.contentType };
+    const headers: Record<string, string> = { "content-type": body.contentType, "x-forwarded-for": target.address };
     if (target.route === "grading") headers.cookie = target.cookie;
     if ("bytes" in body) headers["content-length"] = String(body.bytes.length);
     const request = httpRequest({ host: baseUrl.hostname, port: baseUrl.port, path: pathOf(target), method: "POST", headers, agent: false, timeout: REQUEST_TIMEOUT_MS });

@@ -1,8 +1,11 @@
 // What the hostile benchmark (scripts/bench-hostile.ts) and its attackers (attackers.ts, a child
 // process) say to each other.
 
-/** One attacker: the upload route without a session, or the grading route as a signed-in learner. */
-export type AttackTarget = { route: "upload" } | { route: "grading"; labSlug: string; cookie: string };
+/**
+ * One attacker: the upload route without a session, or the grading route as a signed-in learner;
+ * each from an address of its own, as the balancer in front of the instance reports it (X-Forwarded-For).
+ */
+export type AttackTarget = { route: "upload"; address: string } | { route: "grading"; address: string; labSlug: string; cookie: string };
 
 export type AttackerRequest = { type: "start"; baseUrl: string; targets: AttackTarget[]; bodyBytes: number } | { type: "stop" };
 
