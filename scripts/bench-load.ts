@@ -23,25 +23,18 @@
  *
  * Run: npm run bench:load   (LOAD_SECONDS=10 for a quick run; LOAD_PORT_BASE moves the instance's ports)
  */
-import { fork } from "node:child_process";
 import { writeFileSync } from "node:fs";
 import { availableParallelism, loadavg } from "node:os";
 import path from "node:path";
 import { startAppInstance } from "./app-instance";
-import type { BenchLearner, DriverReply, DriverRequest, KindFigures, PhaseFigures, RequestKind } from "./bench-load/protocol";
+import { startDriver } from "./bench-load/driver-process";
+import { count5xx, envNumber, kindLines, ms, nonSuccess, ratio } from "./bench-load/figures";
+import type { DriverRequest, PhaseFigures } from "./bench-load/protocol";
 
 const TARGET_P95_MS = 300;
 const RETRY_EVERY = 3;
 const PROBE_LEARNERS = 2;
 const WARM_UP_SECONDS = 5;
-
-function envNumber(name: string, fallback: number): number {
-  const value = process.env[name];
-  if (value === undefined || value === "") return fallback;
-  const number = Number(value);
-  if (!Number.isFinite(number) || number < 0) throw new Error(`${name} must be a non-negative number, not "${value}".`);
-  return number;
-}
 
 const settings = {
   seconds: envNumber("LOAD_SECONDS", 60),
@@ -52,55 +45,6 @@ const settings = {
   burstRounds: Math.max(1, envNumber("LOAD_BURST_ROUNDS", 2)),
   portBase: envNumber("LOAD_PORT_BASE", 58000),
 };
-
-/** The driver child: one phase at a time, answered by its figures. */
-function startDriver() {
-  const child = fork(path.join(import.meta.dirname, "bench-load/driver.ts"), [], { execArgv: ["--import", "tsx"], stdio: "inherit" });
-  return {
-    run(request: DriverRequest): Promise<PhaseFigures> {
-      return new Promise((resolve, reject) => {
-        const onExit = (code: number | null) => reject(new Error(`The load driver exited (code ${code}) during a phase.`));
-        child.once("exit", onExit);
-        child.once("message", (reply: DriverReply) => {
-          child.off("exit", onExit);
-          if ("error" in reply) reject(new Error(`The load driver failed: ${reply.error}`));
-          else resolve(reply.figures);
-        });
-        child.send(request);
-      });
-    },
-    stop: () => child.kill(),
-  };
-}
-
-const ms = (value: number | null) => (value === null ? "—" : `${Math.round(value)} ms`);
-const ratio = (a: number | null, b: number | null) => (a === null || b === null ? "—" : `×${(a / b).toFixed(1)}`);
-
-function kindLines(title: string, figures: PhaseFigures): string[] {
-  const lines = [`${title}: ${figures.throughput.toFixed(1)} answers/s over ${figures.seconds} s`];
-  for (const [kind, k] of Object.entries(figures.kinds) as [RequestKind, KindFigures][]) {
-    const statuses = Object.entries(k.statuses)
-      .map(([status, count]) => `${status}×${count}`)
-      .join(" ");
-    lines.push(`  ${kind.padEnd(7)} ${String(k.count).padStart(6)}  p50 ${ms(k.p50).padStart(8)}  p95 ${ms(k.p95).padStart(8)}  p99 ${ms(k.p99).padStart(8)}  ${statuses}`);
-  }
-  return lines;
-}
-
-function count5xx(figures: PhaseFigures): number {
-  return Object.values(figures.kinds).reduce(
-    (sum, k) => sum + Object.entries(k!.statuses).reduce((n, [status, c]) => n + (Number(status) >= 500 ? c : 0), 0),
-    0,
-  );
-}
-
-function nonSuccess(figures: PhaseFigures): Record<string, number> {
-  const breakdown: Record<string, number> = {};
-  for (const [kind, k] of Object.entries(figures.kinds)) {
-    for (const [status, c] of Object.entries(k!.statuses)) if (Number(status) >= 300) breakdown[`${kind} ${status}`] = c;
-  }
-  return breakdown;
-}
 
 type BurstFigures = { alone: number | null; burst: number | null; submitsPerSecond: number };
 
@@ -193,7 +137,7 @@ async function main(): Promise<void> {
       ...kindLines(`Mix (${paceOf(settings.rate)}; load average ${load.toFixed(1)} before, ${loadAverages.mix.toFixed(1)} after)`, mix),
       `  non-2xx: ${JSON.stringify(nonSuccess(mix))}; 5xx in all phases: ${fiveXX}`,
       `  resends: ${retries?.count ?? 0}, replayed with the stored attempt: ${mix.retriesReplayed}, answered with another attempt: ${diverged}`,
-      `  first-time submissions unanswered at the window's end or timed out: ${mix.unanswered}, settled by resending their key: ${mix.settledByRetry}`,
+      `  first-time submissions unanswered at the window's end, lost, timed out or answered 5xx: ${mix.unanswered}, settled by resending their key: ${mix.settledByRetry}`,
       "",
       `Stored attempts ${stored}, first-time 2xx answers in all phases ${expected}: ${stored === expected ? "equal" : "NOT equal"}`,
       "",

@@ -15,6 +15,8 @@ declare module "autocannon" {
   export interface Client extends EventEmitter {
     setRequests(requests: Request[]): void;
     on(event: "response", listener: (status: number, bytes: number, durationMs: number) => void): this;
+    /** The connection failed; the client connects again and moves on to its next request. */
+    on(event: "connError", listener: (error: NodeJS.ErrnoException) => void): this;
     on(event: string, listener: (...args: unknown[]) => void): this;
   }
 

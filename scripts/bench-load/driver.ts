@@ -5,15 +5,16 @@
  */
 import { randomUUID } from "node:crypto";
 import autocannon, { type Client, type Request } from "autocannon";
-import type { BenchLearner, DriverRequest, KindFigures, PhaseFigures, RequestKind } from "./protocol";
+import type { BenchLearner, DriverRequest, FailedRequest, KindFigures, PhaseFigures, RequestKind } from "./protocol";
 
 const TIMEOUT_SECONDS = 30;
 
 class PhaseRecorder {
   private readonly latencies = new Map<RequestKind, number[]>();
   private readonly statuses = new Map<RequestKind, Map<number, number>>();
-  /** First-time submissions sent but never answered: cut off at the end of the window or timed out. */
+  /** First-time submissions to send again with their key: never answered (cut off at the end of the window, lost or timed out) or answered 5xx. */
   readonly unanswered: { learner: BenchLearner; body: string }[] = [];
+  readonly failures: FailedRequest[] = [];
   firstTimeStored = 0;
   retriesReplayed = 0;
   retriesDiverged = 0;
@@ -30,7 +31,7 @@ class PhaseRecorder {
     this.latencies.set(kind, list);
   }
 
-  figures(seconds: number): Omit<PhaseFigures, "unanswered" | "settledByRetry" | "unsettled"> {
+  figures(seconds: number): Omit<PhaseFigures, "unanswered" | "settledByRetry" | "unsettled" | "failures"> {
     const kinds: Partial<Record<RequestKind, KindFigures>> = {};
     for (const [kind, byStatus] of this.statuses) {
       const sorted = [...(this.latencies.get(kind) ?? [])].sort((a, b) => a - b);
@@ -62,6 +63,14 @@ function percentile(sorted: number[], p: number): number | null {
 
 const isSuccess = (status: number) => status >= 200 && status < 300;
 
+function attemptIdOf(body: string): string | null {
+  try {
+    return (JSON.parse(body) as { attempt: { id: string } }).attempt.id;
+  } catch {
+    return null;
+  }
+}
+
 /** `offset` staggers the resends, so that some learners resend as early as their second submission. */
 type LearnerState = { learner: BenchLearner; offset: number; turns: number; submissions: number; last: { body: string; attemptId: string } | null };
 type Sent = { learnerState: LearnerState; kind: RequestKind; body?: string };
@@ -77,6 +86,7 @@ function connectionRequests(learners: BenchLearner[], recorder: PhaseRecorder, c
   let turn = 0;
   let inFlight: Sent | null = null;
   let answered: RequestKind = "page";
+  let lostHow = "closed";
 
   const nextSubmission = (state: LearnerState): Sent => {
     state.submissions += 1;
@@ -85,15 +95,20 @@ function connectionRequests(learners: BenchLearner[], recorder: PhaseRecorder, c
     const choices = state.submissions % 2 ? passing : failing;
     return { learnerState: state, kind: "submit", body: JSON.stringify({ choices, answers, idempotencyKey: randomUUID() }) };
   };
-  const loseInFlight = () => {
+  /** `failed`: the connection was lost or timed out, rather than the window having ended. */
+  const loseInFlight = (failed: boolean) => {
     if (inFlight?.kind === "submit") recorder.unanswered.push({ learner: inFlight.learnerState.learner, body: inFlight.body! });
+    if (inFlight && failed) recorder.failures.push({ kind: inFlight.kind, status: null, lost: lostHow, atMs: Date.now() });
     inFlight = null;
+    lostHow = "closed";
   };
 
   const request: Request = {
     path: "/",
     setupRequest(base): Request {
-      loseInFlight();
+      // A request still in flight when the next is set up was never answered: autocannon moves on
+      // once the connection closes or the request times out.
+      loseInFlight(true);
       const state = states[turn++ % states.length];
       const submits = mode === "submits" || (mode === "mix" && state.turns++ % 2 === 0);
       inFlight = submits ? nextSubmission(state) : { learnerState: state, kind: "page" };
@@ -107,9 +122,19 @@ function connectionRequests(learners: BenchLearner[], recorder: PhaseRecorder, c
       inFlight = null;
       answered = sent.kind;
       recorder.record(sent.kind, status);
+      if (status >= 300) recorder.failures.push({ kind: sent.kind, status, atMs: Date.now() });
+      // The workbench keeps the key of a submission answered 5xx and sends it again.
+      if (sent.kind === "submit" && status >= 500) recorder.unanswered.push({ learner: sent.learnerState.learner, body: sent.body! });
       if (sent.kind === "page" || !isSuccess(status)) return;
-      const attemptId = (JSON.parse(body) as { attempt: { id: string } }).attempt.id;
+      const attemptId = attemptIdOf(body);
       const state = sent.learnerState;
+      if (attemptId === null) {
+        // autocannon keeps its response parser when it reconnects after a connection closed in the
+        // middle of an answer, so the rest of a page cut off can be read as this request's answer.
+        recorder.failures.push({ kind: sent.kind, status, lost: "unreadable answer", atMs: Date.now() });
+        if (sent.kind === "submit") recorder.unanswered.push({ learner: state.learner, body: sent.body! });
+        return;
+      }
       if (sent.kind === "submit") {
         recorder.firstTimeStored += 1;
         state.last = { body: sent.body!, attemptId };
@@ -119,7 +144,9 @@ function connectionRequests(learners: BenchLearner[], recorder: PhaseRecorder, c
   };
   // autocannon reports each response's time right after its onResponse, so `answered` names its kind.
   client.on("response", (_status, _bytes, durationMs) => recorder.addLatency(answered, durationMs));
-  client.on("done", loseInFlight);
+  client.on("done", () => loseInFlight(false));
+  client.on("timeout", () => (lostHow = "timed out"));
+  client.on("connError", (error: NodeJS.ErrnoException) => (lostHow = error.code ?? error.message));
   return [request];
 }
 
@@ -167,7 +194,7 @@ async function load(params: {
 }
 
 /**
- * A submission whose answer was lost is sent again with its key, as the workbench does; its answer
+ * A submission whose answer was lost or was a 5xx is sent again with its key, as the workbench does; its answer
  * stands for the first one. A key the server had already stored must come back as a replay.
  */
 async function settleUnanswered(baseUrl: string, recorder: PhaseRecorder): Promise<{ settled: number; failed: number }> {
@@ -197,7 +224,13 @@ async function runPhase(request: DriverRequest): Promise<PhaseFigures> {
   }
   await Promise.all(runs);
   const lost = await settleUnanswered(request.baseUrl, recorder);
-  return { ...recorder.figures(request.seconds), unanswered: lost.settled + lost.failed, settledByRetry: lost.settled, unsettled: lost.failed };
+  return {
+    ...recorder.figures(request.seconds),
+    unanswered: lost.settled + lost.failed,
+    settledByRetry: lost.settled,
+    unsettled: lost.failed,
+    failures: recorder.failures,
+  };
 }
 
 process.on("message", (request: DriverRequest) => {

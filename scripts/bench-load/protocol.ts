@@ -23,6 +23,13 @@ export type DriverRequest = {
   probe?: BenchLearner[];
 };
 
+/**
+ * A request that failed: answered with a status of 300 or more, or never answered (`status` null,
+ * `lost` says how: "closed" by the other side, "timed out", or the socket error's code). `atMs`:
+ * when, in ms since the epoch.
+ */
+export type FailedRequest = { kind: RequestKind; status: number | null; lost?: string; atMs: number };
+
 export type KindFigures = { count: number; statuses: Record<string, number>; p50: number | null; p95: number | null; p99: number | null };
 
 export type PhaseFigures = {
@@ -36,10 +43,12 @@ export type PhaseFigures = {
   retriesReplayed: number;
   /** Resends answered 2xx with another attempt (must stay 0). */
   retriesDiverged: number;
-  /** First-time submissions without an answer in the window (cut off at its end, or timed out). */
+  /** First-time submissions the learner would send again with their key: unanswered (cut off at the window's end, lost or timed out) or answered 5xx. */
   unanswered: number;
   settledByRetry: number;
   unsettled: number;
+  /** Every failed request of the window, in the order answered (the window's end cutting requests off is no failure). */
+  failures: FailedRequest[];
 };
 
 export type DriverReply = { figures: PhaseFigures } | { error: string };

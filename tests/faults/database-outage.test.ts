@@ -9,14 +9,12 @@ import { randomUUID } from "node:crypto";
 import { inArray } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { markLessonsCompleted } from "@/db/queries/progress";
-import { cohortMemberships, labAttempts } from "@/db/schema";
-import { getCourse, getLessonOfLab } from "@/lessons";
-import { createSession } from "@/lib/auth/session-store";
+import { labAttempts } from "@/db/schema";
 import { formatCertificateCode, generateCertificateCode } from "@/lib/certificates/code";
 import type { AppInstance } from "@/scripts/app-instance";
-import { createPerson, findDemoCohortId } from "../integration/support/people";
+import { findDemoCohortId } from "../integration/support/people";
 import { stackTracePattern, startFaultInstance, waitUntilHealthy } from "./support/instance";
+import { readyLearnerAtLab, type FaultLearner } from "./support/learners";
 
 const labSlug = "lone-lead-termination";
 const choices = { main: { seriesResistance: 240 } };
@@ -25,24 +23,13 @@ const learnerCount = 6;
 // well under a second, so this only catches requests that wait on a dead connection.
 const hangLimitMs = 20_000;
 
-type Learner = { id: string; cookie: string };
 type Phase = "up" | "stopping" | "down" | "starting" | "back";
 type Exchange = { status: number | "no answer"; contentType: string; body: string; retryAfter: string | null; startedIn: Phase };
-type Submission = { learner: Learner; key: string; exchange: Exchange; attemptId: string | null };
+type Submission = { learner: FaultLearner; key: string; exchange: Exchange; attemptId: string | null };
 
 let instance: AppInstance;
-let learners: Learner[];
+let learners: FaultLearner[];
 let phase: Phase = "up";
-
-async function readyLearner(cohortId: string): Promise<Learner> {
-  const person = await createPerson({ role: "learner", password: "pulled plug", label: "faults" });
-  await db.insert(cohortMemberships).values({ cohortId, userId: person.id, role: "learner" });
-  const lessonNumber = getLessonOfLab(labSlug)!.number;
-  const earlier = getCourse().lessons.filter((lesson) => lesson.number < lessonNumber);
-  await markLessonsCompleted({ userId: person.id, completions: earlier.map((lesson) => ({ lessonSlug: lesson.slug, completedAt: new Date() })) });
-  const cookie = await createSession(person.id);
-  return { id: person.id, cookie: `${cookie.name}=${cookie.value}` };
-}
 
 async function exchange(path: string, init: RequestInit & { cookie?: string } = {}): Promise<Exchange> {
   const startedIn = phase;
@@ -65,7 +52,7 @@ async function resubmit(submission: Submission): Promise<Submission> {
   return resubmit(submission);
 }
 
-async function submit(learner: Learner, key: string): Promise<Submission> {
+async function submit(learner: FaultLearner, key: string): Promise<Submission> {
   const answer = await exchange(`/api/labs/${labSlug}/attempts`, {
     method: "POST",
     cookie: learner.cookie,
@@ -81,7 +68,7 @@ async function submit(learner: Learner, key: string): Promise<Submission> {
 function driveTraffic(shouldStop: () => boolean) {
   const submissions: Submission[] = [];
   const pageLoads: Exchange[] = [];
-  const learnerLoop = async (learner: Learner) => {
+  const learnerLoop = async (learner: FaultLearner) => {
     while (!shouldStop()) {
       submissions.push(await submit(learner, randomUUID()));
       pageLoads.push(await exchange(`/labs/${labSlug}`, { cookie: learner.cookie }));
@@ -107,7 +94,7 @@ async function waitForPage(path: string, cookie: string, timeoutMs = 15_000): Pr
 beforeAll(async () => {
   instance = await startFaultInstance();
   const cohortId = await findDemoCohortId();
-  learners = await Promise.all(Array.from({ length: learnerCount }, () => readyLearner(cohortId)));
+  learners = await Promise.all(Array.from({ length: learnerCount }, () => readyLearnerAtLab({ cohortId, labSlug, label: "faults" })));
 });
 
 afterAll(async () => {

@@ -24,7 +24,7 @@ let instance: AppInstance;
 let browser: Browser;
 
 beforeAll(async () => {
-  instance = await startFaultInstance({ INVITATION_MAIL_RETRY_SECONDS: String(retrySeconds) });
+  instance = await startFaultInstance({ appEnv: { INVITATION_MAIL_RETRY_SECONDS: String(retrySeconds) } });
   browser = await launchBrowser();
 });
 

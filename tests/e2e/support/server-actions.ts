@@ -13,6 +13,8 @@ const { encodeReply } = require("next/dist/compiled/react-server-dom-webpack/cli
 };
 
 export type ActionCall = {
+  /** The app's address; defaults to the suite's app. */
+  baseUrl?: string;
   /** The page the form lives on, as a concrete path. */
   path: string;
   actionId: string;
@@ -34,18 +36,22 @@ export type ActionReply = {
   result: unknown;
   /** The action threw (or was refused by the framework), so no return value came back. */
   threw: boolean;
+  /** The cookies the answer set, as `name=value`. */
+  cookies: string[];
+  headers: Headers;
 };
 
 export async function callAction(call: ActionCall): Promise<ActionReply> {
   const body = await encodeReply(call.args);
+  const appUrl = call.baseUrl ?? baseUrl;
   const send = call.from ? fetchFrom.bind(null, call.from) : fetch;
-  const response = await send(`${baseUrl}${call.path}`, {
+  const response = await send(`${appUrl}${call.path}`, {
     method: "POST",
     redirect: "manual",
     headers: {
       accept: "text/x-component",
       "next-action": call.actionId,
-      origin: call.origin ?? baseUrl,
+      origin: call.origin ?? appUrl,
       ...(typeof body === "string" ? { "content-type": "text/plain;charset=UTF-8" } : {}),
       ...(call.cookie ? { cookie: call.cookie } : {}),
       ...call.headers,
@@ -55,7 +61,8 @@ export async function callAction(call: ActionCall): Promise<ActionReply> {
   const text = await response.text();
   const redirectHeader = response.headers.get("x-action-redirect");
   const reply = readActionResult(text);
-  return { status: response.status, body: text, redirect: redirectHeader ? redirectHeader.split(";")[0]! : null, ...reply };
+  const cookies = response.headers.getSetCookie().map((cookie) => cookie.split(";")[0]!);
+  return { status: response.status, body: text, redirect: redirectHeader ? redirectHeader.split(";")[0]! : null, ...reply, cookies, headers: response.headers };
 }
 
 /**

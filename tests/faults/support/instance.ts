@@ -1,4 +1,4 @@
-import { startAppInstance, type AppInstance } from "@/scripts/app-instance";
+import { startAppInstance, type AppInstance, type AppInstanceOptions } from "@/scripts/app-instance";
 
 // Every fault test file runs its own copy of Edgewise (cluster, mail sink, upload fake, production
 // server) so it can pull parts away without touching the shared test run. The files run one after
@@ -7,11 +7,11 @@ import { startAppInstance, type AppInstance } from "@/scripts/app-instance";
 // What this process's own database helpers, mail-sink reader and upload settings must point at.
 const sharedSettings = ["DATABASE_URL", "APP_URL", "MAIL_SINK_URL", "MAIL_SINK_TOKEN", "UPLOADTHING_TOKEN", "UPLOADTHING_INGEST_URL", "UPLOADTHING_API_URL", "UPLOAD_FAKE_DIR"];
 
-export async function startFaultInstance(appEnv?: Record<string, string>): Promise<AppInstance> {
+export async function startFaultInstance(options: Pick<AppInstanceOptions, "appEnv" | "servers"> = {}): Promise<AppInstance> {
   // The suite's own cluster trades durability for speed; a cluster made for fault tests must not,
   // or "no acknowledged write is lost" would not mean much.
   delete process.env.PG_EXTRA_CONF;
-  const instance = await startAppInstance({ name: "faults", portBase: Number(process.env.FAULTS_PORT_BASE ?? 59000), appEnv });
+  const instance = await startAppInstance({ name: "faults", portBase: Number(process.env.FAULTS_PORT_BASE ?? 59000), ...options });
   for (const key of sharedSettings) process.env[key] = instance.env[key];
   return instance;
 }
