@@ -3,6 +3,7 @@ import { evaluateEntry, type EntryValue } from "./evaluate-entry";
 import { normalizeEntry } from "./normalize-entry";
 import { quantityMath, type QuantityUnit } from "./quantity-math";
 import { describeQuantity, displayUnit, exampleEntry } from "./quantity-kinds";
+import { readResistorCode } from "./resistor-code";
 
 /** Longer entries are refused before parsing: no worked answer needs more, and parsing stays cheap. */
 export const MAX_ENTRY_LENGTH = 160;
@@ -32,7 +33,13 @@ export function formatInUnit(value: number, unit: string): string {
   return unit === "" ? number : `${number} ${displayUnit(unit)}`;
 }
 
-function evaluate(entry: string): EntryValue | null {
+const ohm = quantityMath.unit("ohm");
+
+function evaluate(entry: string, unit: string): EntryValue | null {
+  // A resistance may be written as a resistor's code ("4k7", "1K"), which mathjs would misread
+  // ("1K" as a kelvin) or not read at all.
+  const coded = unit !== "" && quantityMath.unit(unit).equalBase(ohm) ? readResistorCode(entry) : null;
+  if (coded !== null) return quantityMath.unit(coded, "ohm");
   try {
     return evaluateEntry(quantityMath.parse(normalizeEntry(entry)));
   } catch {
@@ -61,9 +68,9 @@ function bracketAdvice(entry: string, value: EntryValue, expected: number | Quan
 }
 
 /**
- * Reads a learner's entry ("330 ns", "0.33 µs", "2.2*270 ohm*600 pF") as a quantity of the same
- * kind as `unit` and returns its value in SI. `unit` is a mathjs unit ("ns", "ohm", "pF/m"), or ""
- * when a plain number is asked for. A bare number is refused when a unit is expected: "330" could be
+ * Reads a learner's entry ("330 ns", "0.33 µs", "2.2*270 ohm*600 pF", for a resistance also the
+ * resistor code "4k7") as a quantity of the same kind as `unit` and returns its value in SI. `unit`
+ * is a mathjs unit ("ns", "ohm", "pF/m"), or "" when a plain number is asked for. A bare number is refused when a unit is expected: "330" could be
  * seconds or nanoseconds, and writing the unit is part of what the course teaches. Never throws.
  */
 export function parseQuantity(entry: string, unit: string): ParsedQuantity {
@@ -76,7 +83,7 @@ export function parseQuantity(entry: string, unit: string): ParsedQuantity {
     return fail("too-long", `That entry is longer than ${MAX_ENTRY_LENGTH} characters. Shorten it, e.g. ${example}.`);
   }
 
-  const value = evaluate(entry);
+  const value = evaluate(entry, unit);
   if (value === null || isValueless(value) || !Number.isFinite(numericValue(value))) {
     const decimalComma = /\d,\d/.test(entry) ? " Write decimals with a point: 0.33, not 0,33." : "";
     return fail("unparsable", `Could not read ${quoted(entry)} as ${wanted}, e.g. ${example}.${decimalComma}`);

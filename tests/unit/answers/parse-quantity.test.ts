@@ -35,6 +35,34 @@ describe("parseQuantity reads entries with units into SI", () => {
     expect(valueOf(entry, unit) / expected).toBeCloseTo(1, 12);
   });
 
+  // The letter and digit code of IEC 60062, as printed on resistors and schematics, and the unit's
+  // name as people type it.
+  it.each([
+    ["4k7", 4700],
+    ["4K7", 4700],
+    ["321R", 321],
+    ["47r", 47],
+    ["R47", 0.47],
+    ["1K", 1000],
+    ["2M2", 2.2e6],
+    ["4.7k", 4700],
+    ["45.3R", 45.3],
+    ["321 Ohm", 321],
+    ["321 ohms", 321],
+    ["47 OHM", 47],
+    ["4.7 kOhm", 4700],
+    ["1 KOhm", 1000],
+  ])("the resistance %s", (entry, ohms) => {
+    expect(valueOf(entry, "ohm")).toBeCloseTo(ohms, 9);
+  });
+
+  it("reads a resistor's code only where a resistance is asked for", () => {
+    expect(parseQuantity("4k7", "ns")).toMatchObject({ ok: false, problem: "unparsable" });
+    expect(parseQuantity("1K", "ns")).toMatchObject({ ok: false, problem: "wrong-dimension" });
+    expect(parseQuantity("4k7k", "ohm")).toMatchObject({ ok: false });
+    expect(parseQuantity("4.7k7", "ohm")).toMatchObject({ ok: false });
+  });
+
   it("accepts any unit of the expected kind, not only the one named", () => {
     expect(valueOf("0.000330 ms", "ns") / 330e-9).toBeCloseTo(1, 12);
     expect(valueOf("800000 Hz", "kHz")).toBe(800e3);
