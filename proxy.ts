@@ -4,6 +4,7 @@ import { formBodyLimitFor } from "@/lib/http/body-limits";
 import { readBodyWithin } from "@/lib/http/bounded-body";
 import { AppError } from "@/lib/http/errors";
 import { errorResponse } from "@/lib/http/respond";
+import { refuseCertificateLookupOverLimit } from "@/lib/certificates/page-lookup-limit";
 import { isDatabaseReachable } from "@/lib/outage/database-probe";
 import { unavailablePageResponse } from "@/lib/outage/unavailable-page";
 
@@ -128,6 +129,10 @@ export async function proxy(request: NextRequest) {
   // once it has failed, so an outage is answered here. Server actions go on: their forms keep what
   // was typed and say why.
   if (!request.headers.has("next-action") && !(await isDatabaseReachable())) return withTransportSecurity(unavailablePageResponse());
+  if (readsNoBody) {
+    const overLimit = await refuseCertificateLookupOverLimit(request);
+    if (overLimit) return withTransportSecurity(overLimit);
+  }
 
   const policy = contentSecurityPolicy(createNonce());
   // Next takes the nonce for its own inline scripts from the policy on the request.

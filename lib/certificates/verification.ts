@@ -1,6 +1,6 @@
 import "server-only";
 import { findCertificateByCode } from "@/db/queries/certificates";
-import { spendRateLimits } from "@/lib/rate-limit/rate-limiter";
+import { spendRateLimits, type LimitDecision } from "@/lib/rate-limit/rate-limiter";
 import { parseCertificateCode } from "./code";
 
 /** What the public page may say: the certificate's own words, nothing else about the learner. */
@@ -17,8 +17,26 @@ export type Verification =
 export async function verifyCertificate(params: { code: string; clientAddress: string }): Promise<Verification> {
   const code = parseCertificateCode(params.code);
   if (!code) return { status: "not-found" };
-  const limit = await spendRateLimits("certificate-lookup", { address: params.clientAddress });
+  const limit = await spendCertificateLookup(params.clientAddress);
   if (!limit.allowed) return { status: "rate-limited", retryAfterSeconds: limit.retryAfterSeconds };
+  return lookUpCertificate(code);
+}
+
+/** One look-up from the address, against its certificate-lookup limit. */
+export function spendCertificateLookup(clientAddress: string): Promise<LimitDecision> {
+  return spendRateLimits("certificate-lookup", { address: clientAddress });
+}
+
+/**
+ * The answer for a look-up already counted: the public page's, which proxy.ts counts so that it
+ * can answer 429 before the page renders.
+ */
+export async function verifyCountedCertificate(params: { code: string }): Promise<Exclude<Verification, { status: "rate-limited" }>> {
+  const code = parseCertificateCode(params.code);
+  return code ? lookUpCertificate(code) : { status: "not-found" };
+}
+
+async function lookUpCertificate(code: string): Promise<Exclude<Verification, { status: "rate-limited" }>> {
   const certificate = await findCertificateByCode({ code });
   if (!certificate) return { status: "not-found" };
   if (certificate.revokedAt) {

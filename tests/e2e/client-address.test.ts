@@ -3,7 +3,8 @@
  * count the connection's own address, so a forged X-Forwarded-For neither escapes a limit nor locks
  * out the address it names while TRUSTED_PROXIES is empty; a second server on the same database
  * with TRUSTED_PROXIES set believes the header from its trusted proxy only; both servers count
- * against the same limits; and the limited server actions answer with the wait as form state.
+ * against the same limits; the certificate's public page shares the look-up limit and answers 429
+ * over it; and the limited server actions answer with the wait as form state.
  * Each client connects from an address of its own in 127.0.0.0/8, as another computer would.
  */
 import { randomBytes, randomUUID } from "node:crypto";
@@ -92,6 +93,22 @@ describe("two app servers on one database", () => {
     await spendLookups(proxied.origin, roaming, lookups.points - half, () => undefined);
     expect((await lookUp(baseUrl, roaming)).status).toBe(429);
     expect((await lookUp(proxied.origin, roaming)).status).toBe(429);
+  });
+});
+
+describe("the certificate's public page", () => {
+  it("counts against the address's look-up limit with the API, and over it answers 429 with the wait", async () => {
+    const from = uniqueLoopbackAddress();
+    const openPage = (code: string) => fetchFrom(from, `${baseUrl}/c/${code}`);
+    expect((await openPage(anyCode())).status).toBe(404);
+    await spendLookups(baseUrl, from, lookups.points - 1, () => undefined);
+    const refused = await openPage(anyCode());
+    expect(refused.status).toBe(429);
+    expect(Number(refused.headers.get("retry-after"))).toBeGreaterThan(lookups.windowSeconds - 60);
+    expect(await refused.text()).toMatch(/Too many certificate checks[\s\S]*Wait \d+ minutes?/);
+    expect((await lookUp(baseUrl, from)).status).toBe(429);
+    // A malformed code is not looked up, so it is not counted or refused: it is simply not found.
+    expect((await openPage("not-a-code")).status).toBe(404);
   });
 });
 
