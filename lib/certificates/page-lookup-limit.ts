@@ -37,5 +37,6 @@ export async function refuseCertificateLookupOverLimit(request: NextRequest): Pr
       `Wait ${describeWait(limit.retryAfterSeconds)}; this page then loads again by itself.`,
     ],
     retryAfterSeconds: limit.retryAfterSeconds,
+    offerRetry: false,
   });
 }

@@ -7,10 +7,14 @@ export type PlainPage = {
   title: string;
   paragraphs: string[];
   retryAfterSeconds: number;
+  /** A "Try again now" button: for a wait that may end early (an outage), not for a limit's fixed one. */
+  offerRetry: boolean;
 };
 
 const escapes: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };
 const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => escapes[c]!);
+
+const retryButton = `<a href="" style="display:inline-block;margin-top:20px;padding:10px 18px;border-radius:8px;background:#1d5c63;color:#fff;font-weight:600;text-decoration:none">Try again now</a>`;
 
 function renderPlainPage(page: PlainPage): string {
   const paragraphs = page.paragraphs
@@ -29,7 +33,7 @@ function renderPlainPage(page: PlainPage): string {
 <main style="max-width:560px;margin:0 auto;padding:56px 20px">
 <h1 style="font-size:28px;margin:0 0 12px">${escapeHtml(page.title)}</h1>
 ${paragraphs}
-<a href="" style="display:inline-block;margin-top:20px;padding:10px 18px;border-radius:8px;background:#1d5c63;color:#fff;font-weight:600;text-decoration:none">Try again now</a>
+${page.offerRetry ? retryButton : ""}
 </main>
 </body>
 </html>

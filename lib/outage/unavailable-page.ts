@@ -14,5 +14,6 @@ export function unavailablePageResponse(): Response {
       `This page tries again by itself every ${retryAfterSeconds} seconds.`,
     ],
     retryAfterSeconds,
+    offerRetry: true,
   });
 }
