@@ -154,7 +154,7 @@ export function ScopeView({ run, stale = false, caption, height = 300, children 
       <div className="mt-3">
         <ScopeLegend />
       </div>
-      <div className="relative mt-2 -ml-2" aria-hidden="true" ref={chartBox} style={{ minHeight: height }}>
+      <div className="relative mt-2 -ml-2" aria-hidden="true" ref={chartBox} style={{ minHeight: height }} data-testid="scope-chart">
         {chart}
         {dragging ? <DragOverlay run={run} window={{ from, to }} yDomain={yDomain} width={chartWidth} height={height} /> : null}
       </div>

@@ -46,12 +46,15 @@ export function WorkbenchPreview({
   rule,
   caption,
   note,
+  scopeHeight,
 }: {
   input: SimInput;
   dragging?: boolean;
   rule: PassRule;
   caption: string;
   note?: React.ReactNode;
+  /** The chart's height in pixels: smaller on a phone, where the scope stays on screen beside the controls. */
+  scopeHeight?: number;
 }) {
   const live = useLiveSimulation(input, dragging ? DRAG_SPAN : FULL_SPAN);
   const run = live.result;
@@ -65,11 +68,11 @@ export function WorkbenchPreview({
   const scope = useMemo(
     () =>
       run ? (
-        <ScopeView run={run} stale={stale} caption={caption}>
+        <ScopeView run={run} stale={stale} caption={caption} height={scopeHeight}>
           <SimulationBadge pending={stale} roundTripMs={roundTripMs} computeMs={run.computeMs} />
         </ScopeView>
       ) : null,
-    [run, stale, caption, roundTripMs],
+    [run, stale, caption, roundTripMs, scopeHeight],
   );
 
   return (
@@ -82,6 +85,12 @@ export function WorkbenchPreview({
       {run ? (
         <>
           {note}
+          {judgement ? (
+            // On a phone the full judgement sits below the scope, out of sight while the controls move: its gist goes first.
+            <p aria-hidden="true" className={`mb-2 text-sm font-semibold lg:hidden ${judgement.pass ? "text-ok" : "text-copper"}`}>
+              {judgement.pass ? "✓ Meets the lab's rule (preview)" : "✗ Does not yet meet the lab's rule (preview)"}
+            </p>
+          ) : null}
           {scope}
           {run.span.quality === DRAG_SPAN.quality ? <DragPreviewNote run={run} /> : null}
           {judgement ? (
