@@ -2,6 +2,7 @@
 
 import dynamic from "next/dynamic";
 import { useMemo, useState } from "react";
+import { createPortal } from "react-dom";
 import type { LiveRun } from "@/components/simulation";
 import { BitStrip } from "./bit-strip";
 import { DragOverlay } from "./drag-overlay";
@@ -50,6 +51,8 @@ type Props = {
   /** What this scope view shows, for the figure's accessible name. */
   caption: string;
   height?: number;
+  /** Where the decoded bits and the verdict in words go when not under the chart (a phone, where the chart stays on screen alone). */
+  detailsIn?: HTMLElement | null;
   children?: React.ReactNode;
 };
 
@@ -58,7 +61,7 @@ type Props = {
  * misread bits and the verdict's reasons marked, a time zoom down to one edge, the decoded bits
  * and the whole verdict in words beside it.
  */
-export function ScopeView({ run, stale = false, caption, height = 300, children }: Props) {
+export function ScopeView({ run, stale = false, caption, height = 300, detailsIn = null, children }: Props) {
   const [mode, setMode] = useState<ZoomMode>("whole");
   const [chosenBit, setChosenBit] = useState<number | null>(null);
   const [chartBox, chartWidth] = useElementWidth<HTMLDivElement>();
@@ -106,6 +109,15 @@ export function ScopeView({ run, stale = false, caption, height = 300, children 
     setChosenBit(at.bit ?? bitAtFarEnd(run, at.time));
     setMode("bit");
   };
+
+  const details = (
+    <>
+      <BitStrip bits={run.bits} selected={mode === "whole" ? null : bitIndex} onSelect={selectBit} />
+      <div className="mt-4 rounded-lg border border-line bg-sunken/50 p-4">
+        <ScopeSummary run={run} onShowReason={showReason} />
+      </div>
+    </>
+  );
 
   return (
     <figure className={`transition-opacity ${stale ? "opacity-60" : ""}`} aria-busy={stale}>
@@ -158,10 +170,7 @@ export function ScopeView({ run, stale = false, caption, height = 300, children 
         {chart}
         {dragging ? <DragOverlay run={run} window={{ from, to }} yDomain={yDomain} width={chartWidth} height={height} /> : null}
       </div>
-      <BitStrip bits={run.bits} selected={mode === "whole" ? null : bitIndex} onSelect={selectBit} />
-      <div className="mt-4 rounded-lg border border-line bg-sunken/50 p-4">
-        <ScopeSummary run={run} onShowReason={showReason} />
-      </div>
+      {detailsIn ? createPortal(details, detailsIn) : details}
     </figure>
   );
 }

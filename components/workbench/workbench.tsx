@@ -1,7 +1,7 @@
 "use client";
 
 import { QueryClient, QueryClientProvider, useInfiniteQuery, useMutation, useQueryClient } from "@tanstack/react-query";
-import { useEffect, useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { LabChoices } from "@/lessons";
 import { buildSimInput } from "@/lessons/build-run";
 import type { RunChoices } from "@/lessons/schema";
@@ -28,6 +28,10 @@ type Props = {
   questionTexts: Record<string, QuestionText>;
   /** What the workbench opens with: the learner's latest saved choices and answers, or the scenario's own. */
   draft: LabDraft;
+  /** When the server saved that draft (ms since the epoch); null when it has none. */
+  savedAt: number | null;
+  /** Where this browser keeps a change the server has not received yet: one key per learner and lab. */
+  draftStorageKey: string;
 };
 
 type Replay = { attempt: AttemptView; inputs: Record<string, SimInput> };
@@ -65,7 +69,7 @@ function DraftStatus({ saving, onRetry }: { saving: DraftSaving; onRetry: () => 
   );
 }
 
-function WorkbenchPanels({ setup, questionTexts, draft }: Props) {
+function WorkbenchPanels({ setup, questionTexts, draft, savedAt, draftStorageKey }: Props) {
   const { runs, labSlug } = setup;
   const queryClient = useQueryClient();
   const historyKey = ["lab-attempts", labSlug] as const;
@@ -73,9 +77,21 @@ function WorkbenchPanels({ setup, questionTexts, draft }: Props) {
   const [choices, setChoices] = useState<LabChoices>(draft.choices);
   const [activeRunId, setActiveRunId] = useState(runs[0].id);
   const [answers, setAnswers] = useState<Record<string, string>>(draft.answers);
-  const { saving, retry } = useDraftSaving(labSlug, { choices, answers });
+  const restore = useCallback((unsaved: LabDraft) => {
+    setChoices(unsaved.choices);
+    setAnswers(unsaved.answers);
+  }, []);
+  const { saving, retry } = useDraftSaving({ labSlug, draft: { choices, answers }, savedAt, storageKey: draftStorageKey, restore });
   const narrow = useNarrowScreen();
   const scopeSection = useRef<HTMLElement>(null);
+  // On a phone the scope's words and the rule's judgement sit in a card below the controls.
+  const [judgementSlot, setJudgementSlot] = useState<HTMLDivElement | null>(null);
+  const [scopeWordsSlot, setScopeWordsSlot] = useState<HTMLDivElement | null>(null);
+  // One object while the slots stay, so that the scope's memoised drawing is not redone on every render.
+  const detailsIn = useMemo(
+    () => (narrow && judgementSlot && scopeWordsSlot ? { judgement: judgementSlot, scope: scopeWordsSlot } : null),
+    [narrow, judgementSlot, scopeWordsSlot],
+  );
   const [replay, setReplay] = useState<Replay | null>(null);
   const [reply, setReply] = useState<SubmitReply | null>(null);
   const pendingKey = useRef<PendingKey | null>(null);
@@ -194,7 +210,7 @@ function WorkbenchPanels({ setup, questionTexts, draft }: Props) {
           {/* On a phone the scope comes first and stays on screen while the controls below it scroll. */}
           <section
             ref={scopeSection}
-            className={`${cardClass} scroll-mt-4 max-lg:sticky max-lg:top-0 max-lg:z-10 max-lg:order-first max-lg:max-h-[58svh] max-lg:overflow-y-auto max-lg:p-3 max-lg:shadow-md`}
+            className={`${cardClass} scroll-mt-4 max-lg:sticky max-lg:top-0 max-lg:z-10 max-lg:order-first max-lg:p-3 max-lg:shadow-md`}
             aria-labelledby="scope-heading"
             data-testid="scope-card"
           >
@@ -207,6 +223,7 @@ function WorkbenchPanels({ setup, questionTexts, draft }: Props) {
               rule={setup.passRule}
               caption={`Scope view of ${activeRun.label}`}
               scopeHeight={narrow ? 170 : 300}
+              detailsIn={detailsIn}
               note={
                 replay ? (
                   <div className="mb-4 flex flex-wrap items-center gap-3 rounded-lg border border-accent/30 bg-accent-soft px-3 py-2 text-sm" role="status">
@@ -232,6 +249,12 @@ function WorkbenchPanels({ setup, questionTexts, draft }: Props) {
               }
             />
           </section>
+          {narrow ? (
+            <section className={cardClass} aria-label="What the scope shows" data-testid="scope-words-card">
+              <div ref={setJudgementSlot} />
+              <div ref={setScopeWordsSlot} className="mt-4" />
+            </section>
+          ) : null}
         </div>
       </div>
 

@@ -3,9 +3,9 @@ import { db } from "../client";
 import { labDrafts } from "../schema";
 
 /** The learner's saved workbench for a lab, as stored (checked against their variant by lib/lab-drafts). */
-export async function findLabDraft(params: { userId: string; labSlug: string }): Promise<{ choices: unknown; answers: unknown } | null> {
+export async function findLabDraft(params: { userId: string; labSlug: string }): Promise<{ choices: unknown; answers: unknown; updatedAt: Date } | null> {
   const [row] = await db
-    .select({ choices: labDrafts.choices, answers: labDrafts.answers })
+    .select({ choices: labDrafts.choices, answers: labDrafts.answers, updatedAt: labDrafts.updatedAt })
     .from(labDrafts)
     .where(and(eq(labDrafts.userId, params.userId), eq(labDrafts.labSlug, params.labSlug)))
     .limit(1);

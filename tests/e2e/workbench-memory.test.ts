@@ -137,7 +137,7 @@ describe("the workbench remembers", () => {
       for (const run of runs) {
         await page.getByRole("tab", { name: run.tab }).click();
         await typeResistor(page, run.entry);
-        expect(await shown(resistor(page))).toBe(run.value);
+        await expect.poll(() => shown(resistor(page)), { timeout: 10_000 }).toBe(run.value);
       }
       const body = (await saved).request().postData() ?? "";
       expect(JSON.parse(body).choices).toEqual({ arch: { seriesResistance: 240 }, facade: { seriesResistance: 43 }, canopy: { seriesResistance: 47 } });
@@ -191,7 +191,7 @@ describe("the workbench remembers", () => {
       await page.getByTestId("grading-result").getByText(/Attempt 1:/).waitFor({ timeout: 60_000 });
       const redraw = page.getByRole("button", { name: "Redraw attempt 1" });
       await redraw.scrollIntoViewIfNeeded();
-      expect(await page.getByTestId("scope-card").evaluate((card) => card.getBoundingClientRect().bottom)).toBeLessThan(0);
+      expect(await page.getByTestId("scope-card").evaluate((card) => card.getBoundingClientRect().top)).toBeLessThan(0);
       await redraw.click();
       await page.getByRole("heading", { name: "Attempt 1 on the scope" }).waitFor({ timeout: 30_000 });
       await page.waitForFunction(
@@ -307,8 +307,8 @@ describe("the workbench on a phone (390 px)", () => {
       const chart = page.getByTestId("scope-chart");
       // Scroll down as a learner's thumb would, until the resistor's slider shows under the scope.
       for (let i = 0; i < 40 && !(await onScreen(slider)).uncovered; i += 1) await page.mouse.wheel(0, 120);
-      const sliderNow = await onScreen(slider);
-      expect(sliderNow).toMatchObject({ inside: true, uncovered: true });
+      await saveScreenshot(page, "workbench-phone-scrolled", { fullPage: false });
+      expect(await onScreen(slider)).toMatchObject({ inside: true, uncovered: true });
       expect(await onScreen(chart)).toMatchObject({ inside: true });
 
       // Held and dragged: both stay in view while the control moves.

@@ -39,7 +39,8 @@ export default async function LabPage({ params }: Props) {
 
   const variant = labVariant(lab, variantSeedFor(user.id, lab.slug));
   const setup = workbenchSetup(lab, variant);
-  const draft = openingDraft(lab, variant, await findLabDraft({ userId: user.id, labSlug: lab.slug }));
+  const saved = await findLabDraft({ userId: user.id, labSlug: lab.slug });
+  const draft = openingDraft(lab, variant, saved);
   const questionTexts = Object.fromEntries(
     lab.questions.map((q) => [
       q.id,
@@ -73,7 +74,13 @@ export default async function LabPage({ params }: Props) {
           .
         </p>
       </section>
-      <Workbench setup={setup} questionTexts={questionTexts} draft={draft} />
+      <Workbench
+        setup={setup}
+        questionTexts={questionTexts}
+        draft={draft}
+        savedAt={saved?.updatedAt.getTime() ?? null}
+        draftStorageKey={`edgewise:workbench:${user.id}:${lab.slug}`}
+      />
     </AppFrame>
   );
 }
