@@ -110,8 +110,15 @@ export function ScopeView({ run, stale = false, caption, height = 300, detailsIn
     setMode("bit");
   };
 
+  const legend = (
+    <div className="mt-3">
+      <ScopeLegend />
+    </div>
+  );
+  // Away from the chart (a phone) the legend goes with the words, so that the chart alone stays compact.
   const details = (
     <>
+      {detailsIn ? legend : null}
       <BitStrip bits={run.bits} selected={mode === "whole" ? null : bitIndex} onSelect={selectBit} />
       <div className="mt-4 rounded-lg border border-line bg-sunken/50 p-4">
         <ScopeSummary run={run} onShowReason={showReason} />
@@ -163,9 +170,7 @@ export function ScopeView({ run, stale = false, caption, height = 300, detailsIn
         ) : null}
         {children}
       </div>
-      <div className="mt-3">
-        <ScopeLegend />
-      </div>
+      {detailsIn ? null : legend}
       <div className="relative mt-2 -ml-2" aria-hidden="true" ref={chartBox} style={{ minHeight: height }} data-testid="scope-chart">
         {chart}
         {dragging ? <DragOverlay run={run} window={{ from, to }} yDomain={yDomain} width={chartWidth} height={height} /> : null}

@@ -112,7 +112,8 @@ describe("the workbench remembers", () => {
       const alert = page.locator('[data-testid="draft-status"][data-status="failed"]');
       await alert.waitFor({ timeout: 30_000 });
       expect(await alert.innerText()).toMatch(/Your latest choices are not saved yet: The workbench could not reach the server/);
-      await saveScreenshot(page, "workbench-save-failed");
+      await alert.scrollIntoViewIfNeeded();
+      await saveScreenshot(page, "workbench-save-failed", { fullPage: false });
       await page.unroute(`**/api/labs/${LAB6}/draft`);
       const saved = savedWith(page, LAB6, '"seriesResistance":150');
       await alert.getByRole("button", { name: "Save again" }).click();
@@ -230,6 +231,7 @@ describe("values as the trade writes them", () => {
       await page.getByText("'47 V' is a voltage; this asks for a resistance.").waitFor({ timeout: 10_000 });
       expect(await page.getByLabel("Or type a value").getAttribute("aria-invalid")).toBe("true");
       expect(await shown(resistor(page))).toBe("47 Ω");
+      await page.getByLabel("Or type a value").scrollIntoViewIfNeeded();
       await saveScreenshot(page, "workbench-typed-value", { fullPage: false });
     } finally {
       await context.close();
