@@ -272,6 +272,20 @@ describe("values as the trade writes them", () => {
       expect(await shown(slider)).toBe("910 Ω");
       expect(await page.locator("output").first().innerText()).toBe("910 Ω");
 
+      // The lessons' figures step the same way.
+      await page.goto("/lessons/series-termination");
+      const figureSlider = page.getByRole("slider").first();
+      await figureSlider.focus();
+      await page.keyboard.press("Home");
+      const lowest = await shown(figureSlider);
+      await page.keyboard.press("End");
+      const highest = await shown(figureSlider);
+      expect(highest).not.toBe(lowest);
+      await page.keyboard.press("ArrowLeft");
+      expect(await shown(figureSlider)).not.toBe(highest);
+      await page.keyboard.press("PageDown");
+      expect(await shown(figureSlider)).not.toBe(highest);
+
       const { page: timingPage, context: timingContext } = await signedInAt(LAB1);
       try {
         const one = timingPage.getByRole("slider", { name: "High time of a 1 bit" });
