@@ -46,8 +46,8 @@ export default async function LandingPage() {
             </h1>
             <p className="mt-5 text-lg text-ink-soft">
               Edgewise is a course for technicians who install addressable-LED lighting. It teaches the physics of the
-              data line from the pulse up to a working design rule, lets every learner practise on simulated runs that
-              behave like the bench, and certifies who has passed.
+              data line from the pulse up to a working design rule, lets every learner practise on the simulator's runs
+              before confirming them on the bench, and certifies who has passed.
             </p>
             <div className="mt-8 flex flex-wrap gap-3">
               <Link href="/sign-in" className={buttonClass("primary")}>

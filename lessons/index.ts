@@ -30,6 +30,6 @@ export { FIGURE_IDS } from "./figures";
 export { figureSimInputs } from "./figure-sim-inputs";
 export { labVariant, defaultVariant, type LabVariant, type RunVariant } from "./variant";
 export { buildSimInput } from "./build-run";
-export { labChoicesSchemaFor, runChoicesSchemaFor, resistorValuesOnOffer, lengthsOnOffer, startingChoices, type LabChoices } from "./run-choices";
+export { labChoicesSchemaFor, runChoicesSchemaFor, runControlValuesSchemaFor, resistorValuesOnOffer, lengthsOnOffer, startingChoices, type LabChoices } from "./run-choices";
 export { COURSE_CLAMP_CURRENT_LIMIT, JUDGEMENT_PROMISE, judgeRun, ruleMargins, type RunJudgement, type RuleFailure } from "./pass-rule";
 export { scoreRun, scoreAttempt } from "./scoring";

@@ -26,10 +26,10 @@ const onGrid = (value: number, min: number, step: number) => Math.abs((value - m
 const sameValue = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(b));
 
 /**
- * The schema of one run's choices: exactly the fields the learner sets, each restricted to what is
- * on offer, so the grader can reject a tampered submission with the field named.
+ * Each of one run's choices on its own: exactly the fields the learner sets, each restricted to
+ * what its control offers. A workbench left mid-change (a 0's high time above a 1's) passes.
  */
-export function runChoicesSchemaFor(run: RunSpec, scenario: Scenario): z.ZodType<RunChoices> {
+export function runControlValuesSchemaFor(run: RunSpec, scenario: Scenario) {
   const { choices } = run;
   const resistors = resistorValuesOnOffer(run);
   const lengths = lengthsOnOffer(run, scenario);
@@ -41,38 +41,44 @@ export function runChoicesSchemaFor(run: RunSpec, scenario: Scenario): z.ZodType
       .min(range.min)
       .max(range.max)
       .refine((v) => onGrid(v, range.min, range.step), { message: "must be on the control's steps" });
-  const bitPeriod = scenario.signal.bitPeriod ?? DEFAULT_BIT_PERIOD;
 
-  return z
-    .strictObject({
-      cable: choices.cable
-        ? cableKindSchema.refine((kind) => scenario.cableOptions?.includes(kind), {
-            message: `choose one of: ${scenario.cableOptions?.join(", ")}`,
-          })
-        : absent,
-      driver: choices.driver ? z.string().refine((id) => drivers.includes(id), { message: `choose one of: ${drivers.join(", ")}` }) : absent,
-      seriesResistance: choices.seriesResistance
-        ? z.number().refine((v) => resistors.some((r) => sameValue(v, r)), {
-            message: `must be one of the ${choices.seriesResistance.series} values from ${choices.seriesResistance.min} to ${choices.seriesResistance.max} ohm`,
-          })
-        : absent,
-      length: choices.length
-        ? z.number().refine((v) => lengths.some((l) => sameValue(v, l)), {
-            message: `must be a length on offer from ${scenario.lengthRange?.[0]} to ${scenario.lengthRange?.[1]} m`,
-          })
-        : absent,
-      zeroHigh: choices.timing ? timeOnGrid(choices.timing.zeroHigh) : absent,
-      oneHigh: choices.timing ? timeOnGrid(choices.timing.oneHigh) : absent,
-    })
-    .superRefine((value, ctx) => {
-      const { zeroHigh, oneHigh } = value;
-      if (zeroHigh !== undefined && oneHigh !== undefined && zeroHigh >= oneHigh) {
-        ctx.addIssue({ code: "custom", path: ["zeroHigh"], message: "the high time of a 0 must be shorter than that of a 1" });
-      }
-      if (oneHigh !== undefined && oneHigh >= bitPeriod) {
-        ctx.addIssue({ code: "custom", path: ["oneHigh"], message: "the high time of a 1 must be shorter than the bit period" });
-      }
-    });
+  return z.strictObject({
+    cable: choices.cable
+      ? cableKindSchema.refine((kind) => scenario.cableOptions?.includes(kind), {
+          message: `choose one of: ${scenario.cableOptions?.join(", ")}`,
+        })
+      : absent,
+    driver: choices.driver ? z.string().refine((id) => drivers.includes(id), { message: `choose one of: ${drivers.join(", ")}` }) : absent,
+    seriesResistance: choices.seriesResistance
+      ? z.number().refine((v) => resistors.some((r) => sameValue(v, r)), {
+          message: `must be one of the ${choices.seriesResistance.series} values from ${choices.seriesResistance.min} to ${choices.seriesResistance.max} ohm`,
+        })
+      : absent,
+    length: choices.length
+      ? z.number().refine((v) => lengths.some((l) => sameValue(v, l)), {
+          message: `must be a length on offer from ${scenario.lengthRange?.[0]} to ${scenario.lengthRange?.[1]} m`,
+        })
+      : absent,
+    zeroHigh: choices.timing ? timeOnGrid(choices.timing.zeroHigh) : absent,
+    oneHigh: choices.timing ? timeOnGrid(choices.timing.oneHigh) : absent,
+  });
+}
+
+/**
+ * The schema of one run's choices: each value on offer and the timing coherent, so the grader can
+ * reject a tampered submission with the field named.
+ */
+export function runChoicesSchemaFor(run: RunSpec, scenario: Scenario): z.ZodType<RunChoices> {
+  const bitPeriod = scenario.signal.bitPeriod ?? DEFAULT_BIT_PERIOD;
+  return runControlValuesSchemaFor(run, scenario).superRefine((value, ctx) => {
+    const { zeroHigh, oneHigh } = value;
+    if (zeroHigh !== undefined && oneHigh !== undefined && zeroHigh >= oneHigh) {
+      ctx.addIssue({ code: "custom", path: ["zeroHigh"], message: "the high time of a 0 must be shorter than that of a 1" });
+    }
+    if (oneHigh !== undefined && oneHigh >= bitPeriod) {
+      ctx.addIssue({ code: "custom", path: ["oneHigh"], message: "the high time of a 1 must be shorter than the bit period" });
+    }
+  });
 }
 
 /** The schema of a whole submission: `{ [runId]: choices }` for the given variant of the lab. */

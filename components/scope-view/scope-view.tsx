@@ -2,6 +2,7 @@
 
 import dynamic from "next/dynamic";
 import { useMemo, useState } from "react";
+import { createPortal } from "react-dom";
 import type { LiveRun } from "@/components/simulation";
 import { BitStrip } from "./bit-strip";
 import { DragOverlay } from "./drag-overlay";
@@ -50,6 +51,8 @@ type Props = {
   /** What this scope view shows, for the figure's accessible name. */
   caption: string;
   height?: number;
+  /** Where the decoded bits and the verdict in words go when not under the chart (a phone, where the chart stays on screen alone). */
+  detailsIn?: HTMLElement | null;
   children?: React.ReactNode;
 };
 
@@ -58,7 +61,7 @@ type Props = {
  * misread bits and the verdict's reasons marked, a time zoom down to one edge, the decoded bits
  * and the whole verdict in words beside it.
  */
-export function ScopeView({ run, stale = false, caption, height = 300, children }: Props) {
+export function ScopeView({ run, stale = false, caption, height = 300, detailsIn = null, children }: Props) {
   const [mode, setMode] = useState<ZoomMode>("whole");
   const [chosenBit, setChosenBit] = useState<number | null>(null);
   const [chartBox, chartWidth] = useElementWidth<HTMLDivElement>();
@@ -107,6 +110,22 @@ export function ScopeView({ run, stale = false, caption, height = 300, children 
     setMode("bit");
   };
 
+  const legend = (
+    <div className="mt-3">
+      <ScopeLegend />
+    </div>
+  );
+  // Away from the chart (a phone) the legend goes with the words, so that the chart alone stays compact.
+  const details = (
+    <>
+      {detailsIn ? legend : null}
+      <BitStrip bits={run.bits} selected={mode === "whole" ? null : bitIndex} onSelect={selectBit} />
+      <div className="mt-4 rounded-lg border border-line bg-sunken/50 p-4">
+        <ScopeSummary run={run} onShowReason={showReason} />
+      </div>
+    </>
+  );
+
   return (
     <figure className={`transition-opacity ${stale ? "opacity-60" : ""}`} aria-busy={stale}>
       <figcaption className="sr-only">{caption}</figcaption>
@@ -151,17 +170,12 @@ export function ScopeView({ run, stale = false, caption, height = 300, children 
         ) : null}
         {children}
       </div>
-      <div className="mt-3">
-        <ScopeLegend />
-      </div>
-      <div className="relative mt-2 -ml-2" aria-hidden="true" ref={chartBox} style={{ minHeight: height }}>
+      {detailsIn ? null : legend}
+      <div className="relative mt-2 -ml-2" aria-hidden="true" ref={chartBox} style={{ minHeight: height }} data-testid="scope-chart">
         {chart}
         {dragging ? <DragOverlay run={run} window={{ from, to }} yDomain={yDomain} width={chartWidth} height={height} /> : null}
       </div>
-      <BitStrip bits={run.bits} selected={mode === "whole" ? null : bitIndex} onSelect={selectBit} />
-      <div className="mt-4 rounded-lg border border-line bg-sunken/50 p-4">
-        <ScopeSummary run={run} onShowReason={showReason} />
-      </div>
+      {detailsIn ? createPortal(details, detailsIn) : details}
     </figure>
   );
 }

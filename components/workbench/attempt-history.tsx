@@ -2,11 +2,11 @@
 
 import { formatMoment } from "@/components/ui/dates";
 import type { AttemptView } from "@/lib/grading";
-import type { BenchRun } from "./bench-types";
+import type { WorkbenchRun } from "./workbench-types";
 import { describeChoices } from "./run-facts";
 
 type Props = {
-  runs: BenchRun[];
+  runs: WorkbenchRun[];
   attempts: AttemptView[] | undefined;
   loading: boolean;
   error: string | null;

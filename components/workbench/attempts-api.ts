@@ -2,7 +2,7 @@ import type { LabChoices } from "@/lessons";
 import type { AttemptView, VerdictLine } from "@/lib/grading";
 import type { SimInput } from "@/lib/sim";
 
-// The workbench's calls to the attempt routes. Errors carry the server's sentence and, for a 422,
+// The workbench's calls to the lab routes (attempts, and the saved workbench). Errors carry the server's sentence and, for a 422,
 // the messages per field, so the form can show them where they belong.
 
 export type Submission = { choices: LabChoices; answers?: Record<string, string>; idempotencyKey: string };
@@ -66,4 +66,17 @@ export function listAttempts(labSlug: string, cursor: string | null): Promise<At
 
 export function fetchAttempt(labSlug: string, attemptId: string): Promise<{ attempt: AttemptView; runs: StoredRun[] }> {
   return call(`${attemptsUrl(labSlug)}/${encodeURIComponent(attemptId)}`);
+}
+
+/**
+ * Saves the learner's latest workbench (`draft` as JSON: choices by run and typed answers).
+ * `keepalive` lets the save outlive the page, for the one sent as the learner leaves it.
+ */
+export async function saveDraft(labSlug: string, draft: string, options: { keepalive?: boolean } = {}): Promise<void> {
+  await call(`/api/labs/${encodeURIComponent(labSlug)}/draft`, {
+    method: "POST",
+    headers: { "content-type": "application/json" },
+    body: draft,
+    keepalive: options.keepalive,
+  });
 }

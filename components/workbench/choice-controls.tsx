@@ -2,7 +2,8 @@
 
 import { useId } from "react";
 import type { RunChoices } from "@/lessons/schema";
-import type { BenchRun, CableOption, DriverOption } from "./bench-types";
+import type { WorkbenchRun, CableOption, DriverOption } from "./workbench-types";
+import { ResistorEntryField } from "./resistor-entry-field";
 import { formatDelayPerMetre, formatMetres, formatNanoseconds, formatOhms, formatPicofaradsPerMetre } from "./quantities";
 
 type StepperProps = {
@@ -19,7 +20,8 @@ type StepperProps = {
 
 /**
  * A slider over a fixed list of values (an E-series, a length grid, timing steps) with step
- * buttons beside it: arrows and Page Up/Down move along the list from the keyboard.
+ * buttons beside it. From the keyboard the slider steps along the list as a native range does:
+ * arrows one value, Page Up/Down a tenth of the list, Home and End to its ends.
  */
 function ValueStepper({ label, values, value, format, onChange, onDragStart, note, disabled }: StepperProps) {
   const id = useId();
@@ -56,6 +58,7 @@ function ValueStepper({ label, values, value, format, onChange, onDragStart, not
           onChange={(event) => move(Number(event.target.value))}
           onPointerDown={onDragStart}
           aria-valuetext={format(value)}
+          aria-describedby={`${id}-range`}
           className="h-2 w-full cursor-pointer accent-accent"
         />
         <button
@@ -68,7 +71,7 @@ function ValueStepper({ label, values, value, format, onChange, onDragStart, not
           +
         </button>
       </div>
-      <p className="flex justify-between text-xs text-ink-faint">
+      <p id={`${id}-range`} className="flex justify-between text-xs text-ink-faint">
         <span>{format(values[0])}</span>
         {note ? <span>{note}</span> : null}
         <span>{format(values[values.length - 1])}</span>
@@ -148,7 +151,7 @@ export function ChoiceControls({
   onDragStart,
   disabled,
 }: {
-  run: BenchRun;
+  run: WorkbenchRun;
   choices: RunChoices;
   onChange: (choices: RunChoices) => void;
   onDragStart?: () => void;
@@ -194,16 +197,26 @@ export function ChoiceControls({
         />
       ) : null}
       {controls.seriesResistance ? (
-        <ValueStepper
-          label={`Series resistor (${controls.seriesResistance.series})`}
-          values={controls.seriesResistance.values}
-          value={choices.seriesResistance ?? controls.seriesResistance.values[0]}
-          format={formatOhms}
-          note={`${controls.seriesResistance.values.length} standard values`}
-          onChange={(seriesResistance) => set({ seriesResistance })}
-          onDragStart={onDragStart}
-          disabled={disabled}
-        />
+        <div className="space-y-3">
+          <ValueStepper
+            label={`Series resistor (${controls.seriesResistance.series})`}
+            values={controls.seriesResistance.values}
+            value={choices.seriesResistance ?? controls.seriesResistance.values[0]}
+            format={formatOhms}
+            note={`${controls.seriesResistance.values.length} standard values`}
+            onChange={(seriesResistance) => set({ seriesResistance })}
+            onDragStart={onDragStart}
+            disabled={disabled}
+          />
+          <ResistorEntryField
+            key={run.id}
+            label="Or type a value"
+            values={controls.seriesResistance.values}
+            series={controls.seriesResistance.series}
+            onSet={(seriesResistance) => set({ seriesResistance })}
+            disabled={disabled}
+          />
+        </div>
       ) : null}
       {controls.timing ? (
         <>

@@ -1,5 +1,5 @@
 import type { RunChoices } from "@/lessons/schema";
-import type { BenchRun, CableOption, DriverOption } from "./bench-types";
+import type { WorkbenchRun, CableOption, DriverOption } from "./workbench-types";
 import { formatMetres, formatNanoseconds, formatOhms } from "./quantities";
 
 /** The run as it stands with the learner's choices put in: what the drawing and the words show. */
@@ -13,7 +13,7 @@ export type RunFacts = {
   supplyVoltage: number;
 };
 
-export function runFacts(run: BenchRun, choices: RunChoices): RunFacts {
+export function runFacts(run: WorkbenchRun, choices: RunChoices): RunFacts {
   const { scenario } = run;
   const driverId = choices.driver ?? scenario.driver.id;
   const cableKind = choices.cable ?? scenario.cable;
@@ -29,7 +29,7 @@ export function runFacts(run: BenchRun, choices: RunChoices): RunFacts {
 }
 
 /** The learner's own choices for a run in words ("150 Ω", "Twisted pair, 9.5 m"), for the attempt history. */
-export function describeChoices(run: BenchRun, choices: RunChoices | undefined): string {
+export function describeChoices(run: WorkbenchRun, choices: RunChoices | undefined): string {
   if (!choices) return "no choice recorded";
   const facts = runFacts(run, choices);
   const parts: string[] = [];

@@ -1,10 +1,10 @@
 "use client";
 
 import { useRef } from "react";
-import type { BenchRun } from "./bench-types";
+import type { WorkbenchRun } from "./workbench-types";
 
 /** One tab per run of an installation; arrow keys, Home and End move between them. */
-export function RunTabs({ runs, activeRunId, onSelect }: { runs: BenchRun[]; activeRunId: string; onSelect: (runId: string) => void }) {
+export function RunTabs({ runs, activeRunId, onSelect }: { runs: WorkbenchRun[]; activeRunId: string; onSelect: (runId: string) => void }) {
   const tabs = useRef<(HTMLButtonElement | null)[]>([]);
   const activeIndex = runs.findIndex((run) => run.id === activeRunId);
   const focus = (index: number) => {

@@ -1,8 +1,8 @@
-import type { BenchRun } from "./bench-types";
+import type { WorkbenchRun } from "./workbench-types";
 import { formatDelayPerMetre, formatMetres, formatNanoseconds, formatOhms, formatPicofaradsPerMetre } from "./quantities";
 import type { RunFacts } from "./run-facts";
 
-function patternWords(run: BenchRun): string {
+function patternWords(run: WorkbenchRun): string {
   const { pattern } = run.scenario.signal;
   if ("bits" in pattern) return `${pattern.bits.length} bits, ${pattern.bits}`;
   const colours = pattern.colours.map((c) => `(${c.join(", ")})`).join(", ");
@@ -10,7 +10,7 @@ function patternWords(run: BenchRun): string {
 }
 
 /** The learner's own variant of the run in plain words, with the values currently chosen. */
-export function ScenarioWords({ run, facts }: { run: BenchRun; facts: RunFacts }) {
+export function ScenarioWords({ run, facts }: { run: WorkbenchRun; facts: RunFacts }) {
   const { driver, cable, length, seriesResistance, supplyVoltage } = facts;
   const receiver = run.scenario.receiver;
   const high = (receiver.highThreshold ?? 0.7) * supplyVoltage;

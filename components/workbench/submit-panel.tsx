@@ -1,15 +1,15 @@
 "use client";
 
 import type { ReactNode } from "react";
-import type { BenchQuestion, BenchRun } from "./bench-types";
+import type { WorkbenchQuestion, WorkbenchRun } from "./workbench-types";
 import type { SubmitReply } from "./attempts-api";
 import { buttonClass } from "@/components/ui/button-class";
 
 export type QuestionText = { prompt: ReactNode; hint: ReactNode };
 
 type Props = {
-  runs: BenchRun[];
-  questions: BenchQuestion[];
+  runs: WorkbenchRun[];
+  questions: WorkbenchQuestion[];
   questionTexts: Record<string, QuestionText>;
   answers: Record<string, string>;
   onAnswer: (id: string, entry: string) => void;
@@ -21,7 +21,7 @@ type Props = {
   attempts: { free: number; penalty: number };
 };
 
-function AttemptResult({ reply, runs }: { reply: SubmitReply; runs: BenchRun[] }) {
+function AttemptResult({ reply, runs }: { reply: SubmitReply; runs: WorkbenchRun[] }) {
   const { attempt } = reply;
   return (
     <div className={`rounded-lg border p-4 ${reply.passed ? "border-ok/30 bg-ok-soft" : "border-danger/30 bg-danger-soft"}`}>

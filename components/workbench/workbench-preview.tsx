@@ -1,6 +1,7 @@
 "use client";
 
 import { useMemo } from "react";
+import { createPortal } from "react-dom";
 import { DRAG_SPAN, FULL_SPAN, useLiveSimulation, type LiveRun } from "@/components/simulation";
 import { ScopeView } from "@/components/scope-view";
 import type { PassRule } from "@/lessons/schema";
@@ -46,12 +47,18 @@ export function WorkbenchPreview({
   rule,
   caption,
   note,
+  scopeHeight,
+  detailsIn = null,
 }: {
   input: SimInput;
   dragging?: boolean;
   rule: PassRule;
   caption: string;
   note?: React.ReactNode;
+  /** The chart's height in pixels: smaller on a phone, where the scope stays on screen beside the controls. */
+  scopeHeight?: number;
+  /** On a phone, where the chart stays on screen alone: the places below the controls for the judgement and for the scope's words. */
+  detailsIn?: { judgement: HTMLElement; scope: HTMLElement } | null;
 }) {
   const live = useLiveSimulation(input, dragging ? DRAG_SPAN : FULL_SPAN);
   const run = live.result;
@@ -65,12 +72,40 @@ export function WorkbenchPreview({
   const scope = useMemo(
     () =>
       run ? (
-        <ScopeView run={run} stale={stale} caption={caption}>
+        <ScopeView run={run} stale={stale} caption={caption} height={scopeHeight} detailsIn={detailsIn?.scope ?? null}>
           <SimulationBadge pending={stale} roundTripMs={roundTripMs} computeMs={run.computeMs} />
         </ScopeView>
       ) : null,
-    [run, stale, caption, roundTripMs],
+    [run, stale, caption, roundTripMs, scopeHeight, detailsIn],
   );
+
+  // On a phone these go below the controls, so that the chart stays on screen beside them.
+  const below = run ? (
+    <>
+      {run.span.quality === DRAG_SPAN.quality ? <DragPreviewNote run={run} /> : null}
+      {judgement ? (
+        <div
+          className={`mt-4 rounded-lg border p-4 text-sm ${judgement.pass ? "border-ok/30 bg-ok-soft" : "border-copper/30 bg-copper-soft"}`}
+          data-testid="rule-preview"
+        >
+          <p className="font-semibold">
+            {judgement.pass ? "✓ On the workbench this run meets the lab's rule." : "✗ On the workbench this run does not yet meet the lab's rule:"}{" "}
+            <span className="font-normal text-ink-soft">(a preview; only a submitted attempt is graded)</span>
+          </p>
+          <p className="mt-1" data-testid="rule-judgement">
+            The lab asks that the run {JUDGEMENT_PROMISE[rule.judgement]}. {rule.judgementWhy}
+          </p>
+          {judgement.failures.length > 0 ? (
+            <ul className="mt-2 list-disc space-y-1 pl-5">
+              {judgement.failures.map((failure) => (
+                <li key={failure.code}>{failure.message}</li>
+              ))}
+            </ul>
+          ) : null}
+        </div>
+      ) : null}
+    </>
+  ) : null;
 
   return (
     <div data-testid="workbench-preview" data-pending={live.pending}>
@@ -82,29 +117,14 @@ export function WorkbenchPreview({
       {run ? (
         <>
           {note}
-          {scope}
-          {run.span.quality === DRAG_SPAN.quality ? <DragPreviewNote run={run} /> : null}
           {judgement ? (
-            <div
-              className={`mt-4 rounded-lg border p-4 text-sm ${judgement.pass ? "border-ok/30 bg-ok-soft" : "border-copper/30 bg-copper-soft"}`}
-              data-testid="rule-preview"
-            >
-              <p className="font-semibold">
-                {judgement.pass ? "✓ On the workbench this run meets the lab's rule." : "✗ On the workbench this run does not yet meet the lab's rule:"}{" "}
-                <span className="font-normal text-ink-soft">(a preview; only a submitted attempt is graded)</span>
-              </p>
-              <p className="mt-1" data-testid="rule-judgement">
-                The lab asks that the run {JUDGEMENT_PROMISE[rule.judgement]}. {rule.judgementWhy}
-              </p>
-              {judgement.failures.length > 0 ? (
-                <ul className="mt-2 list-disc space-y-1 pl-5">
-                  {judgement.failures.map((failure) => (
-                    <li key={failure.code}>{failure.message}</li>
-                  ))}
-                </ul>
-              ) : null}
-            </div>
+            // On a phone the full judgement sits below the scope, out of sight while the controls move: its gist goes first.
+            <p aria-hidden="true" className={`mb-2 text-sm font-semibold lg:hidden ${judgement.pass ? "text-ok" : "text-copper"}`}>
+              {judgement.pass ? "✓ Meets the lab's rule (preview)" : "✗ Does not yet meet the lab's rule (preview)"}
+            </p>
           ) : null}
+          {scope}
+          {detailsIn ? createPortal(below, detailsIn.judgement) : below}
         </>
       ) : (
         <div className="flex h-72 items-center justify-center rounded-lg border border-dashed border-line-strong bg-sunken text-sm text-ink-soft" aria-live="polite">

@@ -1,15 +1,16 @@
 "use client";
 
 import { QueryClient, QueryClientProvider, useInfiniteQuery, useMutation, useQueryClient } from "@tanstack/react-query";
-import { useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { LabChoices } from "@/lessons";
 import { buildSimInput } from "@/lessons/build-run";
 import type { RunChoices } from "@/lessons/schema";
 import type { AttemptView } from "@/lib/grading";
+import type { LabDraft } from "@/lib/lab-drafts";
 import type { SimInput } from "@/lib/sim";
 import { AttemptHistory } from "./attempt-history";
 import { AttemptRequestError, fetchAttempt, listAttempts, newSubmissionKey, submitAttempt, type Submission, type SubmitReply } from "./attempts-api";
-import type { BenchSetup } from "./bench-types";
+import type { WorkbenchSetup } from "./workbench-types";
 import { WorkbenchPreview } from "./workbench-preview";
 import { ChoiceControls } from "./choice-controls";
 import { RunDrawing } from "./run-drawing";
@@ -19,8 +20,19 @@ import { ScenarioWords } from "./scenario-words";
 import { SourceReadout } from "./source-readout";
 import { SubmitPanel, type QuestionText } from "./submit-panel";
 import { useControlDrag } from "./use-control-drag";
+import { useDraftSaving, type DraftSaving } from "./use-draft-saving";
+import { useNarrowScreen } from "./use-narrow-screen";
 
-type Props = { setup: BenchSetup; questionTexts: Record<string, QuestionText> };
+type Props = {
+  setup: WorkbenchSetup;
+  questionTexts: Record<string, QuestionText>;
+  /** What the workbench opens with: the learner's latest saved choices and answers, or the scenario's own. */
+  draft: LabDraft;
+  /** When the server saved that draft (ms since the epoch); null when it has none. */
+  savedAt: number | null;
+  /** Where this browser keeps a change the server has not received yet: one key per learner and lab. */
+  draftStorageKey: string;
+};
 
 type Replay = { attempt: AttemptView; inputs: Record<string, SimInput> };
 
@@ -31,21 +43,55 @@ export function Workbench(props: Props) {
   const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { retry: 1, refetchOnWindowFocus: false } } }));
   return (
     <QueryClientProvider client={client}>
-      <WorkbenchBench {...props} />
+      <WorkbenchPanels {...props} />
     </QueryClientProvider>
   );
 }
 
 const cardClass = "rounded-card border border-line bg-surface p-4 sm:p-6";
 
-function WorkbenchBench({ setup, questionTexts }: Props) {
+/** Whether the learner's latest choices and answers are kept, in a line under the controls' heading. */
+function DraftStatus({ saving, onRetry }: { saving: DraftSaving; onRetry: () => void }) {
+  if (saving.status === "failed") {
+    return (
+      <div role="alert" data-testid="draft-status" data-status="failed" className="mb-4 rounded-lg border border-danger/30 bg-danger-soft px-3 py-2 text-sm text-danger">
+        Your latest choices are not saved yet: {saving.message} They stay on this page meanwhile.{" "}
+        <button type="button" onClick={onRetry} className="font-semibold underline underline-offset-2">
+          Save again
+        </button>
+      </div>
+    );
+  }
+  return (
+    <p role="status" data-testid="draft-status" data-status={saving.status} className="mb-4 text-xs text-ink-faint">
+      {saving.status === "saving" ? "Saving your choices…" : "Your choices and answers are saved; the workbench opens with them next time."}
+    </p>
+  );
+}
+
+function WorkbenchPanels({ setup, questionTexts, draft, savedAt, draftStorageKey }: Props) {
   const { runs, labSlug } = setup;
   const queryClient = useQueryClient();
   const historyKey = ["lab-attempts", labSlug] as const;
 
-  const [choices, setChoices] = useState<LabChoices>(() => Object.fromEntries(runs.map((run) => [run.id, run.start])));
+  const [choices, setChoices] = useState<LabChoices>(draft.choices);
   const [activeRunId, setActiveRunId] = useState(runs[0].id);
-  const [answers, setAnswers] = useState<Record<string, string>>({});
+  const [answers, setAnswers] = useState<Record<string, string>>(draft.answers);
+  const restore = useCallback((unsaved: LabDraft) => {
+    setChoices(unsaved.choices);
+    setAnswers(unsaved.answers);
+  }, []);
+  const { saving, retry } = useDraftSaving({ labSlug, draft: { choices, answers }, savedAt, storageKey: draftStorageKey, restore });
+  const narrow = useNarrowScreen();
+  const scopeSection = useRef<HTMLElement>(null);
+  // On a phone the scope's words and the rule's judgement sit in a card below the controls.
+  const [judgementSlot, setJudgementSlot] = useState<HTMLDivElement | null>(null);
+  const [scopeWordsSlot, setScopeWordsSlot] = useState<HTMLDivElement | null>(null);
+  // One object while the slots stay, so that the scope's memoised drawing is not redone on every render.
+  const detailsIn = useMemo(
+    () => (narrow && judgementSlot && scopeWordsSlot ? { judgement: judgementSlot, scope: scopeWordsSlot } : null),
+    [narrow, judgementSlot, scopeWordsSlot],
+  );
   const [replay, setReplay] = useState<Replay | null>(null);
   const [reply, setReply] = useState<SubmitReply | null>(null);
   const pendingKey = useRef<PendingKey | null>(null);
@@ -78,6 +124,14 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
     },
   });
 
+  // A redrawn attempt is shown where the learner looks for it: the scope comes into view.
+  const shownAttemptId = replay?.attempt.id;
+  useEffect(() => {
+    if (!shownAttemptId) return;
+    const still = window.matchMedia("(prefers-reduced-motion: reduce)").matches;
+    scopeSection.current?.scrollIntoView({ block: "start", behavior: still ? "auto" : "smooth" });
+  }, [shownAttemptId]);
+
   const activeRun = runs.find((run) => run.id === activeRunId) ?? runs[0];
   const activeChoices = choices[activeRun.id];
   // While an attempt is redrawn, the drawing and the words describe that attempt, as the scope does.
@@ -88,6 +142,13 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
   const changeChoices = (runId: string, next: RunChoices) => {
     setReplay(null);
     setChoices((current) => ({ ...current, [runId]: next }));
+  };
+
+  const scenarioChoices: LabChoices = Object.fromEntries(runs.map((run) => [run.id, run.start]));
+  const atScenario = JSON.stringify(choices) === JSON.stringify(scenarioChoices);
+  const resetToScenario = () => {
+    setReplay(null);
+    setChoices(scenarioChoices);
   };
 
   const sendSubmission = () => {
@@ -122,21 +183,38 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
         </section>
 
         <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-6 lg:grid-cols-[minmax(0,20rem)_minmax(0,1fr)]">
-          <section className={`${cardClass} lg:sticky lg:top-6`} aria-labelledby="controls-heading">
-            <h2 id="controls-heading" className="mb-4 text-lg font-semibold">
-              Your choices
-            </h2>
+          <section className={`${cardClass} lg:sticky lg:top-6`} aria-labelledby="controls-heading" data-testid="controls-card">
+            <div className="mb-1 flex flex-wrap items-baseline justify-between gap-x-3">
+              <h2 id="controls-heading" className="text-lg font-semibold">
+                Your choices
+              </h2>
+              <button
+                type="button"
+                onClick={resetToScenario}
+                disabled={atScenario}
+                className="text-sm font-semibold text-accent underline underline-offset-2 disabled:text-ink-faint disabled:no-underline"
+              >
+                {runs.length > 1 ? "Reset every run to the scenario" : "Reset to the scenario"}
+              </button>
+            </div>
+            <DraftStatus saving={saving} onRetry={retry} />
             <ChoiceControls run={activeRun} choices={activeChoices} onChange={(next) => changeChoices(activeRun.id, next)} onDragStart={startDrag} />
             {replay ? (
               <p className="mt-4 text-sm text-ink-soft">
-                These are your bench settings. The drawing and the scope show attempt {replay.attempt.attemptNumber}; moving a control brings your bench back.
+                These are your own choices. The drawing and the scope show attempt {replay.attempt.attemptNumber}; moving a control brings your choices back.
               </p>
             ) : activeRun.controls.seriesResistance || activeRun.controls.cable || activeRun.controls.driver ? (
               <SourceReadout facts={facts} />
             ) : null}
           </section>
-          <section className={cardClass} aria-labelledby="scope-heading">
-            <h2 id="scope-heading" className="mb-3 text-lg font-semibold">
+          {/* On a phone the scope comes first and stays on screen while the controls below it scroll. */}
+          <section
+            ref={scopeSection}
+            className={`${cardClass} scroll-mt-4 max-lg:sticky max-lg:top-0 max-lg:z-10 max-lg:order-first max-lg:p-3 max-lg:shadow-md`}
+            aria-labelledby="scope-heading"
+            data-testid="scope-card"
+          >
+            <h2 id="scope-heading" className="mb-3 text-lg font-semibold max-lg:mb-2 max-lg:text-base">
               {replay ? `Attempt ${replay.attempt.attemptNumber} on the scope` : "Try it on the workbench"}
             </h2>
             <WorkbenchPreview
@@ -144,6 +222,8 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
               dragging={dragging}
               rule={setup.passRule}
               caption={`Scope view of ${activeRun.label}`}
+              scopeHeight={narrow ? 170 : 300}
+              detailsIn={detailsIn}
               note={
                 replay ? (
                   <div className="mb-4 flex flex-wrap items-center gap-3 rounded-lg border border-accent/30 bg-accent-soft px-3 py-2 text-sm" role="status">
@@ -152,7 +232,7 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
                       {replay.attempt.score} / 100).
                     </span>
                     <button type="button" className="font-semibold text-accent underline underline-offset-2" onClick={() => setReplay(null)}>
-                      Back to my bench
+                      Back to my choices
                     </button>
                     <button
                       type="button"
@@ -169,6 +249,12 @@ function WorkbenchBench({ setup, questionTexts }: Props) {
               }
             />
           </section>
+          {narrow ? (
+            <section className={cardClass} aria-label="What the scope shows" data-testid="scope-words-card">
+              <div ref={setJudgementSlot} />
+              <div ref={setScopeWordsSlot} className="mt-4" />
+            </section>
+          ) : null}
         </div>
       </div>
 

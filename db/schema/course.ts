@@ -82,6 +82,27 @@ export const labAttempts = pgTable(
   ],
 );
 
+/**
+ * The learner's latest work on a lab's workbench, not yet submitted: the choices of every run and
+ * the answers typed into the lab's questions, saved as they change so that the workbench reopens
+ * where it was left. One row per learner and lab, overwritten by each save.
+ */
+export const labDrafts = pgTable(
+  "lab_drafts",
+  {
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    labSlug: text("lab_slug")
+      .notNull()
+      .references(() => labs.slug, { onDelete: "cascade" }),
+    choices: jsonb("choices").notNull(),
+    answers: jsonb("answers").notNull(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (table) => [primaryKey({ columns: [table.userId, table.labSlug] })],
+);
+
 export const quickCheckAnswers = pgTable(
   "quick_check_answers",
   {
@@ -128,5 +149,6 @@ export type LessonRow = typeof lessons.$inferSelect;
 export type LabRow = typeof labs.$inferSelect;
 export type LabAttempt = typeof labAttempts.$inferSelect;
 export type NewLabAttempt = typeof labAttempts.$inferInsert;
+export type LabDraft = typeof labDrafts.$inferSelect;
 export type QuickCheckAnswer = typeof quickCheckAnswers.$inferSelect;
 export type LessonProgress = typeof lessonProgress.$inferSelect;

@@ -11,6 +11,8 @@ const kilobytes = (count: number) => count * 1024;
 export const bodyLimits = {
   /** A graded lab submission: its choices for a few runs and short typed answers (at most 200 characters each). */
   labSubmission: { bytes: kilobytes(32), what: "A lab submission" },
+  /** The workbench saving a learner's latest choices and typed answers (at most 200 characters each). */
+  labDraft: { bytes: kilobytes(16), what: "A saved workbench" },
   /** The browser asking to upload bench photos: at most four file names, sizes and types. */
   uploadRequest: { bytes: kilobytes(16), what: "A photo upload request" },
   /** The upload service reporting a finished or failed upload. */

@@ -191,12 +191,85 @@ function classifyBit(bit: DecodedBit, index: number, previous: DecodedBit | unde
     : { code: "shortened-one", index, time: pulse.start };
 }
 
+/** The high time the sender chose for a bit, and the low it leaves before the next bit (Infinity after the last): the driver's own pulse, before the line shapes it. */
+function drivenTiming(facts: CircuitFacts, bits: DecodedBit[], index: number): { high: number; low: number } {
+  const high = facts.falls[index] - bits[index].start;
+  const next = bits[index + 1];
+  return { high, low: next ? next.start - facts.falls[index] : Infinity };
+}
+
 /** A bit whose high time the sender chose so long (or short) that the driver's own pulse decides it, whatever the line does. */
-function timingCause(facts: CircuitFacts, bit: DecodedBit, index: number): string | null {
-  const driven = facts.falls[index] - bit.start;
-  if (bit.sent === 1 && driven <= facts.decisionTime) return `the driver's own high time (${duration(driven)}) is no longer than the ${duration(facts.decisionTime)} decision time`;
-  if (bit.sent === 0 && driven >= facts.decisionTime) return `the driver's own high time (${duration(driven)}) is no shorter than the ${duration(facts.decisionTime)} decision time`;
+function timingCause(facts: CircuitFacts, bits: DecodedBit[], index: number): string | null {
+  const bit = bits[index];
+  const { high } = drivenTiming(facts, bits, index);
+  if (bit.sent === 1 && high <= facts.decisionTime) return `the high time chosen for a 1 (${duration(high)}) is itself no longer than the ${duration(facts.decisionTime)} decision time`;
+  if (bit.sent === 0 && high >= facts.decisionTime) return `the high time chosen for a 0 (${duration(high)}) is itself no shorter than the ${duration(facts.decisionTime)} decision time`;
   return null;
+}
+
+/** A low after a pulse that the sender's own timing already makes too short, whatever the line does. */
+function chosenLowCause(facts: CircuitFacts, bits: DecodedBit[], index: number): string | null {
+  const { high, low } = drivenTiming(facts, bits, index);
+  if (low >= facts.minGap) return null;
+  return `the high time chosen for a ${bits[index].sent} (${duration(high)}) itself leaves only ${duration(low)} of low before the next bit, less than the ${duration(facts.minGap)} a pixel needs`;
+}
+
+type TimingLimit = "decision" | "pulse" | "gap";
+
+/**
+ * Why a judgement's timing margin is what it is: on the bit and reading that set it, the limit it
+ * comes nearest (the decision time, the shortest pulse, the shortest low) with the sender's own
+ * timing, and what the line takes of it. When the chosen high times alone leave nearly as thin a
+ * margin, they are the cause, however fast the edges; otherwise the far end's edges are.
+ */
+function timingMarginReason(judged: JudgedBand, facts: CircuitFacts): VerdictReason | null {
+  const margins = judged.bitTimingMargins;
+  const index = margins.reduce<number>((worst, margin, i) => (margin !== null && (worst === -1 || margin < margins[worst]!) ? i : worst), -1);
+  if (index === -1) return null;
+  const corner = (["highest", "lowest"] as const).reduce((a, b) =>
+    (judged.readings[b].decoding.bits[index].timingMargin ?? Infinity) < (judged.readings[a].decoding.bits[index].timingMargin ?? Infinity) ? b : a,
+  );
+  const bits = judged.readings[corner].decoding.bits;
+  const bit = bits[index];
+  const width = bit.width!;
+  const margin = margins[index]!;
+  const driven = drivenTiming(facts, bits, index);
+  const limits: Record<TimingLimit, { read: number; sent: number }> = {
+    decision: bit.sent === 1 ? { read: width - facts.decisionTime, sent: driven.high - facts.decisionTime } : { read: facts.decisionTime - width, sent: facts.decisionTime - driven.high },
+    pulse: { read: width - facts.minPulse, sent: driven.high - facts.minPulse },
+    gap: { read: (bit.gap ?? Infinity) - facts.minGap, sent: driven.low - facts.minGap },
+  };
+  const limit = (Object.keys(limits) as TimingLimit[]).reduce((a, b) => (limits[b].read < limits[a].read ? b : a));
+  const { sent } = limits[limit];
+  const other = bit.sent === 1 ? 0 : 1;
+  const head = {
+    decision: `bit ${index + 1}, a ${bit.sent}, comes within ${duration(margin)} of being read as a ${other} by a pixel switching somewhere its datasheet allows`,
+    pulse: `the pulse of bit ${index + 1} comes within ${duration(margin)} of being too short to count, for a pixel switching somewhere its datasheet allows`,
+    gap: `the low after bit ${index + 1} comes within ${duration(margin)} of being too short to end it, for a pixel switching somewhere its datasheet allows`,
+  }[limit];
+  const room = (only: string) =>
+    ({
+      decision: `is ${only}${duration(sent)} ${bit.sent === 1 ? "longer" : "shorter"} than the ${duration(facts.decisionTime)} decision time`,
+      pulse: `is ${only}${duration(sent)} longer than the shortest pulse a pixel counts (${duration(facts.minPulse)})`,
+      gap: `leaves ${duration(driven.low)} of low, ${only}${duration(sent)} more than the ${duration(facts.minGap)} a pixel needs`,
+    })[limit];
+  const chosen = `the high time chosen for a ${bit.sent} (${duration(driven.high)})`;
+  let cause: string;
+  // The chosen timing is the cause when it already leaves a margin this thin, the line taking less than half of it.
+  if (sent - margin < sent / 2) {
+    cause = `${chosen} ${room("itself only ")}; the line takes ${duration(Math.max(0, sent - margin))} more. The pulse widths chosen set this margin, not the edges`;
+  } else {
+    // A pulse comes out short when its rise arrives late, long (or its low short) when its fall does.
+    const edge = limit === "pulse" || (limit === "decision" && bit.sent === 1) ? "rising" : "falling";
+    const resistance = edge === "rising" ? facts.sourceResistanceHigh : facts.sourceResistanceLow;
+    cause = `${chosen} ${room("")}, and the far end takes ${duration(sent - margin)} of that: ${slowEdgeCause(facts, resistance, edge)}`;
+  }
+  return {
+    code: "thin-timing-margin",
+    severity: "warning",
+    message: `${head}: ${cause}.`,
+    at: { time: bit.slotStart, bit: index },
+  };
 }
 
 function failMessage(code: string, bits: DecodedBit[], indices: number[], facts: CircuitFacts, levels: Levels): string {
@@ -204,7 +277,7 @@ function failMessage(code: string, bits: DecodedBit[], indices: number[], facts:
   const kinds = bitKinds(bits, indices);
   const high = facts.sourceResistanceHigh;
   const low = facts.sourceResistanceLow;
-  const sent = timingCause(facts, first, indices[0]);
+  const sent = timingCause(facts, bits, indices[0]);
   switch (code) {
     case "never-high":
       return neverHighMessage(facts, kinds, levels);
@@ -221,7 +294,7 @@ function failMessage(code: string, bits: DecodedBit[], indices: number[], facts:
     case "narrow-pulse":
       return `a pulse only ${duration(first.width ?? 0)} wide counts as a glitch (shorter than ${duration(facts.minPulse)}): the far end crosses ${levels.rise} late and leaves it early, because ${slowEdgeCause(facts, high, "rising")}`;
     case "short-low":
-      return `the low after the pulse lasts only ${duration(first.gap ?? 0)}, shorter than the ${duration(facts.minGap)} the protocol leaves between pulses, so the pixel cannot tell where the bit ends: ${sent ?? "the driver's high time leaves too little low time, and the slow edges at the far end take the rest"}`;
+      return `the low after the pulse lasts only ${duration(first.gap ?? 0)}, shorter than the ${duration(facts.minGap)} the protocol leaves between pulses, so the pixel cannot tell where the bit ends: ${chosenLowCause(facts, bits, indices[0]) ?? `the high time chosen for a ${first.sent} leaves ${duration(drivenTiming(facts, bits, indices[0]).low)} of low, and the far end's falling edge takes the rest: ${slowEdgeCause(facts, low, "falling")}`}`;
     case "stretched-zero":
       return `0 bits read as 1: the pulse is ${duration(first.width ?? 0)} wide, longer than the ${duration(facts.decisionTime)} decision time, because ${sent ?? `the far end falls below ${levels.fall} late: ${slowEdgeCause(facts, low, "falling")}`}`;
     case "shortened-one":
@@ -364,11 +437,8 @@ function warningReasons(decoding: Decoding, metrics: RunMetrics, judgements: Rec
       });
     }
     if (guaranteed.timingMargin !== null && guaranteed.timingMargin < THIN_TIMING_MARGIN) {
-      reasons.push({
-        code: "thin-timing-margin",
-        severity: "warning",
-        message: `a pulse comes within ${duration(guaranteed.timingMargin)} of being read as the other bit by a pixel switching somewhere its datasheet allows.`,
-      });
+      const reason = timingMarginReason(guaranteed, facts);
+      if (reason) reasons.push(reason);
     }
   }
   if (facts.latchGap !== undefined && facts.latchGap < MIN_LATCH_GAP) {

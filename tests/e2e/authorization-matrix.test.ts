@@ -84,6 +84,12 @@ const handlerTable: Record<string, HandlerCase> = {
     body: () => ({ choices: gradedLab.choices, idempotencyKey: randomUUID() }),
     expect: [401, 201, 201, 403, 403, 403, 403],
   },
+  // Each learner saves their own workbench: there is no other learner's to reach.
+  "POST /api/labs/[labSlug]/draft": {
+    path: () => `/api/labs/${gradedLab.slug}/draft`,
+    body: () => ({ choices: gradedLab.choices, answers: {} }),
+    expect: [401, 200, 200, 403, 403, 403, 403],
+  },
   "GET /api/labs/[labSlug]/attempts/[attemptId]": { path: (w) => `/api/labs/${gradedLab.slug}/attempts/${w.attemptId}`, expect: [401, 200, 404, 403, 403, 403, 403] },
   "GET /api/uploadthing": { path: () => "/api/uploadthing", expect: [200, 200, 200, 200, 200, 200, 200] },
   // The browser's request to upload a photo to learner A's bench draft.

@@ -44,6 +44,12 @@ const routes: BodyRoute[] = [
     headers: () => ({ "content-type": "application/json", cookie: world.people.learnerA.cookie }),
   },
   {
+    name: "the workbench's save",
+    limit: bodyLimits.labDraft,
+    path: () => `/api/labs/${gradedLab.slug}/draft`,
+    headers: () => ({ "content-type": "application/json", cookie: world.people.learnerA.cookie }),
+  },
+  {
     name: "the upload route, asked by the browser",
     limit: bodyLimits.uploadRequest,
     path: () => "/api/uploadthing?actionType=upload&slug=benchPhoto",

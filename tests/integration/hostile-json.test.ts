@@ -14,7 +14,7 @@ import type { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { markLessonsCompleted } from "@/db/queries/progress";
-import { benchPhotos, benchSubmissions, cohortMemberships, labAttempts, rateLimits } from "@/db/schema";
+import { benchPhotos, benchSubmissions, cohortMemberships, labAttempts, labDrafts, rateLimits } from "@/db/schema";
 import { getCourse, getLessonOfLab } from "@/lessons";
 import { createSession } from "@/lib/auth/session-store";
 import { openBenchDraft } from "@/lib/bench/submissions";
@@ -41,7 +41,7 @@ function discoverRoutes(dir = apiDir): string[] {
 }
 
 /** What the test sends each route: who asks, and the route parameters it fuzzes. */
-const routeTable: Record<string, { who: "learner" | "instructor" | "anonymous"; params: string[]; bodies?: "attempt" | "upload" }> = {
+const routeTable: Record<string, { who: "learner" | "instructor" | "anonymous"; params: string[]; bodies?: "attempt" | "draft" | "upload" }> = {
   "bench-photos/[photoId]": { who: "learner", params: ["photoId"] },
   "certificates/[certificateId]/pdf": { who: "learner", params: ["certificateId"] },
   "certificates/verify/[code]": { who: "anonymous", params: ["code"] },
@@ -49,6 +49,7 @@ const routeTable: Record<string, { who: "learner" | "instructor" | "anonymous"; 
   health: { who: "anonymous", params: [] },
   "labs/[labSlug]/attempts": { who: "learner", params: ["labSlug"], bodies: "attempt" },
   "labs/[labSlug]/attempts/[attemptId]": { who: "learner", params: ["labSlug", "attemptId"] },
+  "labs/[labSlug]/draft": { who: "learner", params: ["labSlug"], bodies: "draft" },
   uploadthing: { who: "learner", params: [], bodies: "upload" },
 };
 
@@ -72,6 +73,7 @@ async function loadRoute(route: string): Promise<Record<string, Handler>> {
 async function rowsWritten(): Promise<number[]> {
   const tallies = await Promise.all([
     db.select({ n: count() }).from(labAttempts).where(eq(labAttempts.userId, learnerId)),
+    db.select({ n: count() }).from(labDrafts).where(eq(labDrafts.userId, learnerId)),
     db.select({ n: count() }).from(benchSubmissions).where(eq(benchSubmissions.learnerId, uploaderId)),
     db.select({ n: count() }).from(benchPhotos).where(eq(benchPhotos.submissionId, submissionId)),
   ]);
@@ -221,6 +223,25 @@ describe("hostile input on every route handler", () => {
     expect(({} as Record<string, unknown>).polluted).toBeUndefined();
   });
 
+  it("refuses random and malformed workbench saves with a clear 4xx and stores nothing", async () => {
+    const { POST } = await loadRoute("labs/[labSlug]/draft");
+    const before = await rowsWritten();
+    const draftBody = fc.oneof(
+      hostileValue,
+      fc.record({ choices: hostileValue, answers: fc.constant({}) }),
+      fc.record({ choices: fc.record({ main: fc.record({ seriesResistance: notAResistance }) }), answers: fc.constant({}) }),
+      fc.record({ choices: fc.constant({ main: { seriesResistance: 150 } }), answers: notAnswers }),
+    );
+    await fc.assert(
+      fc.asyncProperty(fc.oneof(draftBody.map((value) => JSON.stringify(value) ?? "null"), deeplyNested, notJson), contentType, async (body, type) => {
+        const response = await POST!(bodyRequest(draftUrl, body, type, cookies.learner), { params: Promise.resolve({ labSlug: LAB }) });
+        await expectClearRefusal(response, `${type} ${body.slice(0, 120)}`);
+      }),
+      { numRuns: runs },
+    );
+    expect(await rowsWritten()).toEqual(before);
+  });
+
   it("refuses random and malformed bodies on the upload route, as the browser and as a forged service callback", async () => {
     const { POST } = await loadRoute("uploadthing");
     const before = await rowsWritten();
@@ -322,6 +343,7 @@ function endlessBody(options: { stalls?: boolean } = {}): { stream: ReadableStre
 }
 
 const attemptUrl = `http://app.test/api/labs/${LAB}/attempts`;
+const draftUrl = `http://app.test/api/labs/${LAB}/draft`;
 const uploadUrl = "http://app.test/api/uploadthing?slug=benchPhoto&actionType=upload";
 const reportUrl = "http://app.test/api/uploadthing?slug=benchPhoto";
 const reportHeaders = { "uploadthing-hook": "callback", "x-uploadthing-signature": "hmac-sha256=00" };
@@ -329,6 +351,7 @@ const reportHeaders = { "uploadthing-hook": "callback", "x-uploadthing-signature
 type BodyRoute = { name: string; route: string; url: string; limit: BodyLimit; cookie: () => string; headers?: Record<string, string> };
 const bodyRoutes: BodyRoute[] = [
   { name: "a lab submission", route: "labs/[labSlug]/attempts", url: attemptUrl, limit: bodyLimits.labSubmission, cookie: () => cookies.learner },
+  { name: "a saved workbench", route: "labs/[labSlug]/draft", url: draftUrl, limit: bodyLimits.labDraft, cookie: () => cookies.learner },
   { name: "a photo upload request", route: "uploadthing", url: uploadUrl, limit: bodyLimits.uploadRequest, cookie: () => uploadCookie },
   { name: "an upload service report", route: "uploadthing", url: reportUrl, limit: bodyLimits.uploadCallback, cookie: () => "", headers: reportHeaders },
 ];

@@ -14,7 +14,7 @@ const searchSchema = z.object({
   notice: z.enum(["signed-out"]).optional().catch(undefined),
 });
 
-const notices = { "signed-out": "You are signed out. See you at the bench." } as const;
+const notices = { "signed-out": "You are signed out. See you next time." } as const;
 
 export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[]>> }) {
   const search = searchSchema.parse(await searchParams);

@@ -17,7 +17,7 @@ export async function requireLearner(request: Request): Promise<LearnerRequest> 
   const session = token ? await validateSessionToken(token) : null;
   const decision = decideRoleAccess(session?.user ?? null, ["learner"]);
   if (decision === "sign-in") throw new AppError("unauthenticated");
-  if (decision === "forbidden") throw new AppError("forbidden", "Only learners work on the lab bench.");
+  if (decision === "forbidden") throw new AppError("forbidden", "Only learners work at a lab's workbench.");
   return { user: session!.user!, refreshedCookie: session!.refreshedCookie };
 }
 

@@ -61,9 +61,10 @@ export async function signInAs(page: Page, role: Role): Promise<void> {
   await signInThroughForm(page, demoAccounts[role]);
 }
 
-export async function saveScreenshot(page: Page, name: string): Promise<string> {
+/** The whole page, or with `fullPage: false` what the viewport shows (a phone's screen as the learner sees it). */
+export async function saveScreenshot(page: Page, name: string, options: { fullPage?: boolean } = {}): Promise<string> {
   await mkdir(screenshotDir, { recursive: true });
   const file = path.join(screenshotDir, `${name}.png`);
-  await page.screenshot({ path: file, fullPage: true });
+  await page.screenshot({ path: file, fullPage: options.fullPage ?? true });
   return file;
 }

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { findLabDraft } from "@/db/queries/lab-drafts";
 import { LessonMarkdown } from "@/components/lesson/lesson-markdown";
 import { AppFrame } from "@/components/shell/app-frame";
 import { Breadcrumb } from "@/components/ui/breadcrumb";
@@ -8,8 +9,9 @@ import { Workbench } from "@/components/workbench/workbench";
 import { getLab, getLessonOfLab, labVariant } from "@/lessons";
 import { requireRouteAccess } from "@/lib/auth/current-user";
 import { variantSeedFor } from "@/lib/grading";
+import { openingDraft } from "@/lib/lab-drafts";
 import { findLessonProgressView } from "@/lib/progress";
-import { benchSetup } from "./bench-setup";
+import { workbenchSetup } from "./workbench-setup";
 import { LockedLab } from "./locked-lab";
 
 type Props = { params: Promise<{ labSlug: string }> };
@@ -35,7 +37,10 @@ export default async function LabPage({ params }: Props) {
     );
   }
 
-  const setup = benchSetup(lab, labVariant(lab, variantSeedFor(user.id, lab.slug)));
+  const variant = labVariant(lab, variantSeedFor(user.id, lab.slug));
+  const setup = workbenchSetup(lab, variant);
+  const saved = await findLabDraft({ userId: user.id, labSlug: lab.slug });
+  const draft = openingDraft(lab, variant, saved);
   const questionTexts = Object.fromEntries(
     lab.questions.map((q) => [
       q.id,
@@ -69,7 +74,13 @@ export default async function LabPage({ params }: Props) {
           .
         </p>
       </section>
-      <Workbench setup={setup} questionTexts={questionTexts} />
+      <Workbench
+        setup={setup}
+        questionTexts={questionTexts}
+        draft={draft}
+        savedAt={saved?.updatedAt.getTime() ?? null}
+        draftStorageKey={`edgewise:workbench:${user.id}:${lab.slug}`}
+      />
     </AppFrame>
   );
 }

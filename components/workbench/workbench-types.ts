@@ -22,7 +22,7 @@ export type RunControls = {
   timing?: { zeroHigh: { min: number; max: number; step: number }; oneHigh: { min: number; max: number; step: number } };
 };
 
-export type BenchRun = {
+export type WorkbenchRun = {
   id: string;
   label: string;
   /** The learner's own variant of the run: what buildSimInput starts from. */
@@ -34,12 +34,12 @@ export type BenchRun = {
   drivers: DriverOption[];
 };
 
-export type BenchQuestion = { id: string; unit: string; example: string };
+export type WorkbenchQuestion = { id: string; unit: string; example: string };
 
-export type BenchSetup = {
+export type WorkbenchSetup = {
   labSlug: string;
-  runs: BenchRun[];
-  questions: BenchQuestion[];
+  runs: WorkbenchRun[];
+  questions: WorkbenchQuestion[];
   passRule: PassRule;
   /** Graded attempts up to this number cost nothing; each later one loses `penalty` points. */
   attempts: { free: number; penalty: number };

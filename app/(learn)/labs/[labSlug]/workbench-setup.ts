@@ -1,5 +1,5 @@
 import "server-only";
-import type { BenchRun, BenchSetup, CableOption, DriverOption } from "@/components/workbench/bench-types";
+import type { WorkbenchRun, WorkbenchSetup, CableOption, DriverOption } from "@/components/workbench/workbench-types";
 import { lengthsOnOffer, resistorValuesOnOffer, startingChoices, type Lab, type LabVariant } from "@/lessons";
 import type { Driver } from "@/lessons/schema";
 import { exampleEntry } from "@/lib/answers/quantity-kinds";
@@ -23,8 +23,8 @@ function driverOption(driver: Driver): DriverOption {
 }
 
 /** The workbench's view of the learner's variant: each run's controls with what is on offer, and where they start. */
-export function benchSetup(lab: Lab, variant: LabVariant): BenchSetup {
-  const runs = lab.runs.map((spec, i): BenchRun => {
+export function workbenchSetup(lab: Lab, variant: LabVariant): WorkbenchSetup {
+  const runs = lab.runs.map((spec, i): WorkbenchRun => {
     const { scenario } = variant.runs[i];
     const { choices } = spec;
     const cableKinds = [...new Set([scenario.cable, ...(scenario.cableOptions ?? [])])];
