@@ -4,6 +4,7 @@ import type { RunRecord } from "./run-record";
 import { SegmentLibrary } from "./segment-replays";
 import { clampStepFrom, NEGLIGIBLE_CONDUCTION, pinEquilibrium, solveClamped } from "./far-node";
 import type { DriverResistances, LineTotals, ReceiverLoad, SolveOutput, SolverPlan, SolverScratch, SolverTolerances } from "./line-solver";
+import { RcBranch, withTermination } from "./termination";
 import type { Trace } from "./trace";
 import { WaveChunk } from "./wave-chunk";
 
@@ -66,7 +67,8 @@ function dcState(level: number, sourceResistance: number, ladder: Ladder, receiv
   }
   shunt(endConductance);
   theveninResistance = Math.max(theveninResistance + endResistance, 1e-3);
-  const pin = pinEquilibrium(theveninVoltage, 1 / theveninResistance, receiver.supply, receiver.clamps, receiver.clampSeriesResistance);
+  const fed = withTermination(theveninVoltage, 1 / theveninResistance, receiver.termination);
+  const pin = pinEquilibrium(fed.source, fed.conductance, receiver.supply, receiver.clamps, receiver.clampSeriesResistance);
 
   const forward = new Float64Array(segments);
   const backward = new Float64Array(segments);
@@ -138,6 +140,10 @@ class DistributedLine {
   private readonly clampSeriesResistance: number;
   private readonly safeLow: number;
   private readonly safeHigh: number;
+  /** The far-end termination's resistive part (to ground and its current from the supply) and its RC branch. */
+  private readonly terminationConductance: number;
+  private readonly terminationCurrent: number;
+  private readonly branch: RcBranch;
   private readonly library = new SegmentLibrary();
   /** The stretch being solved since the last rest, to be recorded when the next rest comes. */
   private segment: { start: number; firstEdge: number; startsHigh: boolean; farFrom: number; arrivalsFrom: number } | null = null;
@@ -209,6 +215,9 @@ class DistributedLine {
     this.clampSeriesResistance = receiver.clampSeriesResistance;
     this.safeLow = receiver.clamps ? -NEGLIGIBLE_CONDUCTION : -Infinity;
     this.safeHigh = receiver.clamps ? receiver.supply + NEGLIGIBLE_CONDUCTION : Infinity;
+    this.terminationConductance = receiver.termination.conductance;
+    this.terminationCurrent = receiver.termination.current;
+    this.branch = new RcBranch(receiver.termination, dt);
   }
 
   run(): void {
@@ -254,6 +263,7 @@ class DistributedLine {
     const state = high ? this.dcHigh : this.dcLow;
     const band = this.tolerances.quiet;
     if (Math.abs(this.v1 - state.pin) > band || Math.abs(this.v2 - state.pin) > band) return next;
+    if (!this.branch.isQuietAt(state.pin, band)) return next;
     const { segments, forward, backward } = this;
     for (let j = 0; j < segments; j += 1) {
       if (!forward[j].read.isNear(state.forward[j], band)) return next;
@@ -341,6 +351,7 @@ class DistributedLine {
     // The DC state is exact: the pin holds it until something new arrives.
     this.v1 = state.pin;
     this.v2 = state.pin;
+    this.branch.holdAt(state.pin);
     this.held = true;
     this.heldInput = state.forward[segments - 1];
     this.heldOutput = state.backward[segments - 1];
@@ -491,7 +502,11 @@ class DistributedLine {
     const clampedVoltage = solveClamped;
     const clampStep = clampStepFrom;
     const equilibriumOf = pinEquilibrium;
-    const total = theveninConductance + this.capacitiveConductance;
+    const { terminationConductance, terminationCurrent, branch } = this;
+    const branchActive = branch.active;
+    // What feeds the pin at DC: the line's Thevenin source with the termination beside it.
+    const feedConductance = theveninConductance + terminationConductance;
+    const total = feedConductance + branch.conductance + this.capacitiveConductance;
     const inverseTotal = 1 / total;
     const weight1 = this.historyWeight1;
     const weight2 = this.historyWeight2;
@@ -518,7 +533,7 @@ class DistributedLine {
     let nextChange = inCount > 1 ? inOffsets[1] : length;
     let arriving = inValues[0];
     let thevenin = arriving * theveninScale;
-    let driven = theveninConductance * thevenin;
+    let driven = theveninConductance * thevenin + terminationCurrent;
     let equilibrium = Number.NaN;
     let i = 0;
     while (i < length) {
@@ -527,7 +542,7 @@ class DistributedLine {
         arriving = inValues[run];
         nextChange = run + 1 < inCount ? inOffsets[run + 1] : length;
         thevenin = arriving * theveninScale;
-        driven = theveninConductance * thevenin;
+        driven = theveninConductance * thevenin + terminationCurrent;
         equilibrium = Number.NaN;
       }
       if (held) {
@@ -545,7 +560,8 @@ class DistributedLine {
         }
         held = false;
       }
-      const injected = driven + weight1 * v1 - weight2 * v2;
+      const branchCurrent = branchActive ? branch.current() : 0;
+      const injected = driven + branchCurrent + weight1 * v1 - weight2 * v2;
       let v = injected * inverseTotal;
       if (v > safeHigh || v < safeLow) {
         const quick = clampCurrent === 0 ? Number.NaN : clampStep(total, injected, supply, v1, clampCurrent, clampSeriesResistance);
@@ -559,6 +575,7 @@ class DistributedLine {
       } else {
         clampCurrent = 0;
       }
+      if (branchActive) branch.advance(v, branchCurrent);
       v2 = v1;
       v1 = v;
       const wave = 2 * (v + endResistance * (thevenin - v) * theveninConductance) - arriving;
@@ -572,11 +589,16 @@ class DistributedLine {
       pin[i] = v;
       if (Math.abs(v1 - v2) <= settled) {
         // A clamped pin's DC value is one short Newton step away, or too far away to hold at.
-        if (clampCurrent !== 0) equilibrium = clampStep(theveninConductance, driven, supply, v1, clampCurrent, clampSeriesResistance);
-        else if (equilibrium !== equilibrium) equilibrium = equilibriumOf(thevenin, theveninConductance, supply, clamps, clampSeriesResistance);
-        if (Math.abs(v1 - equilibrium) <= settled && Math.abs(v2 - equilibrium) <= settled) {
+        if (clampCurrent !== 0) equilibrium = clampStep(feedConductance, driven, supply, v1, clampCurrent, clampSeriesResistance);
+        else if (equilibrium !== equilibrium) equilibrium = equilibriumOf(driven / feedConductance, feedConductance, supply, clamps, clampSeriesResistance);
+        if (
+          Math.abs(v1 - equilibrium) <= settled &&
+          Math.abs(v2 - equilibrium) <= settled &&
+          (!branchActive || branch.isQuietAt(equilibrium, settled))
+        ) {
           v1 = equilibrium;
           v2 = equilibrium;
+          if (branchActive) branch.holdAt(equilibrium);
           clampCurrent = 0;
           held = true;
           heldInput = arriving;

@@ -4,6 +4,7 @@ import { SimSolveBudgetError } from "./errors";
 import { FarNode } from "./far-node";
 import { TracedNearEnd, type NearEnd } from "./near-end";
 import { RunRecord } from "./run-record";
+import type { PinTermination } from "./termination";
 import { Trace } from "./trace";
 
 /**
@@ -34,8 +35,8 @@ export type DriverResistances = {
   low: number;
 };
 
-/** The pixel's pin: its capacitance, supply, and clamps, each behind `clampSeriesResistance` (Ω). */
-export type ReceiverLoad = { capacitance: number; supply: number; clamps: boolean; clampSeriesResistance: number };
+/** The pixel's pin: its capacitance, supply, clamps (each behind `clampSeriesResistance`, Ω) and far-end termination. */
+export type ReceiverLoad = { capacitance: number; supply: number; clamps: boolean; clampSeriesResistance: number; termination: PinTermination };
 
 export type SolverPlan = {
   dt: number;
@@ -148,7 +149,14 @@ function solveLumped(
   const { near, far } = scratch;
   near.clear();
   far.clear();
-  const node = new FarNode(receiver.capacitance + line.capacitance, dt, receiver.supply, receiver.clamps, receiver.clampSeriesResistance);
+  const node = new FarNode(
+    receiver.capacitance + line.capacitance,
+    dt,
+    receiver.supply,
+    receiver.clamps,
+    receiver.clampSeriesResistance,
+    receiver.termination,
+  );
   const seriesConductance = (resistance: number) => 1 / Math.max(resistance + line.resistance, 1e-3);
   const gHigh = seriesConductance(resistances.high);
   const gLow = seriesConductance(resistances.low);

@@ -9,6 +9,7 @@ import { measureBitLevels, measureRun, type RunMetrics } from "./metrics";
 import { bandCentre, clampCurrentLimit, switchingBands } from "./receiver";
 import { parseSimInput, type ResolvedSimInput, type SimInput } from "./schema";
 import { bitSlots, colourBits } from "./signal";
+import { pinTermination, withTermination } from "./termination";
 import { judgeVerdict, type Verdict } from "./verdict";
 import { RunRecord } from "./run-record";
 import { Trace } from "./trace";
@@ -151,6 +152,7 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
   const plan = planSolve(totals, driver.edgeTime, endTime, options.quality);
   const resistanceHigh = driver.outputResistance + resolved.seriesResistance;
   const resistanceLow = (driver.outputResistanceLow ?? driver.outputResistance) + resolved.seriesResistance;
+  const termination = pinTermination(resolved.termination, receiver.supplyVoltage);
   const solved = solveLine(
     plan,
     totals,
@@ -161,6 +163,7 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
       supply: receiver.supplyVoltage,
       clamps: receiver.clampDiodes,
       clampSeriesResistance: receiver.clampSeriesResistance,
+      termination,
     },
     scratch,
   );
@@ -182,9 +185,10 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
     guaranteed: judgeBand("guaranteed", bands.guaranteed, bandContext),
     typical: judgeBand("typical", bands.typical, bandContext),
   };
+  const highFeed = withTermination(driver.highVoltage, 1 / Math.max(resistanceHigh + totals.resistance, 1e-3), termination);
   const settledHigh = pinEquilibrium(
-    driver.highVoltage,
-    1 / Math.max(resistanceHigh + totals.resistance, 1e-3),
+    highFeed.source,
+    highFeed.conductance,
     receiver.supplyVoltage,
     receiver.clampDiodes,
     receiver.clampSeriesResistance,
