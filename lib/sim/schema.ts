@@ -160,13 +160,22 @@ const outputSchema = z.strictObject({
   sampleInterval: quantity("s", 1e-12, 1e-3).optional(),
 });
 
+/** Driver to pixel without the signal: one segment of a run that regenerating pixels split (split-run.ts). */
+const segmentShape = {
+  driver: driverSchema.prefault({}),
+  seriesResistance: quantity("Ω", 0, 10_000).default(0),
+  cable: cableSchema,
+  receiver: receiverSchema.prefault({}),
+  termination: terminationSchema.optional(),
+};
+
+export const runSegmentSchema = z.strictObject(segmentShape);
+
+export { signalSchema };
+
 export const simInputSchema = z
   .strictObject({
-    driver: driverSchema.prefault({}),
-    seriesResistance: quantity("Ω", 0, 10_000).default(0),
-    cable: cableSchema,
-    receiver: receiverSchema.prefault({}),
-    termination: terminationSchema.optional(),
+    ...segmentShape,
     signal: signalSchema,
     output: outputSchema.prefault({}),
   })
