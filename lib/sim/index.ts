@@ -27,3 +27,5 @@ export type { SplitRunInput, SplitRunResult } from "./split-run";
 export { DIFFERENTIAL_DEFAULTS, differentialLinkSchema, simulateDifferentialLink } from "./differential-link";
 export type { DifferentialLinkInput, DifferentialLinkResult, DifferentialStage } from "./differential-link";
 export type { CombinedVerdict, StageReason } from "./combined-verdict";
+export { recommendSeriesResistance, sweepSeriesResistance } from "./sweep";
+export type { SeriesRecommendation, SweepPoint, SweptJudgement } from "./sweep";

@@ -247,6 +247,11 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
   return { resolved, solved, endTime, patternBits: pattern.length, analysis };
 }
 
+/** A run judged without its traces: what a sweep over many runs needs (sweep.ts). */
+export function analyseRun(input: SimInput | ResolvedSimInput, options: Omit<SimulateOptions, "keepFullResolution" | "grid"> = {}): RunAnalysis {
+  return solveAndJudge(input, options).analysis;
+}
+
 function pointCount(endTime: number, interval: number): number {
   const points = Math.floor(endTime / interval + 1e-9) + 1;
   if (points > MAX_SAMPLED_POINTS) {
