@@ -35,7 +35,16 @@ export type SimBit = {
   typical: BitMargins;
 };
 
-export type SimLine = { z0: number; delay: number; perMetre: PerMetre; length: number; segments: number; timeStep: number };
+export type SimLine = {
+  z0: number;
+  delay: number;
+  perMetre: PerMetre;
+  length: number;
+  segments: number;
+  timeStep: number;
+  /** Bits copied on from earlier ones by bit replays (`bitReplayTolerance`) instead of solved; 0 without. */
+  copiedBits: number;
+};
 
 export type SimResult = {
   time: number[];
@@ -64,6 +73,12 @@ export type SimulateOptions = {
    * no finer than `finestInterval`, giving at most `maxPoints` points. Defaults: 4,000 points, enough to draw.
    */
   grid?: { finestInterval: number; maxPoints: number };
+  /**
+   * Copies a bit on from an earlier one once the line's state at its start lies within this many
+   * volts of the earlier one's (bit-replays.ts): a run that rings throughout then solves only the
+   * bits whose state is new. 0 or absent: every bit solved.
+   */
+  bitReplayTolerance?: number;
 };
 
 /** What a run found, apart from its traces. */
@@ -150,6 +165,7 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
   const endTime = signal.leadIn + bits.length * signal.bitPeriod + Math.max(signal.latchGap ?? 0, totals.delay + signal.bitPeriod);
 
   const plan = planSolve(totals, driver.edgeTime, endTime, options.quality);
+  plan.bitReplayTolerance = options.bitReplayTolerance ?? 0;
   const resistanceHigh = driver.outputResistance + resolved.seriesResistance;
   const resistanceLow = (driver.outputResistanceLow ?? driver.outputResistance) + resolved.seriesResistance;
   const termination = pinTermination(resolved.termination, receiver.supplyVoltage);
@@ -242,6 +258,7 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
       length: resolved.cable.length,
       segments: plan.segments,
       timeStep: plan.dt,
+      copiedBits: solved.copiedBits,
     },
   };
   return { resolved, solved, endTime, patternBits: pattern.length, analysis };
