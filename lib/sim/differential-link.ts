@@ -105,7 +105,7 @@ function parseLink(input: DifferentialLinkInput) {
 type ParsedLink = ReturnType<typeof parseLink>;
 
 /** The link as the single-ended circuit it equals, shifted up by the transmitter's open-circuit level. */
-export function shiftedLinkInput(link: ParsedLink, localReceiver: ResolvedSimInput["receiver"]): SimInput {
+function shiftedLinkInput(link: ParsedLink, localReceiver: ResolvedSimInput["receiver"]): SimInput {
   const level = link.transmitter.openCircuitLevel;
   const span = 2 * level;
   const { threshold, typicalSwitchingPoint, typicalSpread, typicalHysteresis, inputCapacitance } = link.receiver;

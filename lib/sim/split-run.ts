@@ -23,7 +23,7 @@ export type SplitRunInput = z.input<typeof splitRunSchema>;
 export type SplitRunResult = { segments: SimResult[]; verdict: CombinedVerdict };
 
 /** "segment 1 (controller to the regenerating pixel, 12 m)". */
-export function segmentLabel(index: number, count: number, length: number): string {
+function segmentLabel(index: number, count: number, length: number): string {
   const ends = index === 0 ? "controller to the regenerating pixel" : index === count - 1 ? "regenerating pixel to the end" : "between regenerating pixels";
   return `segment ${index + 1} (${ends}, ${Number(length.toPrecision(3))} m)`;
 }
