@@ -1,9 +1,11 @@
+import { BitReplays, rephase, restoreStreams, type BitSnapshot, type PinState } from "./bit-replays";
 import { rampProgress, rampSteps, type DriveSchedule } from "./drive-source";
 import { LineNearEnd, type EndCoefficients } from "./near-end";
 import type { RunRecord } from "./run-record";
 import { SegmentLibrary } from "./segment-replays";
 import { clampStepFrom, NEGLIGIBLE_CONDUCTION, pinEquilibrium, solveClamped } from "./far-node";
 import type { DriverResistances, LineTotals, ReceiverLoad, SolveOutput, SolverPlan, SolverScratch, SolverTolerances } from "./line-solver";
+import { RcBranch, withTermination } from "./termination";
 import type { Trace } from "./trace";
 import { WaveChunk } from "./wave-chunk";
 
@@ -66,7 +68,8 @@ function dcState(level: number, sourceResistance: number, ladder: Ladder, receiv
   }
   shunt(endConductance);
   theveninResistance = Math.max(theveninResistance + endResistance, 1e-3);
-  const pin = pinEquilibrium(theveninVoltage, 1 / theveninResistance, receiver.supply, receiver.clamps, receiver.clampSeriesResistance);
+  const fed = withTermination(theveninVoltage, 1 / theveninResistance, receiver.termination);
+  const pin = pinEquilibrium(fed.source, fed.conductance, receiver.supply, receiver.clamps, receiver.clampSeriesResistance);
 
   const forward = new Float64Array(segments);
   const backward = new Float64Array(segments);
@@ -85,13 +88,13 @@ function dcState(level: number, sourceResistance: number, ladder: Ladder, receiv
   return { forward, backward, pin };
 }
 
-/** Two chunks per stream: the one being read (written last chunk) and the one being written. */
-type Stream = { read: WaveChunk; write: WaveChunk };
+/** Two chunks per stream: the one being read (written last chunk) and the one being written; a third when bit replays re-cut the chunks. */
+type Stream = { read: WaveChunk; write: WaveChunk; spare: WaveChunk | null };
 
-function makeStream(length: number): Stream {
+function makeStream(length: number, withSpare: boolean): Stream {
   const read = new WaveChunk(length);
   read.fillConstant(0);
-  return { read, write: new WaveChunk(length) };
+  return { read, write: new WaveChunk(length), spare: withSpare ? new WaveChunk(length) : null };
 }
 
 class DistributedLine {
@@ -138,7 +141,16 @@ class DistributedLine {
   private readonly clampSeriesResistance: number;
   private readonly safeLow: number;
   private readonly safeHigh: number;
+  /** The far-end termination's resistive part (to ground and its current from the supply) and its RC branch. */
+  private readonly terminationConductance: number;
+  private readonly terminationCurrent: number;
+  private readonly branch: RcBranch;
   private readonly library = new SegmentLibrary();
+  private readonly replays: BitReplays | null;
+  /** The bit being solved since its first step, to be completed when the next bit starts. */
+  private openBit: BitSnapshot | null = null;
+  private bitClampPeak = 0;
+  private bitClampPeakStep = -1;
   /** The stretch being solved since the last rest, to be recorded when the next rest comes. */
   private segment: { start: number; firstEdge: number; startsHigh: boolean; farFrom: number; arrivalsFrom: number } | null = null;
   private segmentClampPeak = 0;
@@ -153,6 +165,8 @@ class DistributedLine {
   private clampCurrent = 0;
   clampCurrentPeak = 0;
   clampCurrentPeakTime = 0;
+  /** Bits copied by bit replays instead of solved. */
+  copiedBits = 0;
 
   constructor(plan: SolverPlan, line: LineTotals, drive: DriveSchedule, resistances: DriverResistances, receiver: ReceiverLoad, scratch: SolverScratch) {
     const { segments, stepsPerSegment: m, dt } = plan;
@@ -180,8 +194,10 @@ class DistributedLine {
     const share = (2 * this.z0) / arm;
     this.junctionBack = 1 - share + share * divider;
     this.junctionThrough = share * divider;
-    this.forward = Array.from({ length: segments }, () => makeStream(m));
-    this.backward = Array.from({ length: segments }, () => makeStream(m));
+    const replaying = plan.bitReplayTolerance > 0;
+    this.forward = Array.from({ length: segments }, () => makeStream(m, replaying));
+    this.backward = Array.from({ length: segments }, () => makeStream(m, replaying));
+    this.replays = replaying ? new BitReplays(plan.bitReplayTolerance) : null;
     this.junctionState = new Float64Array(4 * segments);
     this.pinValues = new Float64Array(m);
     this.arrivals = scratch.arrivals;
@@ -209,21 +225,47 @@ class DistributedLine {
     this.clampSeriesResistance = receiver.clampSeriesResistance;
     this.safeLow = receiver.clamps ? -NEGLIGIBLE_CONDUCTION : -Infinity;
     this.safeHigh = receiver.clamps ? receiver.supply + NEGLIGIBLE_CONDUCTION : Infinity;
+    this.terminationConductance = receiver.termination.conductance;
+    this.terminationCurrent = receiver.termination.current;
+    this.branch = new RcBranch(receiver.termination, dt);
   }
 
   run(): void {
-    const { m, segments, forward, backward, stepCount } = this;
+    const { m, segments, forward, backward, stepCount, rampStart, rising } = this;
     const streams = [...forward, ...backward];
     // Everything starts at 0 V: the DC state of the low drive.
     let start = this.restAt(0, false, 0);
+    let edge = 0;
+    let marked = -1;
     while (start < stepCount) {
-      const length = Math.min(m, stepCount - start);
+      let length = Math.min(m, stepCount - start);
+      let cut = false;
+      if (this.replays !== null) {
+        // Bit replays need whole states at each bit's first step (a rising edge's): chunks end there.
+        const edges = rampStart.length;
+        while (edge < edges && (rampStart[edge] < start || rising[edge] !== 1 || (rampStart[edge] === start && marked === start))) edge += 1;
+        if (edge < edges && rampStart[edge] === start) {
+          start = this.atBitStart(edge, start, streams);
+          marked = start;
+          continue;
+        }
+        if (edge < edges && rampStart[edge] < start + length) {
+          length = rampStart[edge] - start;
+          cut = true;
+        }
+      }
       this.nearEnd(start, length, backward[0].read, forward[0].write);
       for (let j = 1; j < segments; j += 1) {
         this.junction(j, length, forward[j - 1].read, backward[j].read, backward[j - 1].write, forward[j].write);
       }
       this.farEnd(start, length, forward[segments - 1].read, backward[segments - 1].write);
       for (const stream of streams) {
+        if (cut) {
+          const spare = stream.spare as WaveChunk;
+          stream.spare = rephase(stream.read, stream.write, length, m, spare);
+          stream.read = spare;
+          continue;
+        }
         const written = stream.write;
         stream.write = stream.read;
         stream.read = written;
@@ -231,6 +273,92 @@ class DistributedLine {
       start = this.restIfQuiet(start + length);
     }
     this.far.finish(stepCount - 1);
+  }
+
+  private pinState(): PinState {
+    return {
+      v1: this.v1,
+      v2: this.v2,
+      held: this.held,
+      heldInput: this.heldInput,
+      heldOutput: this.heldOutput,
+      lastWave: this.lastWave,
+      clampCurrent: this.clampCurrent,
+      branch1: this.branch.c1,
+      branch2: this.branch.c2,
+    };
+  }
+
+  private setPinState(pin: PinState): void {
+    this.v1 = pin.v1;
+    this.v2 = pin.v2;
+    this.held = pin.held;
+    this.heldInput = pin.heldInput;
+    this.heldOutput = pin.heldOutput;
+    this.lastWave = pin.lastWave;
+    this.clampCurrent = pin.clampCurrent;
+    this.branch.c1 = pin.branch1;
+    this.branch.c2 = pin.branch2;
+  }
+
+  /** What must match for bit replays: the fall's and the next bit's steps after this rising edge. */
+  private bitKey(edge: number): string {
+    const { rampStart } = this;
+    const fall = edge + 1 < rampStart.length ? rampStart[edge + 1] - rampStart[edge] : -1;
+    const next = edge + 2 < rampStart.length ? rampStart[edge + 2] - rampStart[edge] : -1;
+    return `${fall}:${next}`;
+  }
+
+  /**
+   * At a bit's first step (edge `edge`, step `step`): closes the bit solved before it, then copies
+   * bits on from an earlier one whose state matches, as long as the bits ahead match too, and
+   * takes a snapshot where solving resumes. Returns that step.
+   */
+  private atBitStart(edge: number, step: number, streams: Stream[]): number {
+    const replays = this.replays as BitReplays;
+    const reads = () => streams.map((stream) => stream.read);
+    this.far.closeAtLast();
+    const open = this.openBit;
+    if (open !== null) {
+      open.farTo = this.far.count;
+      open.arrivalsTo = this.arrivals.count;
+      open.clampPeak = this.bitClampPeak;
+      open.clampPeakAt = this.bitClampPeakStep < 0 ? -1 : this.bitClampPeakStep - open.step;
+    }
+    const last = (at: number) => at + 2 >= this.rampStart.length;
+    let match = last(edge) ? null : replays.find(this.bitKey(edge), reads(), this.junctionState, this.pinState());
+    if (match !== null) {
+      if (open !== null) open.next = match;
+      while (match.next !== null && !last(edge) && match.key === this.bitKey(edge)) {
+        const shift = step - match.step;
+        if (match.farTo > match.farFrom) {
+          this.far.append(this.far.steps.slice(match.farFrom, match.farTo), this.far.values.slice(match.farFrom, match.farTo), shift);
+        }
+        const arrivalSteps = this.arrivals.steps.slice(match.arrivalsFrom, match.arrivalsTo);
+        this.arrivals.append(arrivalSteps, this.arrivals.values.slice(match.arrivalsFrom, match.arrivalsTo), shift, arrivalSteps.length);
+        if (match.clampPeakAt >= 0 && match.clampPeak > this.clampCurrentPeak) {
+          this.clampCurrentPeak = match.clampPeak;
+          this.clampCurrentPeakTime = (step + match.clampPeakAt) * this.dt;
+        }
+        // The next snapshot may stand for a state met elsewhere in the run: the step moves by this run's bit.
+        step += this.rampStart[edge + 2] - this.rampStart[edge];
+        edge += 2;
+        this.copiedBits += 1;
+        match = match.next;
+      }
+      restoreStreams(match, reads());
+      this.junctionState.set(match.junctions);
+      this.setPinState(match.pin);
+      this.cursor = edge;
+      // A stretch being recorded for the rest replays no longer holds only solved steps.
+      this.segment = null;
+    }
+    this.bitClampPeak = 0;
+    this.bitClampPeakStep = -1;
+    const snapshot = replays.take(step, this.bitKey(edge), reads(), this.junctionState, this.pinState(), this.far.count, this.arrivals.count);
+    if (open !== null && match === null) open.next = snapshot;
+    this.openBit = snapshot;
+    return step;
   }
 
   nearEndVoltages(): LineNearEnd {
@@ -254,6 +382,7 @@ class DistributedLine {
     const state = high ? this.dcHigh : this.dcLow;
     const band = this.tolerances.quiet;
     if (Math.abs(this.v1 - state.pin) > band || Math.abs(this.v2 - state.pin) > band) return next;
+    if (!this.branch.isQuietAt(state.pin, band)) return next;
     const { segments, forward, backward } = this;
     for (let j = 0; j < segments; j += 1) {
       if (!forward[j].read.isNear(state.forward[j], band)) return next;
@@ -286,6 +415,8 @@ class DistributedLine {
         this.segmentClampPeakStep = -1;
         return edgeStep;
       }
+      // The bit being solved now spans recorded stretches: it cannot be copied as one bit.
+      this.openBit = null;
       this.far.append(recording.farSteps, recording.farValues, edgeStep);
       this.arrivals.append(recording.arrivalSteps, recording.arrivalValues, edgeStep, recording.arrivalSteps.length);
       if (recording.clampPeakAt >= 0 && recording.clampCurrentPeak > this.clampCurrentPeak) {
@@ -341,6 +472,7 @@ class DistributedLine {
     // The DC state is exact: the pin holds it until something new arrives.
     this.v1 = state.pin;
     this.v2 = state.pin;
+    this.branch.holdAt(state.pin);
     this.held = true;
     this.heldInput = state.forward[segments - 1];
     this.heldOutput = state.backward[segments - 1];
@@ -358,7 +490,9 @@ class DistributedLine {
     const inCount = incoming.count;
     const outOffsets = out.offsets;
     const outValues = out.values;
-    this.arrivals.append(inOffsets, inValues, start, inCount);
+    let inside = inCount;
+    while (inside > 1 && inOffsets[inside - 1] >= length) inside -= 1;
+    this.arrivals.append(inOffsets, inValues, start, inside);
     let outCount = 0;
     let lastOut = Number.NaN;
     let k = this.cursor;
@@ -491,7 +625,11 @@ class DistributedLine {
     const clampedVoltage = solveClamped;
     const clampStep = clampStepFrom;
     const equilibriumOf = pinEquilibrium;
-    const total = theveninConductance + this.capacitiveConductance;
+    const { terminationConductance, terminationCurrent, branch } = this;
+    const branchActive = branch.active;
+    // What feeds the pin at DC: the line's Thevenin source with the termination beside it.
+    const feedConductance = theveninConductance + terminationConductance;
+    const total = feedConductance + branch.conductance + this.capacitiveConductance;
     const inverseTotal = 1 / total;
     const weight1 = this.historyWeight1;
     const weight2 = this.historyWeight2;
@@ -518,7 +656,7 @@ class DistributedLine {
     let nextChange = inCount > 1 ? inOffsets[1] : length;
     let arriving = inValues[0];
     let thevenin = arriving * theveninScale;
-    let driven = theveninConductance * thevenin;
+    let driven = theveninConductance * thevenin + terminationCurrent;
     let equilibrium = Number.NaN;
     let i = 0;
     while (i < length) {
@@ -527,7 +665,7 @@ class DistributedLine {
         arriving = inValues[run];
         nextChange = run + 1 < inCount ? inOffsets[run + 1] : length;
         thevenin = arriving * theveninScale;
-        driven = theveninConductance * thevenin;
+        driven = theveninConductance * thevenin + terminationCurrent;
         equilibrium = Number.NaN;
       }
       if (held) {
@@ -545,7 +683,8 @@ class DistributedLine {
         }
         held = false;
       }
-      const injected = driven + weight1 * v1 - weight2 * v2;
+      const branchCurrent = branchActive ? branch.current() : 0;
+      const injected = driven + branchCurrent + weight1 * v1 - weight2 * v2;
       let v = injected * inverseTotal;
       if (v > safeHigh || v < safeLow) {
         const quick = clampCurrent === 0 ? Number.NaN : clampStep(total, injected, supply, v1, clampCurrent, clampSeriesResistance);
@@ -559,6 +698,7 @@ class DistributedLine {
       } else {
         clampCurrent = 0;
       }
+      if (branchActive) branch.advance(v, branchCurrent);
       v2 = v1;
       v1 = v;
       const wave = 2 * (v + endResistance * (thevenin - v) * theveninConductance) - arriving;
@@ -572,11 +712,16 @@ class DistributedLine {
       pin[i] = v;
       if (Math.abs(v1 - v2) <= settled) {
         // A clamped pin's DC value is one short Newton step away, or too far away to hold at.
-        if (clampCurrent !== 0) equilibrium = clampStep(theveninConductance, driven, supply, v1, clampCurrent, clampSeriesResistance);
-        else if (equilibrium !== equilibrium) equilibrium = equilibriumOf(thevenin, theveninConductance, supply, clamps, clampSeriesResistance);
-        if (Math.abs(v1 - equilibrium) <= settled && Math.abs(v2 - equilibrium) <= settled) {
+        if (clampCurrent !== 0) equilibrium = clampStep(feedConductance, driven, supply, v1, clampCurrent, clampSeriesResistance);
+        else if (equilibrium !== equilibrium) equilibrium = equilibriumOf(driven / feedConductance, feedConductance, supply, clamps, clampSeriesResistance);
+        if (
+          Math.abs(v1 - equilibrium) <= settled &&
+          Math.abs(v2 - equilibrium) <= settled &&
+          (!branchActive || branch.isQuietAt(equilibrium, settled))
+        ) {
           v1 = equilibrium;
           v2 = equilibrium;
+          if (branchActive) branch.holdAt(equilibrium);
           clampCurrent = 0;
           held = true;
           heldInput = arriving;
@@ -597,6 +742,10 @@ class DistributedLine {
     if (clampPeak > this.clampCurrentPeak) {
       this.clampCurrentPeak = clampPeak;
       this.clampCurrentPeakTime = clampPeakStep * dt;
+    }
+    if (clampPeak > this.bitClampPeak) {
+      this.bitClampPeak = clampPeak;
+      this.bitClampPeakStep = clampPeakStep;
     }
     if (clampPeak > this.segmentClampPeak) {
       this.segmentClampPeak = clampPeak;
@@ -622,5 +771,6 @@ export function solveDistributed(
     far: solver.far,
     clampCurrentPeak: solver.clampCurrentPeak,
     clampCurrentPeakTime: solver.clampCurrentPeakTime,
+    copiedBits: solver.copiedBits,
   };
 }

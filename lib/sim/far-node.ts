@@ -1,3 +1,5 @@
+import { NO_TERMINATION, RcBranch, withTermination, type PinTermination } from "./termination";
+
 /**
  * The pixel's input pin: input capacitance and two clamp diodes (to 0 V and to VDD), each behind
  * a series resistance, fed by a Thevenin source (the line, or the driver when the cable has no
@@ -136,6 +138,7 @@ export class FarNode {
   private readonly historyWeight2: number;
   private readonly safeLow: number;
   private readonly safeHigh: number;
+  private readonly branch: RcBranch;
   /** Clamp current of the last step (A). */
   current = 0;
 
@@ -145,7 +148,9 @@ export class FarNode {
     private readonly supply: number,
     private readonly clamps: boolean,
     private readonly clampSeriesResistance: number,
+    private readonly termination: PinTermination = NO_TERMINATION,
   ) {
+    this.branch = new RcBranch(termination, dt);
     this.capacitiveConductance = (3 * capacitance) / (2 * dt);
     this.historyWeight1 = (2 * capacitance) / dt;
     this.historyWeight2 = capacitance / (2 * dt);
@@ -155,8 +160,11 @@ export class FarNode {
 
   /** Advances one step with the pin fed by `source` through conductance `conductance`. */
   step(source: number, conductance: number): number {
-    const injected = conductance * source + this.historyWeight1 * this.v1 - this.historyWeight2 * this.v2;
-    const total = conductance + this.capacitiveConductance;
+    const { termination, branch } = this;
+    const branchCurrent = branch.current();
+    const injected =
+      conductance * source + termination.current + branchCurrent + this.historyWeight1 * this.v1 - this.historyWeight2 * this.v2;
+    const total = conductance + termination.conductance + branch.conductance + this.capacitiveConductance;
     let v = injected / total;
     if (v > this.safeHigh || v < this.safeLow) {
       v = solveClamped(total, injected, this.supply, 2 * this.v1 - this.v2, this.clampSeriesResistance);
@@ -164,6 +172,7 @@ export class FarNode {
     } else {
       this.current = 0;
     }
+    branch.advance(v, branchCurrent);
     this.v2 = this.v1;
     this.v1 = v;
     return v;
@@ -171,16 +180,18 @@ export class FarNode {
 
   /** The DC voltage the pin settles to for this source. */
   equilibrium(source: number, conductance: number): number {
-    return pinEquilibrium(source, conductance, this.supply, this.clamps, this.clampSeriesResistance);
+    const fed = withTermination(source, conductance, this.termination);
+    return pinEquilibrium(fed.source, fed.conductance, this.supply, this.clamps, this.clampSeriesResistance);
   }
 
-  /** True when the last two steps sit within `tolerance` of `target`. */
+  /** True when the last two steps (and an RC termination's capacitor) sit within `tolerance` of `target`. */
   isSettledAt(target: number, tolerance: number): boolean {
-    return Math.abs(this.v1 - target) <= tolerance && Math.abs(this.v2 - target) <= tolerance;
+    return Math.abs(this.v1 - target) <= tolerance && Math.abs(this.v2 - target) <= tolerance && this.branch.isQuietAt(target, tolerance);
   }
 
   holdAt(value: number): void {
     this.v1 = value;
     this.v2 = value;
+    this.branch.holdAt(value);
   }
 }

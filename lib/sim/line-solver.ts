@@ -4,6 +4,7 @@ import { SimSolveBudgetError } from "./errors";
 import { FarNode } from "./far-node";
 import { TracedNearEnd, type NearEnd } from "./near-end";
 import { RunRecord } from "./run-record";
+import type { PinTermination } from "./termination";
 import { Trace } from "./trace";
 
 /**
@@ -34,8 +35,8 @@ export type DriverResistances = {
   low: number;
 };
 
-/** The pixel's pin: its capacitance, supply, and clamps, each behind `clampSeriesResistance` (Ω). */
-export type ReceiverLoad = { capacitance: number; supply: number; clamps: boolean; clampSeriesResistance: number };
+/** The pixel's pin: its capacitance, supply, clamps (each behind `clampSeriesResistance`, Ω) and far-end termination. */
+export type ReceiverLoad = { capacitance: number; supply: number; clamps: boolean; clampSeriesResistance: number; termination: PinTermination };
 
 export type SolverPlan = {
   dt: number;
@@ -45,6 +46,8 @@ export type SolverPlan = {
   segments: number;
   stepsPerSegment: number;
   tolerances: SolverTolerances;
+  /** Bit replays (bit-replays.ts): how close two states at a bit's first step must be for one to be copied on from the other (V); 0: off. */
+  bitReplayTolerance: number;
 };
 
 /** Records a caller lends to the solver so that repeated runs reuse their memory. */
@@ -59,6 +62,8 @@ export type SolveOutput = {
   far: Trace;
   clampCurrentPeak: number;
   clampCurrentPeakTime: number;
+  /** Bits copied by bit replays instead of solved (bit-replays.ts). */
+  copiedBits: number;
 };
 
 export const MAX_SOLVER_STEPS = 5_000_000;
@@ -102,13 +107,13 @@ export function planSolve(line: LineTotals, edgeTime: number, endTime: number, q
   const maxStep = Math.min(rule.maxStep, edgeTime / rule.stepsPerEdge);
   let plan: SolverPlan;
   if (line.delay < maxStep / 2) {
-    plan = { dt: maxStep, stepCount: 0, segments: 0, stepsPerSegment: 0, tolerances: rule.tolerances };
+    plan = { dt: maxStep, stepCount: 0, segments: 0, stepsPerSegment: 0, tolerances: rule.tolerances, bitReplayTolerance: 0 };
   } else {
     const loss = Math.max(line.resistance / line.z0, line.conductance * line.z0);
     const wanted = Math.min(MAX_SEGMENTS, Math.max(1, Math.ceil(loss * SEGMENTS_PER_LOSS)));
     const segments = Math.max(1, Math.min(wanted, Math.floor(line.delay / maxStep)));
     const stepsPerSegment = Math.ceil(line.delay / segments / maxStep - 1e-9);
-    plan = { dt: line.delay / (segments * stepsPerSegment), stepCount: 0, segments, stepsPerSegment, tolerances: rule.tolerances };
+    plan = { dt: line.delay / (segments * stepsPerSegment), stepCount: 0, segments, stepsPerSegment, tolerances: rule.tolerances, bitReplayTolerance: 0 };
   }
   plan.stepCount = Math.ceil(endTime / plan.dt) + 1;
   if (plan.stepCount > MAX_SOLVER_STEPS) {
@@ -148,7 +153,14 @@ function solveLumped(
   const { near, far } = scratch;
   near.clear();
   far.clear();
-  const node = new FarNode(receiver.capacitance + line.capacitance, dt, receiver.supply, receiver.clamps, receiver.clampSeriesResistance);
+  const node = new FarNode(
+    receiver.capacitance + line.capacitance,
+    dt,
+    receiver.supply,
+    receiver.clamps,
+    receiver.clampSeriesResistance,
+    receiver.termination,
+  );
   const seriesConductance = (resistance: number) => 1 / Math.max(resistance + line.resistance, 1e-3);
   const gHigh = seriesConductance(resistances.high);
   const gLow = seriesConductance(resistances.low);
@@ -192,5 +204,5 @@ function solveLumped(
   }
   near.finish(stepCount - 1);
   far.finish(stepCount - 1);
-  return { dt, stepCount, near: new TracedNearEnd(near), far, clampCurrentPeak, clampCurrentPeakTime };
+  return { dt, stepCount, near: new TracedNearEnd(near), far, clampCurrentPeak, clampCurrentPeakTime, copiedBits: 0 };
 }

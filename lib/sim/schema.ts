@@ -145,16 +145,37 @@ const signalSchema = z
     }
   });
 
+/** Far-end termination at the pixel input (lib/sim/termination.ts); none when absent. */
+export const terminationSchema = z.discriminatedUnion(
+  "kind",
+  [
+    z.strictObject({ kind: z.literal("parallel"), resistance: quantity("Ω", 1, 1e6) }),
+    z.strictObject({ kind: z.literal("thevenin"), toSupply: quantity("Ω", 1, 1e6), toGround: quantity("Ω", 1, 1e6) }),
+    z.strictObject({ kind: z.literal("rc"), resistance: quantity("Ω", 1, 1e6), capacitance: quantity("F", 1e-12, 1e-6) }),
+  ],
+  { error: "unknown termination kind; use one of parallel, thevenin, rc" },
+);
+
 const outputSchema = z.strictObject({
   sampleInterval: quantity("s", 1e-12, 1e-3).optional(),
 });
 
+/** Driver to pixel without the signal: one segment of a run that regenerating pixels split (split-run.ts). */
+const segmentShape = {
+  driver: driverSchema.prefault({}),
+  seriesResistance: quantity("Ω", 0, 10_000).default(0),
+  cable: cableSchema,
+  receiver: receiverSchema.prefault({}),
+  termination: terminationSchema.optional(),
+};
+
+export const runSegmentSchema = z.strictObject(segmentShape);
+
+export { signalSchema };
+
 export const simInputSchema = z
   .strictObject({
-    driver: driverSchema.prefault({}),
-    seriesResistance: quantity("Ω", 0, 10_000).default(0),
-    cable: cableSchema,
-    receiver: receiverSchema.prefault({}),
+    ...segmentShape,
     signal: signalSchema,
     output: outputSchema.prefault({}),
   })

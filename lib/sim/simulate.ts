@@ -9,6 +9,7 @@ import { measureBitLevels, measureRun, type RunMetrics } from "./metrics";
 import { bandCentre, clampCurrentLimit, switchingBands } from "./receiver";
 import { parseSimInput, type ResolvedSimInput, type SimInput } from "./schema";
 import { bitSlots, colourBits } from "./signal";
+import { pinTermination, withTermination } from "./termination";
 import { judgeVerdict, type Verdict } from "./verdict";
 import { RunRecord } from "./run-record";
 import { Trace } from "./trace";
@@ -34,7 +35,16 @@ export type SimBit = {
   typical: BitMargins;
 };
 
-export type SimLine = { z0: number; delay: number; perMetre: PerMetre; length: number; segments: number; timeStep: number };
+export type SimLine = {
+  z0: number;
+  delay: number;
+  perMetre: PerMetre;
+  length: number;
+  segments: number;
+  timeStep: number;
+  /** Bits copied on from earlier ones by bit replays (`bitReplayTolerance`) instead of solved; 0 without. */
+  copiedBits: number;
+};
 
 export type SimResult = {
   time: number[];
@@ -63,6 +73,12 @@ export type SimulateOptions = {
    * no finer than `finestInterval`, giving at most `maxPoints` points. Defaults: 4,000 points, enough to draw.
    */
   grid?: { finestInterval: number; maxPoints: number };
+  /**
+   * Copies a bit on from an earlier one once the line's state at its start lies within this many
+   * volts of the earlier one's (bit-replays.ts): a run that rings throughout then solves only the
+   * bits whose state is new. 0 or absent: every bit solved.
+   */
+  bitReplayTolerance?: number;
 };
 
 /** What a run found, apart from its traces. */
@@ -149,8 +165,10 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
   const endTime = signal.leadIn + bits.length * signal.bitPeriod + Math.max(signal.latchGap ?? 0, totals.delay + signal.bitPeriod);
 
   const plan = planSolve(totals, driver.edgeTime, endTime, options.quality);
+  plan.bitReplayTolerance = options.bitReplayTolerance ?? 0;
   const resistanceHigh = driver.outputResistance + resolved.seriesResistance;
   const resistanceLow = (driver.outputResistanceLow ?? driver.outputResistance) + resolved.seriesResistance;
+  const termination = pinTermination(resolved.termination, receiver.supplyVoltage);
   const solved = solveLine(
     plan,
     totals,
@@ -161,6 +179,7 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
       supply: receiver.supplyVoltage,
       clamps: receiver.clampDiodes,
       clampSeriesResistance: receiver.clampSeriesResistance,
+      termination,
     },
     scratch,
   );
@@ -182,9 +201,10 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
     guaranteed: judgeBand("guaranteed", bands.guaranteed, bandContext),
     typical: judgeBand("typical", bands.typical, bandContext),
   };
+  const highFeed = withTermination(driver.highVoltage, 1 / Math.max(resistanceHigh + totals.resistance, 1e-3), termination);
   const settledHigh = pinEquilibrium(
-    driver.highVoltage,
-    1 / Math.max(resistanceHigh + totals.resistance, 1e-3),
+    highFeed.source,
+    highFeed.conductance,
     receiver.supplyVoltage,
     receiver.clampDiodes,
     receiver.clampSeriesResistance,
@@ -238,9 +258,15 @@ function solveAndJudge(input: SimInput | ResolvedSimInput, options: SimulateOpti
       length: resolved.cable.length,
       segments: plan.segments,
       timeStep: plan.dt,
+      copiedBits: solved.copiedBits,
     },
   };
   return { resolved, solved, endTime, patternBits: pattern.length, analysis };
+}
+
+/** A run judged without its traces: what a sweep over many runs needs (sweep.ts). */
+export function analyseRun(input: SimInput | ResolvedSimInput, options: Omit<SimulateOptions, "keepFullResolution" | "grid"> = {}): RunAnalysis {
+  return solveAndJudge(input, options).analysis;
 }
 
 function pointCount(endTime: number, interval: number): number {

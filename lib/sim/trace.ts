@@ -105,6 +105,11 @@ export class Trace {
     this.lastValue = value;
   }
 
+  /** Ends the current line at the last step fed with a breakpoint there, so that copied breakpoints can follow it (bit replays). */
+  closeAtLast(): void {
+    if (this.count > 0 && this.lastStep > this.originStep) this.write(this.lastStep, this.originValue + this.slope() * (this.lastStep - this.originStep));
+  }
+
   /** Breakpoints written from index `from` on, with their steps counted from `origin`. */
   copySince(from: number, origin: number): { steps: Int32Array; values: Float64Array } {
     const steps = this.steps.slice(from, this.count);

@@ -35,6 +35,24 @@ export function temperatureCelsiusFor(thermalVoltage: number): number {
   return (thermalVoltage * ELEMENTARY_CHARGE) / BOLTZMANN - 273.15;
 }
 
+/** The far-end termination as plain elements: R to ground, R to a supply source and R to ground, or R then C to ground. */
+function terminationLines(circuit: ReferenceCircuit): string[] {
+  const termination = circuit.termination;
+  if (!termination) return [];
+  switch (termination.kind) {
+    case "parallel":
+      return [`rterm far 0 ${spiceNumber(termination.resistance)}`];
+    case "thevenin":
+      return [
+        `vtermsupply termsupply 0 DC ${spiceNumber(circuit.supplyVoltage)}`,
+        `rtermup far termsupply ${spiceNumber(termination.toSupply)}`,
+        `rtermdown far 0 ${spiceNumber(termination.toGround)}`,
+      ];
+    case "rc":
+      return [`rterm far termcap ${spiceNumber(termination.resistance)}`, `cterm termcap 0 ${spiceNumber(termination.capacitance)}`];
+  }
+}
+
 export interface NetlistOptions {
   /** File that wrdata writes; omit to run without writing results (for timing). */
   outputFile?: string;
@@ -60,6 +78,7 @@ export function buildNgspiceNetlist(circuit: ReferenceCircuit, options: NetlistO
     lines.push("vshort near far DC 0");
   }
   lines.push(`cin far 0 ${spiceNumber(circuit.inputCapacitance)}`);
+  lines.push(...terminationLines(circuit));
   if (circuit.clampDiodes) {
     const { saturationCurrent, emissionCoefficient, thermalVoltage, seriesResistance } = circuit.diode;
     const celsius = spiceNumber(temperatureCelsiusFor(thermalVoltage));

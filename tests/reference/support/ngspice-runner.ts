@@ -71,6 +71,25 @@ export async function runNgspice(circuit: ReferenceCircuit, options: Omit<Netlis
   }
 }
 
+/**
+ * Runs a netlist written elsewhere (support/differential-netlist.ts) whose control block writes
+ * `probes` with wrdata to the file named by `outputFileOf`.
+ */
+export async function runNgspiceNetlist(netlistFor: (outputFile: string) => string, probes: string[]): Promise<NgspiceResult> {
+  const directory = await mkdtemp(join(tmpdir(), "sim-reference-"));
+  try {
+    const outputFile = join(directory, "result.txt");
+    const { stdout, wallMilliseconds } = await runNetlist(netlistFor(outputFile), directory);
+    const { time, vectors } = parseWrdata(await readFile(outputFile, "utf8"));
+    for (const probe of probes) {
+      if (!vectors[probe]) throw new Error(`ngspice wrote no ${probe}`);
+    }
+    return { time, vectors, analysisSeconds: analysisSecondsFrom(stdout), wallMilliseconds };
+  } finally {
+    await rm(directory, { recursive: true, force: true });
+  }
+}
+
 /** Runs the circuit without writing results, for timing the solve alone. */
 export async function timeNgspice(circuit: ReferenceCircuit, options: Omit<NetlistOptions, "outputFile"> = {}): Promise<{ analysisSeconds: number; wallMilliseconds: number }> {
   const directory = await mkdtemp(join(tmpdir(), "sim-reference-"));

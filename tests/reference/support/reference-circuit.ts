@@ -25,6 +25,8 @@ export interface ReferenceCircuit {
   clampDiodes: boolean;
   diode: DiodeLaw;
   receiver: { highThreshold: number; lowThreshold: number; deglitchTime: number; minPulse: number; decisionTime: number };
+  /** Far-end termination beside the pin (docs: parallel R to ground, Thevenin divider to the pixel's supply, R in series with C). */
+  termination?: ReferenceTermination;
   bits: string;
   bitPeriod: number;
   zeroHigh: number;
@@ -33,6 +35,11 @@ export interface ReferenceCircuit {
   /** Time simulated after the last bit slot ends. */
   quietTail: number;
 }
+
+export type ReferenceTermination =
+  | { kind: "parallel"; resistance: number }
+  | { kind: "thevenin"; toSupply: number; toGround: number }
+  | { kind: "rc"; resistance: number; capacitance: number };
 
 type PerMetre = { resistance: number; inductance: number; capacitance: number; conductance: number };
 
@@ -52,6 +59,7 @@ export interface DocSimInput {
     minPulse?: number;
     decisionTime?: number;
   };
+  termination?: ReferenceTermination;
   signal: {
     bits?: string;
     colours?: [number, number, number][];
@@ -118,6 +126,7 @@ export function resolveReferenceCircuit(
       minPulse: input.receiver.minPulse ?? DOC_DEFAULTS.minPulse,
       decisionTime: input.receiver.decisionTime ?? DOC_DEFAULTS.decisionTime,
     },
+    ...(input.termination ? { termination: input.termination } : {}),
     bits,
     bitPeriod: signal.bitPeriod,
     zeroHigh: signal.zeroHigh,
