@@ -195,10 +195,11 @@ function recordAttempt(work: LearnerWork, learner: { id: string; cohortId: strin
     passed: scored.passed,
     createdAt: at,
   });
-  const fact = work.labs.get(lab.slug) ?? { attempts: 0, bestScore: 0, firstPassedAt: null };
+  const fact = work.labs.get(lab.slug) ?? { attempts: 0, bestScore: 0, bestPassingScore: null, firstPassedAt: null };
   work.labs.set(lab.slug, {
     attempts: fact.attempts + 1,
     bestScore: Math.max(fact.bestScore, scored.score),
+    bestPassingScore: scored.passed ? Math.max(fact.bestPassingScore ?? 0, scored.score) : fact.bestPassingScore,
     firstPassedAt: fact.firstPassedAt ?? (scored.passed ? at : null),
   });
 }
@@ -285,6 +286,8 @@ function lessonRows(userId: string, work: LearnerWork) {
     labs: work.labs,
     checks: work.checks,
     lessons: new Map([...work.lessonsStarted].map(([slug, startedAt]) => [slug, { startedAt, completedAt: null }])),
+    // Only the lessons' done rule is read here, which bench work does not enter.
+    bench: new Map(),
   });
   return progress.lessons.flatMap((lesson) => {
     const startedAt = work.lessonsStarted.get(lesson.slug);

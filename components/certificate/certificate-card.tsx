@@ -1,21 +1,18 @@
 import Link from "next/link";
 import { Card } from "@/components/ui/card";
 import { buttonClass } from "@/components/ui/button-class";
-import { getCourse } from "@/lessons";
 import { formatCertificateCode } from "@/lib/certificates/code";
-import { evaluateCompletion } from "@/lib/certificates/completion";
-import { issueCertificateIfComplete } from "@/lib/certificates/issue";
+import type { CertificateStanding } from "@/lib/certificates/standing";
 import { certificatePdfPath, learnerCertificatePath } from "@/lib/certificates/urls";
 
 /**
  * For the learner's home: where they stand with the certificate, and once it is issued its PDF to
- * download, beside a link to its page. It checks the
- * completion rule as it renders, so a graduate's certificate appears here even if no earlier check ran.
+ * download, beside a link to its page. The standing is read with the completion rule checked, so a
+ * graduate's certificate appears here even if no earlier check ran.
  */
-export async function CertificateCard({ userId }: { userId: string }) {
-  const result = await issueCertificateIfComplete({ userId });
-  if (result.status === "not-met") {
-    const status = result.facts ? evaluateCompletion(getCourse(), result.facts) : null;
+export function CertificateCard({ standing }: { standing: CertificateStanding }) {
+  if (!standing.certificate) {
+    const status = standing.requirements;
     const met = status ? [...status.labs.map((lab) => lab.met), ...status.benchExercises.map((exercise) => exercise.accepted)] : [];
     return (
       <Card>
@@ -29,7 +26,7 @@ export async function CertificateCard({ userId }: { userId: string }) {
       </Card>
     );
   }
-  const { certificate } = result;
+  const { certificate } = standing;
   if (certificate.revokedAt) {
     return (
       <Card>

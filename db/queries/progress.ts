@@ -1,18 +1,19 @@
 import { eq, isNull, sql } from "drizzle-orm";
 import { db } from "../client";
-import { labAttempts, lessonProgress } from "../schema";
+import { benchSubmissions, labAttempts, lessonProgress } from "../schema";
 
-export type LabResult = { labSlug: string; attempts: number; bestScore: number; firstPassedAt: Date | null };
+export type LabResult = { labSlug: string; attempts: number; bestScore: number; bestPassingScore: number | null; firstPassedAt: Date | null };
 
 const asDate = (value: string | Date | null) => (value === null ? null : new Date(value));
 
-/** Per lab the learner has tried: attempts, best score and when it was first passed. */
+/** Per lab the learner has tried: attempts, best score (overall and among passes) and when it was first passed. */
 export async function listLabResultsByLearner(params: { userId: string }): Promise<LabResult[]> {
   return db
     .select({
       labSlug: labAttempts.labSlug,
       attempts: sql<number>`count(*)::int`,
       bestScore: sql<number>`max(${labAttempts.score})::int`,
+      bestPassingScore: sql<number | null>`(max(${labAttempts.score}) filter (where ${labAttempts.passed}))::int`,
       firstPassedAt: sql<Date | null>`min(${labAttempts.createdAt}) filter (where ${labAttempts.passed})`.mapWith(asDate),
     })
     .from(labAttempts)
@@ -48,4 +49,12 @@ export async function markLessonsCompleted(params: { userId: string; completions
         setWhere: isNull(lessonProgress.completedAt),
       });
   }
+}
+
+/** The status of each bench exercise the learner has started on. */
+export async function listBenchStatusesByLearner(params: { userId: string }) {
+  return db
+    .select({ exerciseSlug: benchSubmissions.exerciseSlug, status: benchSubmissions.status })
+    .from(benchSubmissions)
+    .where(eq(benchSubmissions.learnerId, params.userId));
 }

@@ -4,6 +4,7 @@ import type { SessionUser } from "@/lib/auth/session-store";
 import { displayNameOf } from "@/lib/uploads/file-names";
 import { readImageContent } from "@/lib/uploads/image-content";
 import { deleteStoredFiles, fetchStoredFile } from "@/lib/uploads/stored-files";
+import { isBenchExerciseOpen } from "./exercise-lock";
 import { benchPhotoLimits, formatFileSize, refuseDeclaredPhotos, type DeclaredFile } from "./photo-limits";
 
 // The two halves of a bench photo upload. Before anything is sent, the upload route asks whether
@@ -23,6 +24,9 @@ export async function refuseBenchPhotoUpload(params: {
   if (viewer.role !== "learner") return { code: "FORBIDDEN", message: "Only learners upload bench photos." };
   const submission = await findBenchSubmissionOfLearner({ submissionId: params.submissionId, learnerId: viewer.id });
   if (!submission) return { code: "NOT_FOUND", message: "That bench submission was not found." };
+  if (!(await isBenchExerciseOpen({ userId: viewer.id, exerciseSlug: submission.exerciseSlug }))) {
+    return { code: "FORBIDDEN", message: "This bench exercise opens with its lesson. Finish the lessons before it first." };
+  }
   if (!(editableBenchStatuses as readonly string[]).includes(submission.status)) {
     return { code: "BAD_REQUEST", message: "This work is with your instructor, so its photos cannot change now." };
   }

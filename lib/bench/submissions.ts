@@ -9,20 +9,25 @@ import { findLearnerCohortId } from "@/db/queries/cohorts";
 import { hasPermission } from "@/lib/auth/permissions";
 import type { SessionUser } from "@/lib/auth/session-store";
 import { deleteStoredFiles } from "@/lib/uploads/stored-files";
+import { isBenchExerciseOpen } from "./exercise-lock";
 import { findBenchExercise } from "./exercises";
 import { benchPhotoLimits } from "./photo-limits";
 import { parseBenchForm } from "./submission-form";
 
 export type DraftOutcome =
   | { status: "ready"; submissionId: string }
-  | { status: "forbidden" | "not-found" | "no-cohort" | "locked" };
+  | { status: "forbidden" | "not-found" | "no-cohort" | "locked" | "lesson-locked" };
 
-/** The learner's editable submission for the exercise, created as a draft when they start on it. */
+/**
+ * The learner's editable submission for the exercise, created as a draft when they start on it;
+ * refused while the exercise's lesson is still locked to them.
+ */
 export async function openBenchDraft(params: { learner: SessionUser; exerciseSlug: string }): Promise<DraftOutcome> {
   const { learner } = params;
   if (!hasPermission(learner.role, "bench:submit")) return { status: "forbidden" };
   const entry = findBenchExercise(params.exerciseSlug);
   if (!entry) return { status: "not-found" };
+  if (!(await isBenchExerciseOpen({ userId: learner.id, exerciseSlug: entry.exercise.slug }))) return { status: "lesson-locked" };
   const existing = await findBenchSubmissionByExercise({ learnerId: learner.id, exerciseSlug: entry.exercise.slug });
   if (existing) {
     return existing.status === "draft" || existing.status === "returned"
@@ -39,7 +44,7 @@ export type HandInOutcome =
   | { status: "submitted" }
   | { status: "invalid"; fieldErrors: Record<string, string>; entries: Record<string, string> }
   | { status: "photo-count"; photos: number; entries: Record<string, string> }
-  | { status: "forbidden" | "not-found" | "no-cohort" | "locked" };
+  | { status: "forbidden" | "not-found" | "no-cohort" | "locked" | "lesson-locked" };
 
 /** Validates the form and hands the work in for review, with its photos as they are now. */
 export async function handInBenchWork(params: {

@@ -2,9 +2,11 @@ import type { Course } from "@/lessons/schema";
 
 export type LessonState = "locked" | "open" | "done";
 
-export type LabFact = { attempts: number; bestScore: number; firstPassedAt: Date | null };
+export type LabFact = { attempts: number; bestScore: number; bestPassingScore: number | null; firstPassedAt: Date | null };
 export type CheckFact = { answers: number; firstCorrectAt: Date | null };
 export type LessonFact = { startedAt: Date; completedAt: Date | null };
+/** Where the learner's work on a bench exercise stands; "not-started" when there is no submission. */
+export type BenchState = "not-started" | "draft" | "submitted" | "returned" | "accepted";
 
 /** What the database knows of one learner, reduced to what the rules need. */
 export type LearnerRecord = {
@@ -12,6 +14,8 @@ export type LearnerRecord = {
   /** Keyed by checkKey(lessonSlug, checkId). */
   checks: ReadonlyMap<string, CheckFact>;
   lessons: ReadonlyMap<string, LessonFact>;
+  /** Status of the learner's submission, by bench exercise slug. */
+  bench: ReadonlyMap<string, Exclude<BenchState, "not-started">>;
 };
 
 export type LessonProgressView = {
@@ -23,7 +27,19 @@ export type LessonProgressView = {
   state: LessonState;
   /** The lesson to finish before this one opens, when it is locked. */
   waitsFor: { slug: string; number: number; title: string } | null;
-  lab: { slug: string; title: string; attempts: number; bestScore: number | null; passed: boolean } | null;
+  lab: {
+    slug: string;
+    title: string;
+    attempts: number;
+    bestScore: number | null;
+    passed: boolean;
+    /** The score a passing attempt needs for the certificate; null when the certificate does not list the lab. */
+    certificateMinScore: number | null;
+    /** The best passing attempt meets the certificate's minimum. */
+    meetsCertificate: boolean;
+  } | null;
+  /** The lesson's bench exercise, real hardware reviewed by an instructor, under the same lock as the lesson. */
+  bench: { slug: string; title: string; state: BenchState; requiredForCertificate: boolean } | null;
   checks: { total: number; answered: number; correct: number };
   startedAt: Date | null;
   /** When the rule was first met: the later of the first passing lab attempt and each check's first right answer. */
@@ -63,6 +79,7 @@ export function computeCourseProgress(course: Course, record: LearnerRecord): Co
     const checkRows = checkIds.map((id) => record.checks.get(checkKey(lesson.slug, id)));
     const labRow = lesson.lab ? record.labs.get(lesson.lab.slug) : undefined;
     const stored = record.lessons.get(lesson.slug);
+    const certificateMinScore = lesson.lab ? (course.completion.labs.find((entry) => entry.lab === lesson.lab!.slug)?.minScore ?? null) : null;
 
     const metAt = latest([
       ...(lesson.lab ? [labRow?.firstPassedAt ?? null] : []),
@@ -89,6 +106,16 @@ export function computeCourseProgress(course: Course, record: LearnerRecord): Co
             attempts: labRow?.attempts ?? 0,
             bestScore: labRow && labRow.attempts > 0 ? labRow.bestScore : null,
             passed: Boolean(labRow?.firstPassedAt),
+            certificateMinScore,
+            meetsCertificate: certificateMinScore !== null && (labRow?.bestPassingScore ?? -1) >= certificateMinScore,
+          }
+        : null,
+      bench: lesson.bench
+        ? {
+            slug: lesson.bench.slug,
+            title: lesson.bench.title,
+            state: record.bench.get(lesson.bench.slug) ?? "not-started",
+            requiredForCertificate: course.completion.benchExercises.includes(lesson.bench.slug),
           }
         : null,
       checks: {

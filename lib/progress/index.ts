@@ -1,10 +1,10 @@
 import "server-only";
-import { listLabResultsByLearner, listLessonProgressByLearner, markLessonsCompleted, markLessonStarted } from "@/db/queries/progress";
+import { listBenchStatusesByLearner, listLabResultsByLearner, listLessonProgressByLearner, markLessonsCompleted, markLessonStarted } from "@/db/queries/progress";
 import { listQuickCheckResultsByLearner } from "@/db/queries/quick-checks";
 import { getCourse } from "@/lessons";
 import { checkKey, computeCourseProgress, type CourseProgress, type LessonProgressView } from "./course-progress";
 
-export type { CourseProgress, LessonProgressView, LessonState } from "./course-progress";
+export type { BenchState, CourseProgress, LessonProgressView, LessonState } from "./course-progress";
 
 /**
  * The learner's progress through the course, computed from their lab attempts, quick-check answers
@@ -12,15 +12,17 @@ export type { CourseProgress, LessonProgressView, LessonState } from "./course-p
  * stamped (with the moment the rule was met, not the moment of looking).
  */
 export async function getCourseProgress(params: { userId: string }): Promise<CourseProgress> {
-  const [labs, checks, lessons] = await Promise.all([
+  const [labs, checks, lessons, bench] = await Promise.all([
     listLabResultsByLearner(params),
     listQuickCheckResultsByLearner(params),
     listLessonProgressByLearner(params),
+    listBenchStatusesByLearner(params),
   ]);
   const progress = computeCourseProgress(getCourse(), {
     labs: new Map(labs.map((row) => [row.labSlug, row])),
     checks: new Map(checks.map((row) => [checkKey(row.lessonSlug, row.checkId), row])),
     lessons: new Map(lessons.map((row) => [row.lessonSlug, row])),
+    bench: new Map(bench.map((row) => [row.exerciseSlug, row.status])),
   });
   const completions = progress.lessons.flatMap((lesson) =>
     lesson.completionToRecord && lesson.completedAt ? [{ lessonSlug: lesson.slug, completedAt: lesson.completedAt }] : [],

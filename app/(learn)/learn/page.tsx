@@ -10,19 +10,38 @@ import { formatDayRange } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
 import { listCohortsByMember } from "@/db/queries/cohorts";
 import { requireRouteAccess } from "@/lib/auth/current-user";
+import { getCertificateStanding, type CertificateStanding } from "@/lib/certificates/standing";
+import { learnerCertificatePath } from "@/lib/certificates/urls";
 import { getCourseProgress, type CourseProgress } from "@/lib/progress";
+import { WhatRemains } from "./what-remains";
 
 export const metadata: Metadata = { title: "Your course" };
 
-function NextStep({ progress }: { progress: CourseProgress }) {
+/**
+ * What to do next: the next open lesson; once every lesson is done, what the certificate still
+ * asks for. "Finished" is said only when the certificate's requirements are met.
+ */
+function NextStep({ progress, standing }: { progress: CourseProgress; standing: CertificateStanding }) {
   const next = progress.next;
   const total = progress.lessons.length;
-  if (!next) {
+  if (!next && standing.certificate) {
     return (
       <Card className="border-ok/40 bg-ok-soft">
         <p className="text-sm font-semibold uppercase tracking-wide text-ok">Course finished</p>
-        <h2 className="mt-1 text-2xl font-semibold tracking-tight">Every lesson is done</h2>
+        <h2 className="mt-1 text-2xl font-semibold tracking-tight">Every requirement of the certificate is met</h2>
         <p className="mt-2 text-ink-soft">You can go back to any lesson or lab to revise.</p>
+      </Card>
+    );
+  }
+  if (!next) {
+    return (
+      <Card className="border-copper/40">
+        <p className="text-sm font-semibold uppercase tracking-wide text-copper">Every lesson is done · the certificate is not earned yet</p>
+        <h2 className="mt-1 text-2xl font-semibold tracking-tight">Still to do for the certificate</h2>
+        {standing.requirements ? <WhatRemains status={standing.requirements} progress={progress} /> : null}
+        <Link href={learnerCertificatePath} className={buttonClass("secondary", "mt-5")}>
+          See every requirement
+        </Link>
       </Card>
     );
   }
@@ -48,6 +67,8 @@ function NextStep({ progress }: { progress: CourseProgress }) {
 export default async function LearnerHomePage() {
   const user = await requireRouteAccess("/learn");
   const [cohorts, progress] = await Promise.all([listCohortsByMember({ userId: user.id, role: "learner" }), getCourseProgress({ userId: user.id })]);
+  // After the progress, which stamps finished lessons: the certificate is checked on what is recorded.
+  const standing = await getCertificateStanding({ userId: user.id });
   const firstName = user.name.split(/\s+/)[0];
   const total = progress.lessons.length;
   const scores = progress.lessons.flatMap((lesson) =>
@@ -63,12 +84,13 @@ export default async function LearnerHomePage() {
       />
       <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <div className="space-y-6">
-          <NextStep progress={progress} />
+          <NextStep progress={progress} standing={standing} />
           <Card>
             <h2 className="text-lg font-semibold">Course map</h2>
             <p className="mt-1 mb-4 text-sm text-ink-soft">
               A lesson is done when its lab is passed on the workbench and each of its quick checks has been answered
-              correctly at least once.{" "}
+              correctly at least once. The certificate also asks for a minimum score in each lab and for each bench
+              exercise to be accepted by your instructor.{" "}
               {progress.course.unlockInOrder
                 ? "Lessons open in order: each one opens when the lesson before it is done."
                 : "Every lesson is open: take them in the order that suits you."}
@@ -77,7 +99,7 @@ export default async function LearnerHomePage() {
           </Card>
         </div>
         <div className="space-y-6">
-          <CertificateCard userId={user.id} />
+          <CertificateCard standing={standing} />
           <Card>
             <h2 className="text-lg font-semibold">Best lab scores</h2>
             <p className="mt-1 text-sm text-ink-soft">Out of 100, one bar per lesson&apos;s lab; ✓ marks a pass.</p>

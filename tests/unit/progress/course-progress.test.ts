@@ -7,6 +7,7 @@ import {
   type LabFact,
   type LearnerRecord,
   type LessonFact,
+  type BenchState,
 } from "@/lib/progress/course-progress";
 
 type Lesson = Course["lessons"][number];
@@ -17,8 +18,15 @@ const checkIdsOf = (lesson: Lesson) => lesson.blocks.flatMap((b) => (b.kind === 
 
 const at = (minute: number) => new Date(Date.UTC(2026, 0, 12, 18, minute));
 
-function record(parts: { labs?: [string, LabFact][]; checks?: [string, CheckFact][]; lessons?: [string, LessonFact][] } = {}): LearnerRecord {
-  return { labs: new Map(parts.labs ?? []), checks: new Map(parts.checks ?? []), lessons: new Map(parts.lessons ?? []) };
+type RecordParts = {
+  labs?: [string, LabFact][];
+  checks?: [string, CheckFact][];
+  lessons?: [string, LessonFact][];
+  bench?: [string, Exclude<BenchState, "not-started">][];
+};
+
+function record(parts: RecordParts = {}): LearnerRecord {
+  return { labs: new Map(parts.labs ?? []), checks: new Map(parts.checks ?? []), lessons: new Map(parts.lessons ?? []), bench: new Map(parts.bench ?? []) };
 }
 
 function allChecksRight(lesson: Lesson, minute = 10): [string, CheckFact][] {
@@ -27,7 +35,7 @@ function allChecksRight(lesson: Lesson, minute = 10): [string, CheckFact][] {
 
 function lessonOneDone(): LearnerRecord {
   return record({
-    labs: [[first!.lab!.slug, { attempts: 2, bestScore: 84, firstPassedAt: at(40) }]],
+    labs: [[first!.lab!.slug, { attempts: 2, bestScore: 84, bestPassingScore: 84, firstPassedAt: at(40) }]],
     checks: allChecksRight(first!),
   });
 }
@@ -57,17 +65,17 @@ describe("course progress rules", () => {
 
   it("the completion moment is the last check when the lab was passed first", () => {
     const passedEarly = lessonOneDone();
-    const labs = new Map([[first!.lab!.slug, { attempts: 1, bestScore: 90, firstPassedAt: at(1) }]]);
+    const labs = new Map([[first!.lab!.slug, { attempts: 1, bestScore: 90, bestPassingScore: 90, firstPassedAt: at(1) }]]);
     const progress = computeCourseProgress(course, { ...passedEarly, labs });
     expect(progress.lessons[0]!.completedAt).toEqual(at(10 + checkIdsOf(first!).length - 1));
   });
 
   it("a passed lab without every check right is not done, nor are right checks without a passed lab", () => {
     const [, ...allButOne] = allChecksRight(first!);
-    const labOnly = record({ labs: [[first!.lab!.slug, { attempts: 1, bestScore: 80, firstPassedAt: at(5) }]], checks: allButOne });
+    const labOnly = record({ labs: [[first!.lab!.slug, { attempts: 1, bestScore: 80, bestPassingScore: 80, firstPassedAt: at(5) }]], checks: allButOne });
     expect(computeCourseProgress(course, labOnly).lessons[0]).toMatchObject({ state: "open", completedAt: null, checks: { correct: allButOne.length } });
 
-    const failedLab = record({ labs: [[first!.lab!.slug, { attempts: 3, bestScore: 41, firstPassedAt: null }]], checks: allChecksRight(first!) });
+    const failedLab = record({ labs: [[first!.lab!.slug, { attempts: 3, bestScore: 41, bestPassingScore: null, firstPassedAt: null }]], checks: allChecksRight(first!) });
     const progress = computeCourseProgress(course, failedLab);
     expect(progress.lessons[0]).toMatchObject({ state: "open", lab: { passed: false, bestScore: 41 } });
     expect(progress.lessons[1]!.state).toBe("locked");
@@ -107,5 +115,26 @@ describe("course progress rules", () => {
     const progress = computeCourseProgress(course, record({ lessons }));
     expect(progress.next).toBeNull();
     expect(progress.lessonsDone).toBe(course.lessons.length);
+  });
+
+  it("lists each lesson's bench exercise with the state of the learner's work, under the lesson's lock", () => {
+    const withBench = course.lessons.filter((l) => l.bench);
+    expect(withBench.length).toBeGreaterThan(0);
+    const [firstBench, secondBench] = withBench;
+    const progress = computeCourseProgress(course, record({ bench: [[firstBench!.bench!.slug, "returned"]] }));
+    const view = progress.lessons.find((l) => l.slug === firstBench!.slug)!;
+    expect(view).toMatchObject({ state: "locked", bench: { slug: firstBench!.bench!.slug, state: "returned" } });
+    expect(view.bench!.requiredForCertificate).toBe(course.completion.benchExercises.includes(firstBench!.bench!.slug));
+    if (secondBench) expect(progress.lessons.find((l) => l.slug === secondBench.slug)!.bench!.state).toBe("not-started");
+    expect(progress.lessons.filter((l) => !course.lessons.find((c) => c.slug === l.slug)!.bench).every((l) => l.bench === null)).toBe(true);
+  });
+
+  it("tells a pass that meets the certificate's minimum from one that does not", () => {
+    const lab = first!.lab!.slug;
+    const minimum = course.completion.labs.find((entry) => entry.lab === lab)!.minScore;
+    const below = computeCourseProgress(course, record({ labs: [[lab, { attempts: 2, bestScore: minimum + 5, bestPassingScore: minimum - 1, firstPassedAt: at(3) }]] }));
+    expect(below.lessons[0]!.lab).toMatchObject({ passed: true, certificateMinScore: minimum, meetsCertificate: false });
+    const at_ = computeCourseProgress(course, record({ labs: [[lab, { attempts: 1, bestScore: minimum, bestPassingScore: minimum, firstPassedAt: at(3) }]] }));
+    expect(at_.lessons[0]!.lab).toMatchObject({ meetsCertificate: true });
   });
 });

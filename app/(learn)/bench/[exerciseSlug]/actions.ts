@@ -15,6 +15,7 @@ const draftProblems = {
   "not-found": "This bench exercise does not exist.",
   "no-cohort": "You are not in a cohort of this course yet, so there is no instructor to review your work. Ask your school's admin to add you.",
   locked: "This work is with your instructor now, so it cannot change.",
+  "lesson-locked": "This bench exercise opens with its lesson. Finish the lessons before it first.",
 } as const;
 
 // Bound arguments come from the browser like form fields do: anyone may send anything in their place.

@@ -17,8 +17,10 @@ import type { BenchSubmission } from "@/db/schema";
 import { requireRouteAccess } from "@/lib/auth/current-user";
 import { findBenchExercise, rubricMaximum } from "@/lib/bench/exercises";
 import { benchPhotoLimits } from "@/lib/bench/photo-limits";
+import { findLessonProgressView } from "@/lib/progress";
 import { benchFormFields, describeStatedValues, entriesFromStored, noteField } from "@/lib/bench/submission-form";
 import { BenchForm } from "./bench-form";
+import { LockedBench } from "./locked-bench";
 import { PhotoThumbnails } from "./photo-thumbnails";
 import { PhotoUploader } from "./photo-uploader";
 import { ReviewFeedback } from "./review-feedback";
@@ -44,6 +46,15 @@ export default async function BenchExercisePage({ params }: Params) {
   const entry = findBenchExercise(exerciseSlug);
   if (!entry) notFound();
   const { exercise, lesson } = entry;
+
+  const lessonProgress = await findLessonProgressView({ userId: learner.id, lessonSlug: lesson.slug });
+  if (lessonProgress?.state === "locked") {
+    return (
+      <AppFrame user={learner}>
+        <LockedBench lesson={lessonProgress} exerciseTitle={exercise.title} />
+      </AppFrame>
+    );
+  }
 
   const submission = await findBenchSubmissionByExercise({ learnerId: learner.id, exerciseSlug: exercise.slug });
   const [photos, reviews, cohortId] = await Promise.all([
