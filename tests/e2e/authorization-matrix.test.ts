@@ -11,15 +11,16 @@ import { homePathFor } from "@/lib/auth/permissions";
 import { protectedRoutes } from "@/lib/auth/route-access";
 import { uniqueLoopbackAddress } from "../support/loopback-client";
 import { actionForms, planActionCall } from "./support/action-forms";
-import { benchExercise, cookieOf, gradedLab, personas, setUpAccessWorld, type AccessWorld, type Persona } from "./support/access-world";
+import { benchExercise, cookieOf, gradedLab, personas, reviewedExercise, setUpAccessWorld, type AccessWorld, type Persona } from "./support/access-world";
 import { builtActionId, discoverPages, discoverRouteHandlers, discoverServerActions, readBuiltActions } from "./support/app-surface";
 import { baseUrl } from "./support/browser";
 import { changedTables, readDatabaseState } from "./support/database-state";
 import { callAction, isRefusalState, type ActionReply } from "./support/server-actions";
 
 // Pages: 200, "sign-in" (307 to /sign-in, with the way back for protected pages), "home" (307 to
-// the persona's own start page), 403 (the app's forbidden page) or 404.
-type PageOutcome = 200 | 403 | 404 | "sign-in" | "home";
+// the persona's own start page), 403 (the app's forbidden page), 404, or "locked" (200 with the page
+// that says which lesson to finish first, and nothing of the locked content).
+type PageOutcome = 200 | 403 | 404 | "sign-in" | "home" | "locked";
 // Server actions: "sign-in" (sent to sign in), 403, "refused" (the action's own refusal, such as
 // "not part of your school") or "accepted" (its success answer). Refusals write nothing.
 type ActionOutcome = "sign-in" | 403 | "refused" | "accepted";
@@ -48,7 +49,11 @@ const pageTable: Record<string, PageCase[]> = {
   "/learn": [{ path: () => "/learn", expect: learnerPage }],
   "/lessons/[lessonSlug]": [{ path: (w) => `/lessons/${w.lessonSlug}`, expect: learnerPage }],
   "/labs/[labSlug]": [{ path: () => `/labs/${gradedLab.slug}`, expect: learnerPage }],
-  "/bench/[exerciseSlug]": [{ path: () => `/bench/${benchExercise}`, expect: learnerPage }],
+  // Bench exercises open with their lessons: learner B is still at lesson 6, before both of them.
+  "/bench/[exerciseSlug]": [
+    { path: () => `/bench/${benchExercise}`, expect: ["sign-in", 200, "locked", 403, 403, 403, 403] },
+    { path: () => `/bench/${reviewedExercise}`, expect: ["sign-in", 200, "locked", 403, 403, 403, 403] },
+  ],
   "/certificate": [{ path: () => "/certificate", expect: learnerPage }],
   "/cohorts": [{ path: () => "/cohorts", expect: instructorPage }],
   "/cohorts/[cohortId]": [{ path: (w) => `/cohorts/${w.cohortA}`, expect: cohortAPage }],
@@ -70,9 +75,14 @@ const pageTable: Record<string, PageCase[]> = {
 };
 
 type HandlerCase = { path: (world: AccessWorld) => string; body?: (world: AccessWorld) => unknown; expect: Row<number> };
+const uploadPath = () => "/api/uploadthing?actionType=upload&slug=benchPhoto";
+const uploadBody = (submissionId: string) => ({
+  files: [{ name: "scope.png", size: 1000, type: "image/png", lastModified: Date.now() }],
+  input: { submissionId },
+});
 
 //                                                             anonymous learnerA learnerB instructorA instructorB admin otherAdmin
-const handlerTable: Record<string, HandlerCase> = {
+const handlerTable: Record<string, HandlerCase | HandlerCase[]> = {
   "GET /api/health": { path: () => "/api/health", expect: [200, 200, 200, 200, 200, 200, 200] },
   "GET /api/bench-photos/[photoId]": { path: (w) => `/api/bench-photos/${w.photoId}`, expect: [401, 200, 404, 200, 404, 404, 404] },
   "GET /api/certificates/[certificateId]/pdf": { path: (w) => `/api/certificates/${w.certificateId}/pdf`, expect: [401, 200, 404, 404, 404, 200, 404] },
@@ -92,12 +102,12 @@ const handlerTable: Record<string, HandlerCase> = {
   },
   "GET /api/labs/[labSlug]/attempts/[attemptId]": { path: (w) => `/api/labs/${gradedLab.slug}/attempts/${w.attemptId}`, expect: [401, 200, 404, 403, 403, 403, 403] },
   "GET /api/uploadthing": { path: () => "/api/uploadthing", expect: [200, 200, 200, 200, 200, 200, 200] },
-  // The browser's request to upload a photo to learner A's bench draft.
-  "POST /api/uploadthing": {
-    path: () => "/api/uploadthing?actionType=upload&slug=benchPhoto",
-    body: (w) => ({ files: [{ name: "scope.png", size: 1000, type: "image/png", lastModified: Date.now() }], input: { submissionId: w.draftSubmissionId } }),
-    expect: [401, 200, 404, 403, 403, 403, 403],
-  },
+  "POST /api/uploadthing": [
+    // The browser's request to upload a photo to learner A's bench draft.
+    { path: uploadPath, body: (w) => uploadBody(w.draftSubmissionId), expect: [401, 200, 404, 403, 403, 403, 403] },
+    // To learner B's own draft of an exercise whose lesson is locked to them: refused like a new draft.
+    { path: uploadPath, body: (w) => uploadBody(w.lockedDraftSubmissionId), expect: [401, 404, 403, 403, 403, 403, 403] },
+  ],
 };
 
 //                                                                                         anonymous learnerA  learnerB  instructorA instructorB admin    otherAdmin
@@ -105,10 +115,13 @@ const learnerAction: Row<ActionOutcome> = ["sign-in", "accepted", "accepted", 40
 const schoolAdminAction: Row<ActionOutcome> = ["sign-in", 403, 403, 403, 403, "accepted", "refused"];
 const openToAll: Row<ActionOutcome> = ["accepted", "accepted", "accepted", "accepted", "accepted", "accepted", "accepted"];
 
+// Starting and handing in bench work: the exercise's lesson is locked to learner B, so B is refused.
+const openBenchOnlyAction: Row<ActionOutcome> = ["sign-in", "accepted", "refused", 403, 403, 403, 403];
+
 const actionTable: Record<string, Row<ActionOutcome>> = {
   "app/(learn)/lessons/[lessonSlug]/actions.ts#answerQuickCheck": learnerAction,
-  "app/(learn)/bench/[exerciseSlug]/actions.ts#startBenchDraft": learnerAction,
-  "app/(learn)/bench/[exerciseSlug]/actions.ts#submitBenchWork": learnerAction,
+  "app/(learn)/bench/[exerciseSlug]/actions.ts#startBenchDraft": openBenchOnlyAction,
+  "app/(learn)/bench/[exerciseSlug]/actions.ts#submitBenchWork": openBenchOnlyAction,
   // Learner A's photo: learner B is told it is already gone.
   "app/(learn)/bench/[exerciseSlug]/actions.ts#deleteBenchPhoto": ["sign-in", "accepted", "refused", 403, 403, 403, 403],
   // Work of a learner of cohort A: only cohort A's instructor reviews it.
@@ -152,6 +165,7 @@ async function pageOutcome(persona: Persona, path: string, protectedPage: boolea
     return `307 to ${location.pathname}${location.search}`;
   }
   if (response.status === 403 && !body.includes("This page is not open to your account")) return "403 without the forbidden page";
+  if (response.status === 200 && /Finish lesson \d+ first/.test(body)) return "locked";
   return response.status as PageOutcome;
 }
 
@@ -202,20 +216,22 @@ describe("the authorization matrix", () => {
   it("answers every route handler as the table says, for every persona", async () => {
     const seen: string[] = [];
     const expected: string[] = [];
-    for (const [key, { path, body, expect: row }] of Object.entries(handlerTable)) {
+    for (const [key, entry] of Object.entries(handlerTable)) {
       const method = key.split(" ")[0]!;
-      for (const [index, persona] of personas.entries()) {
-        const cookie = cookieOf(world, persona);
-        const payload = body?.(world);
-        const response = await fetch(`${baseUrl}${path(world)}`, {
-          method,
-          redirect: "manual",
-          headers: { ...(cookie ? { cookie } : {}), ...(payload ? { "content-type": "application/json" } : {}) },
-          body: payload ? JSON.stringify(payload) : undefined,
-        });
-        await response.arrayBuffer();
-        seen.push(`${persona} ${key} → ${response.status}`);
-        expected.push(`${persona} ${key} → ${row[index]}`);
+      for (const { path, body, expect: row } of Array.isArray(entry) ? entry : [entry]) {
+        for (const [index, persona] of personas.entries()) {
+          const cookie = cookieOf(world, persona);
+          const payload = body?.(world);
+          const response = await fetch(`${baseUrl}${path(world)}`, {
+            method,
+            redirect: "manual",
+            headers: { ...(cookie ? { cookie } : {}), ...(payload ? { "content-type": "application/json" } : {}) },
+            body: payload ? JSON.stringify(payload) : undefined,
+          });
+          await response.arrayBuffer();
+          seen.push(`${persona} ${key} → ${response.status}`);
+          expected.push(`${persona} ${key} → ${row[index]}`);
+        }
       }
     }
     expect(seen).toEqual(expected);

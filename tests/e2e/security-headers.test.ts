@@ -11,6 +11,7 @@ import { PNG } from "pngjs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { cohortMemberships } from "@/db/schema";
+import { openBenchExercises } from "../integration/support/bench-people";
 import { findDemoCohortId } from "../integration/support/people";
 import { baseUrl, launchBrowser, openPage, signInAs, signInThroughForm } from "./support/browser";
 import { createLearnerAtLab } from "./support/learner-at-lab";
@@ -29,6 +30,8 @@ beforeAll(async () => {
   browser = await launchBrowser();
   const person = await createLearnerAtLab({ labSlug: LAB, password, label: "security-headers" });
   await db.insert(cohortMemberships).values({ cohortId: await findDemoCohortId(), userId: person.id, role: "learner" });
+  // The page also uploads a bench photo, so the bench exercise's lesson is open too.
+  await openBenchExercises(person.id);
   learner = person;
 });
 

@@ -4,11 +4,13 @@
  * that reached storage, never by the name or declared type.
  */
 import { createHash } from "node:crypto";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET as getBenchPhoto } from "@/app/api/bench-photos/[photoId]/route";
 import { db } from "@/db/client";
-import { benchPhotos, benchSubmissions } from "@/db/schema";
+import { benchPhotos, benchSubmissions, lessonProgress } from "@/db/schema";
+import { getCourse } from "@/lessons";
+import { findBenchExercise } from "@/lib/bench/exercises";
 import { openBenchDraft } from "@/lib/bench/submissions";
 import { concatBytes, gifScript, htmlPayload, svgWithScript, zipArchive } from "../support/uploads/hidden-payloads";
 import { noisyPhoto } from "../support/uploads/noisy-photo";
@@ -121,6 +123,18 @@ describe("a bench photo upload", () => {
     await db.update(benchSubmissions).set({ status: "submitted" }).where(eq(benchSubmissions.id, submissionId));
     await expect(attempt(learner.cookie)).rejects.toThrow(/with your instructor/);
     expect(await photosOf(submissionId)).toEqual([]);
+  });
+
+  it("is refused, like a new draft, while the exercise's lesson is still locked to the learner", async () => {
+    const { learner, submissionId } = await learnerWithDraft();
+    // The learner's record taken back to before the lesson that opens the exercise.
+    const lessonBefore = findBenchExercise("build-a-run")!.lesson.number - 1;
+    const slugBefore = getCourse().lessons[lessonBefore - 1]!.slug;
+    await db.delete(lessonProgress).where(and(eq(lessonProgress.userId, learner.user.id), eq(lessonProgress.lessonSlug, slugBefore)));
+    await expect(service.upload({ files: [pngFile()], submissionId, cookie: learner.cookie })).rejects.toThrow(/opens with its lesson/);
+    expect(await photosOf(submissionId)).toEqual([]);
+    await expect(openBenchDraft({ learner: learner.user, exerciseSlug: "build-a-run" })).resolves.toEqual({ status: "lesson-locked" });
+    await expect(openBenchDraft({ learner: learner.user, exerciseSlug: "document-a-run" })).resolves.toEqual({ status: "lesson-locked" });
   });
 });
 

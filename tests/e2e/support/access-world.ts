@@ -24,6 +24,7 @@ import { createSession } from "@/lib/auth/session-store";
 import { generateToken, hashToken } from "@/lib/auth/tokens";
 import { generateCertificateCode } from "@/lib/certificates/code";
 import type { UploadRouter } from "@/lib/uploads/upload-router";
+import { openBenchExercises } from "../../integration/support/bench-people";
 import { noisyPhoto } from "../../support/uploads/noisy-photo";
 import { installXhrOverFetch } from "../../support/uploads/xhr-over-fetch";
 import { baseUrl } from "./browser";
@@ -38,6 +39,10 @@ export const personas = ["anonymous", "learnerA", "learnerB", "instructorA", "in
 export type Persona = (typeof personas)[number];
 export type Member = Exclude<Persona, "anonymous">;
 
+/**
+ * Learner A has done the lessons before it, so it is open to them; learner B is at the graded lab's
+ * lesson, before it, so it is locked to them (bench exercises follow their lesson's lock).
+ */
 export const benchExercise = "build-a-run";
 /** The exercise whose handed-in work (with one real photo) sits in instructor A's queue. */
 export const reviewedExercise = "document-a-run";
@@ -62,6 +67,8 @@ export type AccessWorld = {
   reviewSubmissionId: string;
   /** Learner A's editable bench work, photos may still be added to it. */
   draftSubmissionId: string;
+  /** Learner B's draft of the same exercise, left from before its lesson was locked to them (made in the database). */
+  lockedDraftSubmissionId: string;
   photoId: string;
   certificateId: string;
   certificateCode: string;
@@ -254,7 +261,7 @@ async function buildAccessWorld(): Promise<AccessWorld> {
     return submissionId;
   };
 
-  await openGradedLab(people.learnerA.id);
+  await openBenchExercises(people.learnerA.id);
   await openGradedLab(people.learnerB.id);
   const lesson = getCourse().lessons[0]!;
   const check = lesson.blocks.find((block) => block.kind === "check");
@@ -275,6 +282,7 @@ async function buildAccessWorld(): Promise<AccessWorld> {
     attemptId: await submitAttempt(people.learnerA),
     reviewSubmissionId,
     draftSubmissionId: (await prepareDraft(people.learnerA, benchExercise)).submissionId,
+    lockedDraftSubmissionId: (await prepareDraft(people.learnerB, benchExercise)).submissionId,
     photoId,
     certificateId: certificate.id,
     certificateCode: certificate.code,

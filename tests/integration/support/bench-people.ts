@@ -1,6 +1,8 @@
 import { randomUUID } from "node:crypto";
 import { db } from "@/db/client";
+import { markLessonsCompleted } from "@/db/queries/progress";
 import { cohortMemberships, cohorts, schools, users, type Role } from "@/db/schema";
+import { getCourse } from "@/lessons";
 import { hashPassword } from "@/lib/auth/password";
 import { createSession, validateSessionToken, type SessionUser } from "@/lib/auth/session-store";
 import { findDemoSchoolId, uniqueEmail } from "./people";
@@ -9,6 +11,17 @@ import { findDemoSchoolId, uniqueEmail } from "./people";
 // learners and an admin, so they never depend on or change what the demo school shows.
 
 export type SignedIn = { user: SessionUser; cookie: string };
+
+/**
+ * Bench exercises open with their lessons: the lessons before the last one holding an exercise
+ * are recorded as done, so every bench exercise is open to the learner.
+ */
+export async function openBenchExercises(userId: string): Promise<void> {
+  const lessons = getCourse().lessons;
+  const last = Math.max(...lessons.flatMap((lesson) => (lesson.bench ? [lesson.number] : [])));
+  const earlier = lessons.filter((lesson) => lesson.number < last);
+  await markLessonsCompleted({ userId, completions: earlier.map((lesson) => ({ lessonSlug: lesson.slug, completedAt: new Date() })) });
+}
 
 const password = "bench test password";
 let passwordHash: Promise<string> | undefined;
@@ -44,10 +57,11 @@ export async function createBenchSchool() {
   const homeCohortId = await createCohort("home");
   const otherCohortId = await createCohort("other");
 
-  /** A signed-in member of the school; in `cohortId` when given. */
+  /** A signed-in member of the school; in `cohortId` when given. A learner has the lessons up to the bench exercises done. */
   const createMember = async (cohortId: string | null, role: Role, label: string): Promise<SignedIn> => {
     const user = await insertUser(schoolId, role, label, `Test ${role}`);
     if (cohortId && role !== "admin") await db.insert(cohortMemberships).values({ cohortId, userId: user.id, role });
+    if (role === "learner") await openBenchExercises(user.id);
     return signIn(user.id);
   };
 
@@ -62,7 +76,7 @@ export async function createBenchSchool() {
   };
 }
 
-/** A learner of the demo school with a name no other test uses, who signs in with `password`. */
+/** A learner of the demo school with a name no other test uses, who signs in with `password`, with every bench exercise open. */
 export async function createNamedLearner(params: { cohortId: string; name: string; password: string }) {
   const [user] = await db
     .insert(users)
@@ -75,5 +89,6 @@ export async function createNamedLearner(params: { cohortId: string; name: strin
     })
     .returning();
   await db.insert(cohortMemberships).values({ cohortId: params.cohortId, userId: user!.id, role: "learner" });
+  await openBenchExercises(user!.id);
   return user!;
 }
