@@ -12,6 +12,12 @@ export type CertificateScoreSummary = {
   benchExercises: { slug: string; title: string; points: number; maxPoints: number }[];
 };
 
+/** What the course certifies, as the certificate states it: derived from the course when it is issued. */
+export type CertificateCertification = {
+  competences: string[];
+  studyHours: number;
+};
+
 /**
  * One per learner and course. Names and titles are copied in when it is issued, so the document
  * and its public verification keep saying what was certified even if a name or a title changes later.
@@ -37,12 +43,18 @@ export const certificates = pgTable(
     schoolName: text("school_name").notNull(),
     cohortName: text("cohort_name"),
     scoreSummary: jsonb("score_summary").$type<CertificateScoreSummary>().notNull(),
+    // Null on certificates issued before certificates stated them (see lib/certificates/certification.ts).
+    certification: jsonb("certification").$type<CertificateCertification>(),
+    // Who signed for the school when it was issued; null when the school had named nobody then.
+    signatoryName: text("signatory_name"),
+    signatoryRole: text("signatory_role"),
     issuedAt: timestamp("issued_at", { withTimezone: true }).notNull().defaultNow(),
     revokedAt: timestamp("revoked_at", { withTimezone: true }),
     revokeReason: text("revoke_reason"),
     revokedBy: uuid("revoked_by").references(() => users.id, { onDelete: "set null" }),
   },
   (table) => [
+    check("certificates_signatory_complete", sql`(${table.signatoryName} is null) = (${table.signatoryRole} is null)`),
     unique("certificates_user_course_unique").on(table.userId, table.courseSlug),
     index("certificates_school_issued_idx").on(table.schoolId, table.issuedAt),
     check("certificates_revocation_complete", sql`(${table.revokedAt} is null) = (${table.revokeReason} is null)`),
