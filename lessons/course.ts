@@ -55,4 +55,26 @@ export const course = {
     ],
     benchExercises: ["build-a-run", "document-a-run"],
   },
+  competences: [
+    {
+      statement: "Works out the timing budget of an addressable-pixel data stream and the refresh rate a chain of pixels allows.",
+      shownBy: ["timing-budget"],
+    },
+    {
+      statement: "Checks that the first pixel reads a driver's levels and edges with margin, and when a level shifter is needed.",
+      shownBy: ["thresholds", "rc-window"],
+    },
+    {
+      statement: "Predicts from a cable's impedance and delay when a data run acts as a transmission line, and what its reflections do.",
+      shownBy: ["cable-spec", "overshoot-limit"],
+    },
+    {
+      statement: "Chooses the series resistor for a driver and cable, and specifies a complete data run that works.",
+      shownBy: ["lone-lead-termination", "beside-ground-termination", "capstone-installation"],
+    },
+    {
+      statement: "Builds and measures a data run on the bench, probing the first pixel correctly, and documents the result.",
+      shownBy: ["build-a-run", "document-a-run"],
+    },
+  ],
 } satisfies CourseInput;

@@ -297,6 +297,8 @@ export const benchExerciseSchema = z
   .strictObject({
     slug,
     title: z.string().trim().min(1),
+    /** Study time the exercise asks for at the bench, counted in the certificate's hours of study. */
+    minutes: z.number().int().positive().max(480),
     brief: markdown,
     asks: z.array(benchAskSchema).min(1),
     photo: z.strictObject({ required: z.boolean(), mustShow: z.array(z.string().trim().min(1)).min(1) }),
@@ -347,6 +349,14 @@ export const courseSchema = z
       labs: z.array(z.strictObject({ lab: slug, minScore: z.number().min(0).max(100) })),
       benchExercises: z.array(slug),
     }),
+    /**
+     * What a certificate of the course says its holder can do, each shown by labs and bench
+     * exercises the completion rule requires; every requirement backs at least one competence.
+     */
+    competences: z
+      .array(z.strictObject({ statement: z.string().trim().min(1).max(200), shownBy: z.array(slug).min(1) }))
+      .min(1)
+      .max(6),
   })
   .superRefine((course, ctx) => {
     course.lessons.forEach((lesson, i) => {
@@ -360,6 +370,19 @@ export const courseSchema = z
     course.completion.benchExercises.forEach((slugValue, i) => {
       if (!benches.has(slugValue)) ctx.addIssue({ code: "custom", path: ["completion", "benchExercises", i], message: `no bench exercise "${slugValue}"` });
     });
+    const required = new Set([...course.completion.labs.map((entry) => entry.lab), ...course.completion.benchExercises]);
+    const shown = new Set<string>();
+    course.competences.forEach((competence, i) =>
+      competence.shownBy.forEach((slugValue, j) => {
+        shown.add(slugValue);
+        if (!required.has(slugValue)) {
+          ctx.addIssue({ code: "custom", path: ["competences", i, "shownBy", j], message: `"${slugValue}" is not a lab or bench exercise the certificate requires` });
+        }
+      }),
+    );
+    for (const slugValue of required) {
+      if (!shown.has(slugValue)) ctx.addIssue({ code: "custom", path: ["competences"], message: `no competence is shown by "${slugValue}"` });
+    }
     // Lessons, labs and bench exercises are stored and linked by slug, each kind in its own table.
     const slugsOf = (part: "lab" | "bench" | null) =>
       course.lessons.flatMap((lesson, i) => {

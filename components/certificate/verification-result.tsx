@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { buttonClass } from "@/components/ui/button-class";
+import { formatStudyHours } from "@/lib/certificates/certification";
 import { formatCertificateCode } from "@/lib/certificates/code";
 import { formatCertificateDate } from "@/lib/certificates/dates";
 import type { Verification } from "@/lib/certificates/verification";
@@ -43,10 +44,32 @@ export function VerificationResult({ result }: { result: Exclude<Verification, {
             <Fact label="Course">{result.courseTitle}</Fact>
             <Fact label="School">{result.schoolName}</Fact>
             <Fact label="Issued">{formatCertificateDate(result.issuedAt)}</Fact>
+            <Fact label="Study">{formatStudyHours(result.studyHours)}</Fact>
+            <Fact label="Signed for the school">
+              {result.signatory ? (
+                <>
+                  {result.signatory.name}
+                  <span className="block text-sm font-normal text-ink-soft">{result.signatory.role}</span>
+                </>
+              ) : (
+                <span className="font-normal text-ink-soft">No signatory was named when it was issued.</span>
+              )}
+            </Fact>
             <Fact label="Code">
               <span className="font-mono">{formatCertificateCode(result.code)}</span>
             </Fact>
           </dl>
+          <section aria-labelledby="competences-title" className="mt-6 rounded-card border border-line bg-surface px-5 py-4">
+            <h2 id="competences-title" className="font-semibold text-ink">
+              What the holder can do
+            </h2>
+            <p className="mt-1 text-sm text-ink-soft">What the course certifies, shown in its labs on the workbench and its bench exercises.</p>
+            <ul className="mt-3 list-disc space-y-1.5 pl-5 text-ink marker:text-copper">
+              {result.competences.map((competence) => (
+                <li key={competence}>{competence}</li>
+              ))}
+            </ul>
+          </section>
         </>
       ) : result.status === "revoked" ? (
         <>

@@ -10,12 +10,23 @@ import {
   schools,
   users,
   type Certificate,
+  type CertificateCertification,
   type CertificateScoreSummary,
   type Role,
 } from "../schema";
 
 export type LearnerCertificateFacts = {
-  learner: { id: string; name: string; email: string; role: Role; active: boolean; schoolId: string; schoolName: string };
+  learner: {
+    id: string;
+    name: string;
+    email: string;
+    role: Role;
+    active: boolean;
+    schoolId: string;
+    schoolName: string;
+    schoolSignatoryName: string | null;
+    schoolSignatoryRole: string | null;
+  };
   cohort: { id: string; name: string } | null;
   bestPassingScores: Map<string, number>;
   acceptedBenchWork: Map<string, { points: number; maxPoints: number }>;
@@ -31,6 +42,8 @@ async function findLearnerFacts(executor: Executor, params: { userId: string; co
       active: users.active,
       schoolId: users.schoolId,
       schoolName: schools.name,
+      schoolSignatoryName: schools.signatoryName,
+      schoolSignatoryRole: schools.signatoryRole,
     })
     .from(users)
     .innerJoin(schools, eq(schools.id, users.schoolId))
@@ -76,6 +89,9 @@ export type CertificateContent = {
   schoolName: string;
   cohortName: string | null;
   scoreSummary: CertificateScoreSummary;
+  certification: CertificateCertification;
+  signatoryName: string | null;
+  signatoryRole: string | null;
 };
 
 export type IssueResult =

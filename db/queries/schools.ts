@@ -24,3 +24,11 @@ export async function findAddressesKnownToSchool(params: { schoolId: string; ema
     );
   return new Set(rows.map((row) => row.email));
 }
+
+/** Names who signs the school's certificates from now on; certificates already issued keep theirs. */
+export async function updateSchoolSignatory(params: { schoolId: string; signatoryName: string; signatoryRole: string }): Promise<void> {
+  await db
+    .update(schools)
+    .set({ signatoryName: params.signatoryName, signatoryRole: params.signatoryRole })
+    .where(eq(schools.id, params.schoolId));
+}

@@ -3,6 +3,7 @@ import type { BenchExerciseInput } from "../schema";
 export const bench = {
   slug: "build-a-run",
   title: "Build and measure a run of your design",
+  minutes: 120,
   brief: `
 Build one data run of your own design on the bench: a controller output (or a signal source set to the pixel protocol), a series resistor, at least 5 m of cable, and a strip whose first pixel you can probe. Work through the seven steps of the lesson on paper first and keep your working.
 

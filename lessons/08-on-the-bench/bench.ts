@@ -3,6 +3,7 @@ import type { BenchExerciseInput } from "../schema";
 export const bench = {
   slug: "document-a-run",
   title: "Document a run with a scope photo",
+  minutes: 90,
   brief: `
 Measure and document one real data run, on the bench or on an installation you are allowed to work on, at its first pixel. Use a 10:1 probe compensated on the scope's calibrator, with its spring ground on the pixel's ground pad.
 

@@ -10,12 +10,13 @@ export type Permission =
   | "learners:manage"
   | "bench:submit"
   | "bench:review"
-  | "certificates:revoke";
+  | "certificates:revoke"
+  | "certificates:sign";
 
 export const rolePermissions: Record<Role, readonly Permission[]> = {
   learner: ["bench:submit"],
   instructor: ["bench:review"],
-  admin: ["invitations:create", "cohorts:manage", "learners:manage", "certificates:revoke"],
+  admin: ["invitations:create", "cohorts:manage", "learners:manage", "certificates:revoke", "certificates:sign"],
 };
 
 export function hasPermission(role: Role, permission: Permission): boolean {

@@ -6,8 +6,11 @@ import type { SessionUser } from "@/lib/auth/session-store";
 import { readAppEnv } from "@/lib/env";
 import { AppError } from "@/lib/http/errors";
 import { errorResponse } from "@/lib/http/respond";
+import { getCourse } from "@/lessons";
+import { certificationOf } from "./certification";
 import { formatCertificateCode } from "./code";
 import { renderCertificatePdf } from "./pdf/render-certificate";
+import { signatoryOf } from "./signatory";
 import { verificationPath, verificationUrl } from "./urls";
 
 /** The learner it was issued to, and the admins of the school that issued it. */
@@ -30,7 +33,10 @@ export async function openCertificatePdf(params: { certificateId: string; viewer
     if (certificate.revokedAt) {
       return new Response(null, { status: 303, headers: { location: verificationPath(certificate.code), "cache-control": "no-store" } });
     }
-    const pdf = await renderCertificatePdf(certificate, verificationUrl(readAppEnv().APP_URL, certificate.code));
+    const pdf = await renderCertificatePdf(
+      { ...certificate, certification: certificationOf(certificate, getCourse()), signatory: signatoryOf(certificate) },
+      verificationUrl(readAppEnv().APP_URL, certificate.code),
+    );
     return new Response(Buffer.from(pdf), {
       headers: {
         "content-type": "application/pdf",

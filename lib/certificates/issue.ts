@@ -3,6 +3,7 @@ import { issueCertificateOnce, type IssueResult } from "@/db/queries/certificate
 import { getCourse } from "@/lessons";
 import { readAppEnv } from "@/lib/env";
 import { sendCertificateReadyEmail } from "@/lib/mail/certificate-ready";
+import { courseCertification } from "./certification";
 import { generateCertificateCode } from "./code";
 import { evaluateCompletion } from "./completion";
 import { learnerCertificatePath, verificationUrl } from "./urls";
@@ -28,6 +29,10 @@ export async function issueCertificateIfComplete(params: { userId: string }): Pr
         schoolName: facts.learner.schoolName,
         cohortName: facts.cohort?.name ?? null,
         scoreSummary: status.summary,
+        // Frozen into the certificate: what it certifies and who signed for the school on the day.
+        certification: courseCertification(course),
+        signatoryName: facts.learner.schoolSignatoryName,
+        signatoryRole: facts.learner.schoolSignatoryRole,
       };
     },
   });

@@ -23,6 +23,9 @@ export async function answerVerificationRequest(params: { request: Request; code
           courseTitle: result.courseTitle,
           schoolName: result.schoolName,
           issuedAt: result.issuedAt.toISOString(),
+          competences: result.competences,
+          studyHours: result.studyHours,
+          signatory: result.signatory,
         },
         { headers },
       );

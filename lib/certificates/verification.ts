@@ -1,11 +1,24 @@
 import "server-only";
 import { findCertificateByCode } from "@/db/queries/certificates";
+import { getCourse } from "@/lessons";
 import { spendRateLimits, type LimitDecision } from "@/lib/rate-limit/rate-limiter";
+import { certificationOf } from "./certification";
 import { parseCertificateCode } from "./code";
+import { signatoryOf, type Signatory } from "./signatory";
 
 /** What the public page may say: the certificate's own words, nothing else about the learner. */
 export type Verification =
-  | { status: "valid"; code: string; learnerName: string; courseTitle: string; schoolName: string; issuedAt: Date }
+  | {
+      status: "valid";
+      code: string;
+      learnerName: string;
+      courseTitle: string;
+      schoolName: string;
+      issuedAt: Date;
+      competences: string[];
+      studyHours: number;
+      signatory: Signatory | null;
+    }
   | { status: "revoked"; code: string; courseTitle: string; schoolName: string; revokedAt: Date }
   | { status: "not-found" }
   | { status: "rate-limited"; retryAfterSeconds: number };
@@ -55,5 +68,7 @@ async function lookUpCertificate(code: string): Promise<Exclude<Verification, { 
     courseTitle: certificate.courseTitle,
     schoolName: certificate.schoolName,
     issuedAt: certificate.issuedAt,
+    ...certificationOf(certificate, getCourse()),
+    signatory: signatoryOf(certificate),
   };
 }

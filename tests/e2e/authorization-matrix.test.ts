@@ -133,6 +133,8 @@ const actionTable: Record<string, Row<ActionOutcome>> = {
   "app/(auth)/invitations/[token]/actions.ts#acceptInvitationAction": openToAll,
   // Fernhallow's certificates, cohorts, learners and invitations: the other school's admin is refused.
   "app/(admin)/certificates/actions.ts#revokeCertificateAction": schoolAdminAction,
+  // Each admin names the signatory of their own school.
+  "app/(admin)/certificates/actions.ts#saveSignatoryAction": ["sign-in", 403, 403, 403, 403, "accepted", "accepted"],
   "app/(admin)/admin/actions.ts#invitePerson": schoolAdminAction,
   "app/(admin)/admin/cohorts/actions.ts#saveCohortAction": schoolAdminAction,
   "app/(admin)/admin/cohorts/[cohortId]/actions.ts#enrolLearnerAction": schoolAdminAction,

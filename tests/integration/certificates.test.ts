@@ -13,9 +13,11 @@ import { db } from "@/db/client";
 import { certificates, rateLimits } from "@/db/schema";
 import { getCourse } from "@/lessons";
 import { createSession } from "@/lib/auth/session-store";
+import { courseCertification } from "@/lib/certificates/certification";
 import { encodeCertificateCode, formatCertificateCode } from "@/lib/certificates/code";
 import { issueCertificateIfComplete } from "@/lib/certificates/issue";
 import { revokeCertificate } from "@/lib/certificates/revoke";
+import { setSchoolSignatory } from "@/lib/certificates/signatory-settings";
 import { verifyCertificate } from "@/lib/certificates/verification";
 import { readAppEnv } from "@/lib/env";
 import { findLinks } from "@/lib/mail/sink";
@@ -152,6 +154,49 @@ describe("issuing", () => {
   });
 });
 
+describe("the school's signatory", () => {
+  it("is set by the school's admin only, validated, and printed on certificates issued after it; earlier ones keep theirs", async () => {
+    const school = await createSchool();
+    const schoolCohort = await createCertificateCohort({ schoolId: school.id });
+    const schoolInstructor = await createAccount({ role: "instructor", name: "Uma Sallow", cohortId: schoolCohort.id, schoolId: school.id });
+    const admin = await sessionOf((await createAccount({ role: "admin", name: "Rhea Colt", schoolId: school.id })).id);
+    const graduateHere = async (name: string) => {
+      const learner = await createAccount({ role: "learner", name, cohortId: schoolCohort.id, schoolId: school.id });
+      await recordResults({ learnerId: learner.id, cohortId: schoolCohort.id, reviewerId: schoolInstructor.id, results: passingResults() });
+      const result = await issueCertificateIfComplete({ userId: learner.id });
+      if (result.status !== "issued") throw new Error(`expected a new certificate, got ${result.status}`);
+      return result.certificate;
+    };
+    const signatoryOnCheck = async (code: string) => {
+      const result = await verifyCertificate({ code, clientAddress: uniqueAddress() });
+      return result.status === "valid" ? result.signatory : `not valid: ${result.status}`;
+    };
+
+    const before = await graduateHere("Ivo Partridge");
+    expect(await signatoryOnCheck(before.code)).toBeNull();
+
+    const learnerSession = await sessionOf((await createAccount({ role: "learner", name: "Nell Agar", cohortId: schoolCohort.id, schoolId: school.id })).id);
+    expect(await setSchoolSignatory({ admin: learnerSession.user, input: { signatoryName: "Nell Agar", signatoryRole: "Learner" } })).toEqual({ status: "forbidden" });
+    const tooLong = await setSchoolSignatory({ admin: admin.user, input: { signatoryName: "x".repeat(81), signatoryRole: "Head of department" } });
+    expect(tooLong.status).toBe("invalid");
+    const missing = await setSchoolSignatory({ admin: admin.user, input: { signatoryName: "Rhea Colt", signatoryRole: null } });
+    expect(missing.status).toBe("invalid");
+    const controlled = await setSchoolSignatory({ admin: admin.user, input: { signatoryName: "Rhea\u0007 Colt", signatoryRole: "Principal" } });
+    expect(controlled.status).toBe("invalid");
+
+    expect(await setSchoolSignatory({ admin: admin.user, input: { signatoryName: "  Rhea   Colt ", signatoryRole: "Principal" } })).toEqual({ status: "saved" });
+    const first = await graduateHere("Oskar Lind");
+    expect(await signatoryOnCheck(first.code)).toEqual({ name: "Rhea Colt", role: "Principal" });
+
+    expect(await setSchoolSignatory({ admin: admin.user, input: { signatoryName: "Tove Brandt", signatoryRole: "Head of electrical trades" } })).toEqual({ status: "saved" });
+    const second = await graduateHere("Pia Nordal");
+    expect(await signatoryOnCheck(second.code)).toEqual({ name: "Tove Brandt", role: "Head of electrical trades" });
+    // Issued certificates keep what they were issued with.
+    expect(await signatoryOnCheck(first.code)).toEqual({ name: "Rhea Colt", role: "Principal" });
+    expect(await signatoryOnCheck(before.code)).toBeNull();
+  });
+});
+
 describe("the public check", () => {
   it("shows a valid certificate's own words and nothing else", async () => {
     const { certificate } = await graduate("Bea Whitlock");
@@ -163,6 +208,9 @@ describe("the public check", () => {
       courseTitle: course.title,
       schoolName: "Fernhallow Trades College",
       issuedAt: certificate.issuedAt,
+      competences: course.competences.map((competence) => competence.statement),
+      studyHours: courseCertification(course).studyHours,
+      signatory: null,
     });
     const typed = await verifyCertificate({ code: certificate.code.toLowerCase(), clientAddress: uniqueAddress() });
     expect(typed.status).toBe("valid");
@@ -229,6 +277,9 @@ describe("the public check for programs", () => {
       courseTitle: course.title,
       schoolName: "Fernhallow Trades College",
       issuedAt: certificate.issuedAt.toISOString(),
+      competences: course.competences.map((competence) => competence.statement),
+      studyHours: courseCertification(course).studyHours,
+      signatory: null,
     });
     expect((await ask(encodeCertificateCode(randomBytes(10)), address)).status).toBe(404);
     expect((await ask("not-a-code", address)).status).toBe(404);

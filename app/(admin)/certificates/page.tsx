@@ -5,17 +5,24 @@ import { Card } from "@/components/ui/card";
 import { formatMoment } from "@/components/ui/dates";
 import { PageHeading } from "@/components/ui/page-heading";
 import { listCertificatesBySchool } from "@/db/queries/certificates";
+import { findSchoolById } from "@/db/queries/schools";
 import { requireRouteAccess } from "@/lib/auth/current-user";
 import { formatCertificateCode } from "@/lib/certificates/code";
 import { formatCertificateDate } from "@/lib/certificates/dates";
+import { signatoryOf } from "@/lib/certificates/signatory";
 import { certificatePdfPath, verificationPath } from "@/lib/certificates/urls";
 import { RevokeForm } from "./revoke-form";
+import { SignatoryForm } from "./signatory-form";
 
 export const metadata: Metadata = { title: "Certificates" };
 
 export default async function SchoolCertificatesPage() {
   const admin = await requireRouteAccess("/certificates");
-  const certificates = await listCertificatesBySchool({ schoolId: admin.schoolId });
+  const [certificates, school] = await Promise.all([
+    listCertificatesBySchool({ schoolId: admin.schoolId }),
+    findSchoolById({ schoolId: admin.schoolId }),
+  ]);
+  const signatory = school ? signatoryOf(school) : null;
   const revokedCount = certificates.filter((certificate) => certificate.revokedAt).length;
 
   return (
@@ -25,6 +32,17 @@ export default async function SchoolCertificatesPage() {
         title="Certificates"
         lead="Every certificate your school has issued. Revoke one when it should no longer stand: its public check page then says it was revoked, and it can no longer be downloaded."
       />
+      <Card className="mb-6">
+        <h2 className="text-lg font-semibold">Signed for the school</h2>
+        <p className="mb-4 mt-1 max-w-3xl text-sm text-ink-soft">
+          {signatory
+            ? `Certificates are signed by ${signatory.name}, ${signatory.role}.`
+            : "Nobody is named yet, so certificates carry no signatory."}{" "}
+          The name and role are printed on each certificate issued from now on and on its public check page. Certificates
+          already issued keep the signatory they were issued with.
+        </p>
+        <SignatoryForm current={signatory} />
+      </Card>
       <Card>
         <h2 className="text-lg font-semibold">
           Issued ({certificates.length}

@@ -1,9 +1,11 @@
 import { PDFDocument, PageSizes, rgb, type PDFPage } from "pdf-lib";
 import QRCode from "qrcode";
-import type { CertificateScoreSummary } from "@/db/schema";
+import type { CertificateCertification, CertificateScoreSummary } from "@/db/schema";
+import { formatStudyHours } from "../certification";
 import { formatCertificateCode } from "../code";
 import { formatCertificateDate } from "../dates";
 import { CertificateText } from "../fonts/certificate-fonts";
+import type { Signatory } from "../signatory";
 
 export type CertificateDocument = {
   code: string;
@@ -13,6 +15,9 @@ export type CertificateDocument = {
   cohortName: string | null;
   issuedAt: Date;
   scoreSummary: CertificateScoreSummary;
+  certification: CertificateCertification;
+  /** Who signed for the school when it was issued; none on certificates issued before the school named one. */
+  signatory: Signatory | null;
 };
 
 // The app's palette (app/globals.css), so the paper matches the pages it came from.
@@ -42,7 +47,7 @@ function drawPulseTrain(page: PDFPage): void {
     path += ` L ${x} 0 L ${x} ${-high} L ${x + highTime} ${-high} L ${x + highTime} 0`;
   });
   path += ` L ${startX + highTimes.length * period + 12} 0`;
-  page.drawSvgPath(path, { x: 0, y: 528, borderColor: colours.accent, borderWidth: 1, borderOpacity: 0.45 });
+  page.drawSvgPath(path, { x: 0, y: 548, borderColor: colours.accent, borderWidth: 1, borderOpacity: 0.45 });
 }
 
 function drawFrame(page: PDFPage): void {
@@ -60,7 +65,10 @@ function resultLines(summary: CertificateScoreSummary): { label: string; value: 
   ];
 }
 
-/** One landscape A4 page: who, what, where and when, the results, the code and a QR code of the verification address. */
+/**
+ * One landscape A4 page: who, what, where and when; what the course certifies and its hours; the
+ * results; the date, the code and who signed for the school; a QR code of the verification address.
+ */
 export async function renderCertificatePdf(certificate: CertificateDocument, verificationUrl: string): Promise<Uint8Array> {
   const doc = await PDFDocument.create();
   const code = formatCertificateCode(certificate.code);
@@ -74,6 +82,9 @@ export async function renderCertificatePdf(certificate: CertificateDocument, ver
   doc.setModificationDate(certificate.issuedAt);
 
   const results = resultLines(certificate.scoreSummary);
+  const { competences, studyHours } = certificate.certification;
+  const hoursLine = formatStudyHours(studyHours);
+  const signatory = certificate.signatory;
   const cohortLine = certificate.cohortName ? `as a member of the cohort ${certificate.cohortName}` : "";
   const labels = [
     "CERTIFICATE OF COMPLETION",
@@ -85,6 +96,9 @@ export async function renderCertificatePdf(certificate: CertificateDocument, ver
     "Issued",
     "Verification code",
     "Scan or visit to verify",
+    "What the holder can do",
+    "Signed for the school",
+    "•",
   ];
   const text = await CertificateText.embed(doc, [
     ...labels,
@@ -96,6 +110,9 @@ export async function renderCertificatePdf(certificate: CertificateDocument, ver
     code,
     verificationUrl,
     ...results.flatMap((line) => [line.label, line.value]),
+    ...competences,
+    hoursLine,
+    ...(signatory ? [signatory.name, signatory.role] : []),
   ]);
 
   const page = doc.addPage([pageWidth, pageHeight]);
@@ -103,43 +120,60 @@ export async function renderCertificatePdf(certificate: CertificateDocument, ver
   drawPulseTrain(page);
 
   const school = certificate.schoolName.toUpperCase();
-  text.drawCentred(page, school, { centreX, y: 500 }, { size: text.fitSize(school, 13, 600, 8), color: colours.copper });
-  text.drawCentred(page, "CERTIFICATE OF COMPLETION", { centreX, y: 462 }, { size: 26, color: colours.accent });
-  text.drawCentred(page, "This certifies that", { centreX, y: 428 }, { size: 12, color: colours.inkSoft });
+  text.drawCentred(page, school, { centreX, y: 520 }, { size: text.fitSize(school, 13, 600, 8), color: colours.copper });
+  text.drawCentred(page, "CERTIFICATE OF COMPLETION", { centreX, y: 484 }, { size: 26, color: colours.accent });
+  text.drawCentred(page, "This certifies that", { centreX, y: 452 }, { size: 12, color: colours.inkSoft });
   const nameSize = text.fitSize(certificate.learnerName, 34, 620, 14);
-  text.drawCentred(page, certificate.learnerName, { centreX, y: 388 }, { size: nameSize, color: colours.ink });
-  page.drawLine({ start: { x: centreX - 170, y: 376 }, end: { x: centreX + 170, y: 376 }, thickness: 0.9, color: colours.copper });
-  text.drawCentred(page, "has completed the course", { centreX, y: 352 }, { size: 12, color: colours.inkSoft });
+  text.drawCentred(page, certificate.learnerName, { centreX, y: 414 }, { size: nameSize, color: colours.ink });
+  page.drawLine({ start: { x: centreX - 170, y: 402 }, end: { x: centreX + 170, y: 402 }, thickness: 0.9, color: colours.copper });
+  text.drawCentred(page, "has completed the course", { centreX, y: 380 }, { size: 12, color: colours.inkSoft });
   const titleSize = text.fitSize(certificate.courseTitle, 22, 620, 11);
-  text.drawCentred(page, certificate.courseTitle, { centreX, y: 324 }, { size: titleSize, color: colours.accent });
+  text.drawCentred(page, certificate.courseTitle, { centreX, y: 354 }, { size: titleSize, color: colours.accent });
   if (cohortLine) {
-    text.drawCentred(page, cohortLine, { centreX, y: 302 }, { size: text.fitSize(cohortLine, 11, 620, 7), color: colours.inkSoft });
+    text.drawCentred(page, cohortLine, { centreX, y: 334 }, { size: text.fitSize(cohortLine, 11, 620, 7), color: colours.inkSoft });
   }
 
-  // Results, left; the date and code, middle; the QR code, right.
-  const resultsX = margin + 8;
-  const resultsWidth = 330;
-  text.draw(page, "Results", { x: resultsX, y: 268 }, { size: 11, color: colours.accent });
-  text.draw(page, "Best passing score in each lab", { x: resultsX + 48, y: 268 }, { size: 8, color: colours.inkFaint });
-  const rowHeight = Math.min(14, 170 / Math.max(1, results.length));
-  const rowSize = Math.min(9, rowHeight - 3);
-  results.forEach((line, i) => {
-    const y = 250 - i * rowHeight;
-    const value = line.value;
-    const label = line.label;
-    text.draw(page, label, { x: resultsX, y }, { size: text.fitSize(label, rowSize, resultsWidth - 110, 5), color: colours.ink });
-    text.drawRight(page, value, { rightX: resultsX + resultsWidth, y }, { size: rowSize, color: colours.inkSoft });
+  // What the course certifies, across the page: one line a competence, and the hours of study.
+  const left = margin + 8;
+  const fullWidth = pageWidth - 2 * left;
+  text.draw(page, "What the holder can do", { x: left, y: 306 }, { size: 11, color: colours.accent });
+  text.drawRight(page, hoursLine, { rightX: left + fullWidth, y: 306 }, { size: 10, color: colours.ink });
+  competences.forEach((competence, i) => {
+    const y = 290 - i * 12;
+    text.draw(page, "•", { x: left, y }, { size: 8.5, color: colours.copper });
+    text.draw(page, competence, { x: left + 10, y }, { size: text.fitSize(competence, 8.5, fullWidth - 10, 5), color: colours.ink });
   });
-  const averageY = 250 - results.length * rowHeight - 6;
-  page.drawLine({ start: { x: resultsX, y: averageY + 11 }, end: { x: resultsX + resultsWidth, y: averageY + 11 }, thickness: 0.5, color: colours.line });
-  text.draw(page, "Average lab score", { x: resultsX, y: averageY }, { size: 10, color: colours.ink });
-  text.drawRight(page, `${certificate.scoreSummary.averageScore} / 100`, { rightX: resultsX + resultsWidth, y: averageY }, { size: 10, color: colours.accent });
+
+  // Results, left; the date, the code and the signatory, middle; the QR code, right.
+  const resultsTop = 290 - competences.length * 12 - 14;
+  const resultsWidth = 330;
+  text.draw(page, "Results", { x: left, y: resultsTop }, { size: 11, color: colours.accent });
+  text.draw(page, "Best passing score in each lab", { x: left + 48, y: resultsTop }, { size: 8, color: colours.inkFaint });
+  const rowHeight = Math.min(12, (resultsTop - 90) / Math.max(1, results.length + 1));
+  const rowSize = Math.min(8.5, rowHeight - 2.5);
+  results.forEach((line, i) => {
+    const y = resultsTop - 15 - i * rowHeight;
+    text.draw(page, line.label, { x: left, y }, { size: text.fitSize(line.label, rowSize, resultsWidth - 110, 5), color: colours.ink });
+    text.drawRight(page, line.value, { rightX: left + resultsWidth, y }, { size: rowSize, color: colours.inkSoft });
+  });
+  const averageY = resultsTop - 15 - results.length * rowHeight - 4;
+  page.drawLine({ start: { x: left, y: averageY + 10 }, end: { x: left + resultsWidth, y: averageY + 10 }, thickness: 0.5, color: colours.line });
+  text.draw(page, "Average lab score", { x: left, y: averageY }, { size: 9.5, color: colours.ink });
+  text.drawRight(page, `${certificate.scoreSummary.averageScore} / 100`, { rightX: left + resultsWidth, y: averageY }, { size: 9.5, color: colours.accent });
 
   const middleX = 450;
-  text.draw(page, "Issued", { x: middleX, y: 168 }, { size: 9, color: colours.inkFaint });
-  text.draw(page, issued, { x: middleX, y: 150 }, { size: 14, color: colours.ink });
-  text.draw(page, "Verification code", { x: middleX, y: 116 }, { size: 9, color: colours.inkFaint });
-  text.draw(page, code, { x: middleX, y: 98 }, { size: 14, color: colours.ink });
+  const middleWidth = 190;
+  text.draw(page, "Issued", { x: middleX, y: resultsTop }, { size: 9, color: colours.inkFaint });
+  text.draw(page, issued, { x: middleX, y: resultsTop - 17 }, { size: 13, color: colours.ink });
+  text.draw(page, "Verification code", { x: middleX, y: resultsTop - 42 }, { size: 9, color: colours.inkFaint });
+  text.draw(page, code, { x: middleX, y: resultsTop - 59 }, { size: 13, color: colours.ink });
+  if (signatory) {
+    const lineY = resultsTop - 96;
+    page.drawLine({ start: { x: middleX, y: lineY }, end: { x: middleX + middleWidth, y: lineY }, thickness: 0.7, color: colours.copper });
+    text.draw(page, signatory.name, { x: middleX, y: lineY - 14 }, { size: text.fitSize(signatory.name, 11, middleWidth, 6), color: colours.ink });
+    text.draw(page, signatory.role, { x: middleX, y: lineY - 26 }, { size: text.fitSize(signatory.role, 8.5, middleWidth, 5), color: colours.inkSoft });
+    text.draw(page, "Signed for the school", { x: middleX, y: lineY + 6 }, { size: 8, color: colours.inkFaint });
+  }
 
   const qrSize = 118;
   const qrX = pageWidth - margin - qrSize;

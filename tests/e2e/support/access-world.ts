@@ -57,6 +57,8 @@ export type Person = { id: string; email: string; name: string; schoolId: string
 
 export type AccessWorld = {
   people: Record<Member, Person>;
+  /** Fernhallow's signatory as the run found it, put back afterwards (the admin's accepted calls change it). */
+  homeSignatory: { id: string; signatoryName: string | null; signatoryRole: string | null };
   otherSchoolId: string;
   cohortA: string;
   /** A cohort of Fernhallow made for the run, for edits that must not touch the seeded ones. */
@@ -162,7 +164,10 @@ async function uploadPhoto(learner: Person, submissionId: string): Promise<strin
 }
 
 async function buildAccessWorld(): Promise<AccessWorld> {
-  const [home] = await db.select({ id: schools.id }).from(schools).where(eq(schools.slug, demoSchool.slug));
+  const [home] = await db
+    .select({ id: schools.id, signatoryName: schools.signatoryName, signatoryRole: schools.signatoryRole })
+    .from(schools)
+    .where(eq(schools.slug, demoSchool.slug));
   if (!home) throw new Error("The demo school is missing: the seed must run before the browser tests.");
   const schoolId = home.id;
   const suffix = randomUUID().slice(0, 8);
@@ -274,6 +279,7 @@ async function buildAccessWorld(): Promise<AccessWorld> {
 
   return {
     people,
+    homeSignatory: home,
     otherSchoolId,
     cohortA,
     spareCohort,
@@ -314,6 +320,8 @@ async function removeAccessWorld(world: AccessWorld): Promise<void> {
   await db.delete(users).where(like(users.email, accessAddresses));
   await db.delete(cohorts).where(eq(cohorts.id, world.spareCohort));
   await db.delete(schools).where(eq(schools.id, world.otherSchoolId));
+  const { id, ...signatory } = world.homeSignatory;
+  await db.update(schools).set(signatory).where(eq(schools.id, id));
 }
 
 /** The world for one test file: built before its tests, handed to `use`, removed after them. */

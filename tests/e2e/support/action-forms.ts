@@ -133,6 +133,12 @@ export const actionForms: Record<string, ActionForm> = {
     fields: async (world) => ({ certificateId: (await world.createCertificate()).id, reason: "Issued in error during a records check." }),
     guarded: ["certificateId"],
   },
+  // Any text of sensible length is a name or a role, so only the form as a whole can be spoiled.
+  "app/(admin)/certificates/actions.ts#saveSignatoryAction": {
+    allowed: "admin",
+    path: () => "/certificates",
+    fields: () => ({ signatoryName: "Access Signatory", signatoryRole: "Head of the access department" }),
+  },
   "app/(admin)/admin/actions.ts#invitePerson": {
     allowed: "admin",
     path: () => "/admin",

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { getCourse } from "@/lessons";
+import { courseCertification } from "@/lib/certificates/certification";
 import { evaluateCompletion } from "@/lib/certificates/completion";
 import { renderCertificatePdf, type CertificateDocument } from "@/lib/certificates/pdf/render-certificate";
 import { readCertificatePdf } from "./read-certificate-pdf";
@@ -18,6 +19,8 @@ const certificate: CertificateDocument = {
   cohortName: "Data lines — January evenings",
   issuedAt: new Date("2026-03-12T15:20:00Z"),
   scoreSummary: summary,
+  certification: courseCertification(course),
+  signatory: { name: "Noor Whitcombe", role: "Head of the electrical department" },
 };
 const url = "https://edgewise.example.test/c/7K2M-QX9P-4TDW-8HBN";
 
@@ -43,6 +46,20 @@ describe("the certificate PDF", { timeout: 60_000 }, () => {
     const average = (71 + 74 + 77 + 80 + 83 + 86 + 89 + 92) / 8;
     expect(read.text).toContain(`${average} / 100`);
     expect(read.text).toContain("92 / 100");
+  });
+
+  it("states what the course certifies, the hours of study and who signed for the school", async () => {
+    const read = await readCertificatePdf(await renderCertificatePdf(certificate, url));
+    const lessonMinutes = course.lessons.reduce((sum, lesson) => sum + lesson.minutes + (lesson.bench?.minutes ?? 0), 0);
+    expect(course.competences.length).toBeGreaterThanOrEqual(3);
+    for (const competence of course.competences) expect(read.text).toContain(competence.statement);
+    expect(read.text).toContain(`${Math.round(lessonMinutes / 30) / 2} hours of study`);
+    expect(read.text).toContain("Noor Whitcombe");
+    expect(read.text).toContain("Head of the electrical department");
+
+    const unsigned = await readCertificatePdf(await renderCertificatePdf({ ...certificate, signatory: null }, url));
+    expect(unsigned.text).not.toContain("Signed for the school");
+    expect(unsigned.pageCount).toBe(1);
   });
 
   it("is set in the app's own typeface, embedded, and its QR code opens the verification address", async () => {

@@ -190,6 +190,15 @@ describe("loadCourse", () => {
     expect(error.message).toMatch(/completion\.benchExercises\.1: no bench exercise "no-such-bench"/);
   });
 
+  it("ties each competence the certificate states to required work, and every requirement to a competence", () => {
+    const broken = clone(courseInput) as { competences: { statement: string; shownBy: string[] }[] };
+    broken.competences[0]!.shownBy = ["no-such-lab"];
+    const error = contentErrorOf(() => loadCourse("lessons/course.ts", broken, lessonSources));
+    expect(error.file).toBe("lessons/course.ts");
+    expect(error.message).toMatch(/competences\.0\.shownBy\.0: "no-such-lab" is not a lab or bench exercise the certificate requires/);
+    expect(error.message).toMatch(/competences: no competence is shown by "timing-budget"/);
+  });
+
   it("numbers lessons by their position, naming the lesson file", () => {
     const broken = clone(courseInput) as { lessons: { number: number }[] };
     broken.lessons[1]!.number = 7;
