@@ -13,7 +13,7 @@ function labStatus(lab: NonNullable<LessonProgressView["lab"]>): string {
 /** The lab that closes the lesson: its brief, where the learner stands, and the way to the workbench. */
 export function LabCard({ lab, progress }: { lab: Lab; progress: NonNullable<LessonProgressView["lab"]> }) {
   return (
-    <section id="lab" aria-labelledby="lab-title" className="mt-12 scroll-mt-24 rounded-card border-2 border-accent/30 bg-accent-soft/50 p-5 sm:p-6">
+    <section id="lab" aria-labelledby="lab-title" className="mt-12 scroll-mt-24 rounded-card border-2 border-accent/30 bg-accent-soft/50 p-5 sm:p-6 print:hidden">
       <p className="text-sm font-semibold uppercase tracking-wide text-accent">Lab</p>
       <h2 id="lab-title" className="mt-1 text-2xl font-semibold tracking-tight text-ink">
         {lab.title}

@@ -33,7 +33,7 @@ const components: Components = {
   hr: () => <hr className="my-8 border-line" />,
   // Wide tables scroll inside their own box on a phone instead of widening the page.
   table: ({ children }) => (
-    <div className="my-6 overflow-x-auto rounded-lg border border-line" role="region" aria-label="Table" tabIndex={0}>
+    <div className="my-6 break-inside-avoid overflow-x-auto rounded-lg border border-line print:overflow-visible" role="region" aria-label="Table" tabIndex={0}>
       <table className="w-full border-collapse text-left text-sm tabular-nums">{children}</table>
     </div>
   ),

@@ -7,7 +7,7 @@ type Neighbour = { slug: string; number: number; title: string };
 export function LessonNeighbours({ previous, next }: { previous?: Neighbour; next?: LessonProgressView }) {
   if (!previous && !next) return null;
   return (
-    <nav aria-label="Lessons" className="mt-12 grid gap-3 border-t border-line pt-6 sm:grid-cols-2">
+    <nav aria-label="Lessons" className="mt-12 grid gap-3 border-t border-line pt-6 sm:grid-cols-2 print:hidden">
       {previous ? (
         <Link href={`/lessons/${previous.slug}`} className="rounded-lg border border-line bg-surface px-4 py-3 no-underline hover:border-line-strong">
           <span className="block text-xs font-semibold uppercase tracking-wide text-ink-faint">← Lesson {previous.number}</span>

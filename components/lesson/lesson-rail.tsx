@@ -41,7 +41,7 @@ function ProgressSummary({ progress }: { progress: LessonProgressView }) {
 export function LessonRail({ sections, progress, variant }: { sections: LessonSection[]; progress: LessonProgressView; variant: "side" | "inline" }) {
   if (variant === "inline") {
     return (
-      <details className="mb-8 rounded-card border border-line bg-surface px-4 py-3 lg:hidden">
+      <details className="mb-8 rounded-card border border-line bg-surface px-4 py-3 lg:hidden print:hidden">
         <summary className="cursor-pointer font-semibold text-ink">
           In this lesson · {progress.checks.correct}/{progress.checks.total} checks{progress.lab?.passed ? " · lab passed" : ""}
         </summary>

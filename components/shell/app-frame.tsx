@@ -9,17 +9,20 @@ import { AppHeader } from "./app-header";
 export function AppFrame({ user, children }: { user: SessionUser | null; children: React.ReactNode }) {
   return (
     <div className="flex min-h-dvh flex-col">
-      {user ? (
-        <AppHeader user={user} />
-      ) : (
-        <header className="border-b border-line bg-surface">
-          <div className="mx-auto max-w-6xl px-5 py-3">
-            <BrandMark />
-          </div>
-        </header>
-      )}
-      <main className="mx-auto w-full max-w-6xl flex-1 px-5 py-8 sm:py-10">{children}</main>
-      <footer className="border-t border-line">
+      {/* A printed page is a handout: no header, no navigation. */}
+      <div className="print:hidden">
+        {user ? (
+          <AppHeader user={user} />
+        ) : (
+          <header className="border-b border-line bg-surface">
+            <div className="mx-auto max-w-6xl px-5 py-3">
+              <BrandMark />
+            </div>
+          </header>
+        )}
+      </div>
+      <main className="mx-auto w-full max-w-6xl flex-1 px-5 py-8 sm:py-10 print:max-w-none print:p-0">{children}</main>
+      <footer className="border-t border-line print:mt-6">
         <p className="mx-auto max-w-6xl px-5 py-5 text-sm text-ink-faint">
           Edgewise teaches with a model of the line. Confirm every real run on the bench, and follow your local
           electrical codes and the manufacturer&apos;s instructions.

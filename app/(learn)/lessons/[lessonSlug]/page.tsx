@@ -61,7 +61,7 @@ export default async function LessonPage({ params }: Props) {
         <p className="mt-3 text-base text-ink-soft sm:text-lg">{lesson.summary}</p>
       </header>
 
-      <div className="lg:grid lg:grid-cols-[minmax(0,1fr)_16rem] lg:gap-12">
+      <div className="lg:grid lg:grid-cols-[minmax(0,1fr)_16rem] lg:gap-12 print:block">
         <div className="min-w-0">
           <LessonRail sections={sections} progress={view} variant="inline" />
           <article className="max-w-[44rem]">
@@ -80,20 +80,22 @@ export default async function LessonPage({ params }: Props) {
                     lastEntry: state?.lastEntry ?? null,
                     correctEntry: state?.correctEntry ?? null,
                   };
+                  // Quick checks are answered here on the screen, so a printed lesson leaves them out.
                   return (
-                    <QuickCheckForm
-                      key={block.id}
-                      action={answerQuickCheck}
-                      lessonSlug={lesson.slug}
-                      checkId={block.id}
-                      number={checkIds.indexOf(block.id) + 1}
-                      total={checkIds.length}
-                      prompt={<LessonMarkdown markdown={block.prompt} />}
-                      hint={<LessonMarkdown markdown={block.hint} />}
-                      explanation={savedCheck.correctEntry !== null ? <LessonMarkdown markdown={block.explanation} /> : null}
-                      expected={describeExpectedEntry(block.answer.unit)}
-                      saved={savedCheck}
-                    />
+                    <div key={block.id} className="print:hidden">
+                      <QuickCheckForm
+                        action={answerQuickCheck}
+                        lessonSlug={lesson.slug}
+                        checkId={block.id}
+                        number={checkIds.indexOf(block.id) + 1}
+                        total={checkIds.length}
+                        prompt={<LessonMarkdown markdown={block.prompt} />}
+                        hint={<LessonMarkdown markdown={block.hint} />}
+                        explanation={savedCheck.correctEntry !== null ? <LessonMarkdown markdown={block.explanation} /> : null}
+                        expected={describeExpectedEntry(block.answer.unit)}
+                        saved={savedCheck}
+                      />
+                    </div>
                   );
                 }
               }
@@ -103,7 +105,7 @@ export default async function LessonPage({ params }: Props) {
             <LessonNeighbours previous={course.lessons[index - 1]} next={progress.lessons[index + 1]} />
           </article>
         </div>
-        <aside className="hidden lg:block" aria-label="In this lesson">
+        <aside className="hidden lg:block print:hidden" aria-label="In this lesson">
           <div className="sticky top-6 max-h-[calc(100dvh-3rem)] overflow-y-auto pb-6">
             <LessonRail sections={sections} progress={view} variant="side" />
           </div>
