@@ -11,7 +11,9 @@ import { randomUUID } from "node:crypto";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { findLinks } from "@/lib/mail/sink";
-import { createAccount, createCertificateCohort, passingResults, recordResults } from "../integration/certificate-fixtures";
+import { getCourse } from "@/lessons";
+import { courseCertification } from "@/lib/certificates/certification";
+import { createAccount, createCertificateCohort, createSchool, passingResults, recordResults } from "../integration/certificate-fixtures";
 import { waitForMessage } from "../integration/support/mail-sink";
 import { readCertificatePdf } from "../unit/certificates/read-certificate-pdf";
 import { baseUrl, launchBrowser, openPage, saveScreenshot, signInAs, signInThroughForm } from "./support/browser";
@@ -189,6 +191,100 @@ describe("a certificate from download to check", () => {
       await saveScreenshot(graduate.page, "certificate-learner-revoked");
     } finally {
       await graduate.context.close();
+    }
+  });
+});
+
+describe("who signs for the school, and what the certificate certifies", () => {
+  const signatory = { name: "Wilhelmina Sterne-Aballa", role: "Head of electrical installation" };
+  const certification = courseCertification(getCourse());
+
+  /** The learner opens their certificate page, which issues it; its code and PDF bytes. */
+  async function issueThroughPage(person: { email: string }): Promise<{ code: string; pdf: Uint8Array }> {
+    const { context, page } = await openPage(browser, "wide");
+    try {
+      await signInThroughForm(page, { email: person.email, password });
+      await page.goto("/certificate");
+      await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("You have earned your certificate");
+      const issued = (await page.getByText(/^[0-9A-Z]{4}-[0-9A-Z]{4}-[0-9A-Z]{4}-[0-9A-Z]{4}$/).first().textContent())!;
+      const href = (await page.getByRole("link", { name: "Download the certificate (PDF)" }).getAttribute("href"))!;
+      const response = await page.request.get(href);
+      expect(response.status()).toBe(200);
+      return { code: issued, pdf: new Uint8Array(await response.body()) };
+    } finally {
+      await context.close();
+    }
+  }
+
+  it("is set by the school's admin, validated, printed on certificates issued after it and shown on their public page; an earlier certificate keeps none", async () => {
+    const school = await createSchool();
+    const schoolCohort = await createCertificateCohort({ schoolId: school.id });
+    const schoolInstructor = await createAccount({ role: "instructor", name: "Ilse Marchbank", cohortId: schoolCohort.id, schoolId: school.id });
+    const admin = await createAccount({ role: "admin", name: "Petra Lowndes", schoolId: school.id, password });
+    const graduateOf = async (name: string) => {
+      const person = await createAccount({ role: "learner", name, cohortId: schoolCohort.id, schoolId: school.id, password });
+      await recordResults({ learnerId: person.id, cohortId: schoolCohort.id, reviewerId: schoolInstructor.id, results: passingResults() });
+      return person;
+    };
+
+    const early = await issueThroughPage(await graduateOf("Edda Pomeroy"));
+    const earlyText = (await readCertificatePdf(early.pdf)).text;
+    for (const competence of certification.competences) expect(earlyText).toContain(competence);
+    expect(earlyText).not.toContain("Signed for the school");
+
+    for (const viewport of ["wide", "narrow"] as const) {
+      const { context, page } = await openPage(browser, viewport);
+      try {
+        await signInThroughForm(page, { email: admin.email, password });
+        await page.goto("/certificates");
+        await page.getByText("Nobody is named yet, so certificates carry no signatory.").waitFor();
+        if (viewport === "wide") {
+          await page.getByLabel("Name", { exact: true }).fill(signatory.name);
+          await page.getByLabel("Role at the school").fill(" ");
+          await page.getByRole("button", { name: "Save the signatory" }).click();
+          await page.getByText("Enter the signatory's role.").waitFor();
+          await saveScreenshot(page, "certificate-admin-signatory-invalid");
+          await page.getByLabel("Role at the school").fill(signatory.role);
+          await page.getByRole("button", { name: "Save the signatory" }).click();
+          await page.getByText(/^Saved\. Certificates issued from now on carry this signatory/).waitFor();
+          await page.reload();
+        }
+        await page.getByText(`Certificates are signed by ${signatory.name}, ${signatory.role}.`).waitFor();
+        expect(await page.getByLabel("Name", { exact: true }).inputValue()).toBe(signatory.name);
+        expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBeLessThanOrEqual(0);
+        await saveScreenshot(page, `certificate-admin-signatory-${viewport}`);
+      } finally {
+        await context.close();
+      }
+    }
+
+    const late = await issueThroughPage(await graduateOf("Rasmus Oduya"));
+    const lateText = (await readCertificatePdf(late.pdf)).text;
+    expect(lateText).toContain(signatory.name);
+    expect(lateText).toContain(signatory.role);
+    expect(lateText).toContain(`${certification.studyHours} hours of study`);
+    for (const competence of certification.competences) expect(lateText).toContain(competence);
+
+    for (const viewport of ["wide", "narrow"] as const) {
+      const { context, page } = await openPage(browser, viewport);
+      try {
+        await page.goto(`/c/${late.code}`);
+        await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("This certificate is valid");
+        expect(await page.getByText(signatory.name, { exact: true }).isVisible()).toBe(true);
+        expect(await page.getByText(signatory.role, { exact: true }).isVisible()).toBe(true);
+        expect(await page.getByText(`${certification.studyHours} hours of study`).isVisible()).toBe(true);
+        const listed = await page.getByRole("region", { name: "What the holder can do" }).getByRole("listitem").allTextContents();
+        expect(listed).toEqual(certification.competences);
+        expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBeLessThanOrEqual(0);
+        await saveScreenshot(page, `certificate-check-signatory-${viewport}`);
+
+        // Issued before the school named anyone: it keeps what it was issued with.
+        await page.goto(`/c/${early.code}`);
+        expect(await page.getByText("No signatory was named when it was issued.").isVisible()).toBe(true);
+        expect(await page.getByText(signatory.name).count()).toBe(0);
+      } finally {
+        await context.close();
+      }
     }
   });
 });
