@@ -3,7 +3,7 @@ import type { ReactNode } from "react";
 /**
  * The frame every lesson figure shares: the drawing, its controls, a plain-text readout of what
  * the drawing shows (for screen readers and for anyone who prefers numbers) and the caption.
- * It is never split across printed pages.
+ * It is never split across printed pages, where it prints as drawn, with the values it was set to.
  */
 export function FigureFrame({
   label,
@@ -22,8 +22,7 @@ export function FigureFrame({
   return (
     <figure aria-label={label} className="my-10 break-inside-avoid rounded-card border border-line bg-surface print:my-6">
       <div className="px-3 pt-4 sm:px-5">{children}</div>
-      {/* On paper the drawing stays as it was last set, with its readout and caption; the controls do not print. */}
-      {controls ? <div className="space-y-4 border-t border-line px-4 py-4 sm:px-5 print:hidden">{controls}</div> : null}
+      {controls ? <div className="space-y-4 border-t border-line px-4 py-4 sm:px-5">{controls}</div> : null}
       {readout ? (
         <div className="border-t border-line bg-sunken/60 px-4 py-3 text-sm text-ink sm:px-5" aria-live="polite">
           {readout}

@@ -54,7 +54,7 @@ export function BenchExerciseBrief({ exercise }: { exercise: BenchExercise }) {
           Have the photo and these readings ready, then hand them in on the bench page; your instructor reviews them against the
           marking above.
         </p>
-        <Link href={`/bench/${exercise.slug}`} className={buttonClass("secondary", "mt-3")}>
+        <Link href={`/bench/${exercise.slug}`} className={buttonClass("secondary", "mt-3 print:hidden")}>
           Hand in your bench work <span aria-hidden="true">→</span>
         </Link>
       </div>
