@@ -48,7 +48,7 @@ export function VerificationResult({ result }: { result: Exclude<Verification, {
             <Fact label="Signed for the school">
               {result.signatory ? (
                 <>
-                  {result.signatory.name}
+                  <span className="block">{result.signatory.name}</span>
                   <span className="block text-sm font-normal text-ink-soft">{result.signatory.role}</span>
                 </>
               ) : (

@@ -10,7 +10,7 @@ import type { SimBit } from "@/lib/sim";
  */
 export function BitStrip({ bits, selected, onSelect }: { bits: SimBit[]; selected: number | null; onSelect: (index: number) => void }) {
   return (
-    <div className="mt-2">
+    <div className="mt-2 print:hidden">
       <div className="flex items-start gap-2">
         <div className="shrink-0 pt-5 text-right text-xs leading-6 text-ink-faint" aria-hidden="true">
           <div>sent</div>

@@ -17,7 +17,7 @@ export function ScopeSummary({ run, onShowReason }: { run: LiveRun; onShowReason
         Simulator verdict: {verdict.summary}
         {verdict.reasons.some((r) => r.severity === "warning") ? ", with warnings" : ""}.
       </p>
-      <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1">
+      <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 print:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <JudgementRow judgement={verdict.guaranteed} />
         <JudgementRow judgement={verdict.typical} />
         <dt className="text-ink-soft">Rise time at the pixel</dt>

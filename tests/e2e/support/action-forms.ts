@@ -138,6 +138,7 @@ export const actionForms: Record<string, ActionForm> = {
     allowed: "admin",
     path: () => "/certificates",
     fields: () => ({ signatoryName: "Access Signatory", signatoryRole: "Head of the access department" }),
+    guarded: [],
   },
   "app/(admin)/admin/actions.ts#invitePerson": {
     allowed: "admin",
