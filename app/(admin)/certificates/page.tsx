@@ -68,7 +68,10 @@ export default async function SchoolCertificatesPage() {
                   <p className="mt-1 text-sm">
                     <span className="font-mono">{formatCertificateCode(certificate.code)}</span>
                     {" · "}
-                    <Link href={verificationPath(certificate.code)}>check page</Link>
+                    {/* Not prefetched: each load of a check page counts against the address's look-up limit. */}
+                    <Link href={verificationPath(certificate.code)} prefetch={false}>
+                      check page
+                    </Link>
                     {certificate.revokedAt ? null : (
                       <>
                         {" · "}

@@ -42,7 +42,8 @@ function IssuedCertificate({ certificate }: { certificate: Certificate }) {
           <a href={certificatePdfPath(certificate.id)} className={buttonClass("primary")} download>
             Download the certificate (PDF)
           </a>
-          <Link href={verificationPath(certificate.code)} className={buttonClass("secondary")}>
+          {/* Not prefetched: each load of a check page counts against the address's look-up limit. */}
+          <Link href={verificationPath(certificate.code)} prefetch={false} className={buttonClass("secondary")}>
             Open its public check page
           </Link>
         </div>
