@@ -116,8 +116,6 @@ function withTransportSecurity<T extends Response>(response: T): T {
 
 export async function proxy(request: NextRequest) {
   const readsNoBody = request.method === "GET" || request.method === "HEAD";
-  // Prefetches only ask for what a link leads to; the page they fetch gets its policy when it is opened.
-  if (readsNoBody && isPrefetch(request)) return NextResponse.next();
   if (isCrossSitePost(request)) {
     return refusal(new AppError("forbidden", "This form was sent from another site, so it was not accepted. Open the page on this site and send it again."));
   }
@@ -129,10 +127,13 @@ export async function proxy(request: NextRequest) {
   // once it has failed, so an outage is answered here. Server actions go on: their forms keep what
   // was typed and say why.
   if (!request.headers.has("next-action") && !(await isDatabaseReachable())) return withTransportSecurity(unavailablePageResponse());
+  // A prefetch of a certificate's page looks the certificate up too, so it is counted like a visit.
   if (readsNoBody) {
     const overLimit = await refuseCertificateLookupOverLimit(request);
     if (overLimit) return withTransportSecurity(overLimit);
   }
+  // Prefetches only ask for what a link leads to; the page they fetch gets its policy when it is opened.
+  if (readsNoBody && isPrefetch(request)) return NextResponse.next();
 
   const policy = contentSecurityPolicy(createNonce());
   // Next takes the nonce for its own inline scripts from the policy on the request.
