@@ -6,6 +6,7 @@ import { spendRateLimits } from "./rate-limiter";
 
 const refusals: Partial<Record<LimitedAction, (wait: string) => string>> = {
   grading: (wait) => `That is a lot of submissions in a short time. Wait ${wait}, then submit again.`,
+  "workbench-save": (wait) => `Your choices are changing faster than they can be saved. Wait ${wait}; they are kept in this browser until then.`,
   upload: (wait) => `That is a lot of uploads in a short time. Wait ${wait}, then try again.`,
 };
 

@@ -6,7 +6,7 @@
 // A school's learners often share one public address, so per-address limits allow a whole class
 // and per-person limits stop one account; both are far above what a person at the workbench does.
 
-export type LimitedAction = "grading" | "upload" | "sign-in-failure" | "password-reset" | "certificate-lookup";
+export type LimitedAction = "grading" | "workbench-save" | "upload" | "sign-in-failure" | "password-reset" | "certificate-lookup";
 export type LimitSubject = "person" | "address";
 export type RateLimitRule = { action: LimitedAction; per: LimitSubject; points: number; windowSeconds: number };
 
@@ -14,6 +14,10 @@ export const rateLimitRules = [
   // A learner submits a lab every few seconds at most; a class of 40 at once stays under 1200.
   { action: "grading", per: "person", points: 60, windowSeconds: 60 },
   { action: "grading", per: "address", points: 1200, windowSeconds: 60 },
+  // The workbench saves a learner's choices 0.7 s after the last change, one save at a time: a
+  // control dragged for a whole minute sends under 90.
+  { action: "workbench-save", per: "person", points: 120, windowSeconds: 60 },
+  { action: "workbench-save", per: "address", points: 2400, windowSeconds: 60 },
   // Upload requests from the browser (the service's signed callbacks are not counted): a bench
   // exercise takes a few photos, each request signs up to the exercise's photo limit.
   { action: "upload", per: "person", points: 30, windowSeconds: 600 },

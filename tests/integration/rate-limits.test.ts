@@ -10,6 +10,7 @@ import { once } from "node:events";
 import type { NextRequest } from "next/server";
 import { beforeAll, describe, expect, it } from "vitest";
 import { POST as submitAttempt } from "@/app/api/labs/[labSlug]/attempts/route";
+import { POST as saveDraft } from "@/app/api/labs/[labSlug]/draft/route";
 import { POST as upload } from "@/app/api/uploadthing/route";
 import { db } from "@/db/client";
 import { markLessonsCompleted } from "@/db/queries/progress";
@@ -67,6 +68,17 @@ const grade = (who: { cookie: string }, address: string) =>
     { params: Promise.resolve({ labSlug: LAB }) },
   );
 
+/** A workbench save whose body is no draft: refused for it (422) once the limits let it through. */
+const save = (who: { cookie: string }, address: string) =>
+  saveDraft(
+    new Request(`http://app.test/api/labs/${LAB}/draft`, {
+      method: "POST",
+      headers: fromAddress(address, { cookie: who.cookie, "content-type": "application/json" }),
+      body: "[]",
+    }),
+    { params: Promise.resolve({ labSlug: LAB }) },
+  );
+
 /** The browser's upload request; an empty body is refused (400) once the limit lets it through. */
 const askToUpload = (who: { cookie: string } | null, address: string) =>
   upload(
@@ -120,6 +132,17 @@ describe("grading", () => {
     const someone = await learner();
     await expectRefusal(await grade(someone, crowded), ruleOf("grading", "address").windowSeconds, /^That is a lot of submissions/);
     expect((await grade(someone, uniqueAddress())).status).toBe(422);
+  });
+});
+
+describe("workbench saves", () => {
+  const perPerson = ruleOf("workbench-save", "person");
+
+  it(`answers 429 with Retry-After after ${perPerson.points} saves a ${perPerson.windowSeconds} s, per learner`, async () => {
+    const dragging = await learner();
+    for (let i = 0; i < perPerson.points; i += 1) expect((await save(dragging, classroom)).status, `save ${i + 1}`).toBe(422);
+    await expectRefusal(await save(dragging, classroom), perPerson.windowSeconds, /^Your choices are changing faster than they can be saved\. Wait \d+ seconds?; they are kept in this browser until then\.$/);
+    expect((await save(await learner(), classroom)).status).toBe(422);
   });
 });
 

@@ -7,6 +7,7 @@ import { bodyLimits } from "@/lib/http/body-limits";
 import { readJsonBody } from "@/lib/http/json-body";
 import { errorResponse } from "@/lib/http/respond";
 import { labDraftSchemaFor } from "@/lib/lab-drafts";
+import { limitRequest } from "@/lib/rate-limit/limit-request";
 import { findLab, requireLearner, requireOpenLab, withSession } from "../../learner-request";
 
 export const dynamic = "force-dynamic";
@@ -20,9 +21,10 @@ type Context = { params: Promise<{ labSlug: string }> };
 export async function POST(request: Request, context: Context): Promise<NextResponse> {
   try {
     const learner = await requireLearner(request);
+    await limitRequest(request, "workbench-save", learner.user.id);
     const lab = findLab((await context.params).labSlug);
     await requireOpenLab(learner.user, lab);
-    // The learner, the lab and its lock are checked first: a refused request's body is never read.
+    // The learner, the limits, the lab and its lock are checked first: a refused request's body is never read.
     const variant = labVariant(lab, variantSeedFor(learner.user.id, lab.slug));
     const body = labDraftSchemaFor(lab, variant).safeParse(await readJsonBody(request, bodyLimits.labDraft));
     if (!body.success) throw invalidInput(issuesOf(body.error));
