@@ -1,3 +1,4 @@
+import { bufferRun, pinRun } from "../choice-check-runs";
 import { buffer5v } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
@@ -206,6 +207,25 @@ Round *down*: {{smooth.oneMore}} pixels would no longer fit in a {{smooth.rate}}
       answer: { value: numbers.forty.max.value, unit: "", tolerance: 0.002 },
       hint: "N_max = (1 / f − T_latch) / {{wordTime}}, then round down.",
       explanation: "1 / {{forty.rate}} = {{forty.period|dp=0}} = {{forty.period|unit=µs|dp=0}}. ({{forty.period|unit=µs|dp=0}} − {{sim.latchGap}}) / {{wordTime}} = {{forty.exact}}, rounded down to {{forty.max}} pixels.",
+    },
+    {
+      kind: "choice",
+      id: "pick-delay-trace",
+      ask: "pick-trace",
+      prompt:
+        "The same controller sends the same bits down twisted pair of four different lengths. Each trace below is the far end of one of them, drawn by the simulator on the same time axis. Which trace belongs to the run described?",
+      hint: "A cable delays the whole waveform: the longer the run, the later the first rising edge arrives.",
+      explanation: "Every edge arrives later on a longer run, by the same amount for rising and falling edges, so the widths the pixel measures survive. The run that is longest starts rising last.",
+      runs: [bufferRun("twisted-pair", 2, 100), bufferRun("twisted-pair", 10, 100), bufferRun("twisted-pair", 20, 100), bufferRun("twisted-pair", 30, 100)],
+    },
+    {
+      kind: "choice",
+      id: "predict-first-pixel",
+      ask: "predict",
+      prompt: "Before the simulator draws it: what will the far end of this run look like at the first pixel's data pin?",
+      hint: "Ask how the driver's level compares with the pixel's high threshold, and how the resistance in front of the cable compares with the cable's impedance.",
+      explanation: "The later lessons explain each shape: a driver below the threshold never gets there, a source far below the cable's impedance rings, one far above it climbs a staircase, and one near it gives a clean step.",
+      runs: [bufferRun("twisted-pair", 8, 0), bufferRun("twisted-pair", 8, 100), bufferRun("beside-ground", 8, 330), pinRun("beside-ground", 8, 100)],
     },
     {
       kind: "text",

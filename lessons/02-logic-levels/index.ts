@@ -1,3 +1,4 @@
+import { bufferRun, courseFixes, pinRun } from "../choice-check-runs";
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
 import { lessonNumbers } from "../numbers/lesson-numbers";
@@ -239,6 +240,25 @@ The workbench shows a controller with two outputs to choose from: its own 3.3 V 
       answer: { value: 0.8, unit: "V", tolerance: 0.02 },
       hint: "Mid-supply is VDD / 2.",
       explanation: "5.0 V / 2 = 2.5 V; 3.3 V − 2.5 V = 0.8 V. It is real for that one part, but no datasheet guarantees it: the next part may switch anywhere up to 3.5 V.",
+    },
+    {
+      kind: "choice",
+      id: "predict-driver-level",
+      ask: "predict",
+      prompt: "Before the simulator draws it: what will the far end of this run look like at the first pixel's data pin?",
+      hint: "Compare the driver's high level with the pixel's guaranteed high threshold first; only then ask what the cable does.",
+      explanation: "A 3.3 V output behind enough resistance settles at its own level, below a 5 V pixel's guaranteed high threshold. The 5 V buffer settles above it.",
+      runs: [pinRun("beside-ground", 5, 100), bufferRun("beside-ground", 5, 100), pinRun("three-core", 8, 47), bufferRun("twisted-pair", 8, 0)],
+    },
+    {
+      kind: "choice",
+      id: "diagnose-level",
+      ask: "diagnose",
+      prompt: "An installer sends this run to a 5 V pixel and the first pixels flicker. The far end, as the simulator draws it, is below. Which one change makes it work on every pixel that meets its datasheet?",
+      hint: "Look at where the far end settles during a long high, and compare it with the pixel's guaranteed high threshold.",
+      explanation: "When the settled level is below the guaranteed threshold, no resistor or cable can lift it: only a driver with a higher level can. When the level is fine but the edge climbs slowly, less resistance does it.",
+      runs: [pinRun("three-core", 10, 47), pinRun("beside-ground", 5, 220), pinRun("coax-75", 10, 47), bufferRun("beside-ground", 10, 220)],
+      fixes: courseFixes,
     },
   ],
   lab,

@@ -1,3 +1,4 @@
+import { bufferRun } from "../choice-check-runs";
 import { buffer5v } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
@@ -181,6 +182,24 @@ Back-powering works both ways: a strip whose supply is switched off can still be
       answer: { value: numbers.clamp.fitted.value, unit: "mA", tolerance: 0.03 },
       hint: "The voltage left after the diode drop, divided by the total series resistance.",
       explanation: "({{buffer.volts}} − {{textbook.diodeDrop}}) / ({{buffer.resistance}} + {{shortLead.series}}) = {{clamp.drive}} / {{shortLead.resistance}} ≈ {{clamp.fittedExact}}.",
+    },
+    {
+      kind: "choice",
+      id: "pick-edge-trace",
+      ask: "pick-trace",
+      prompt: "The same buffer drives the same cable through four different series resistors. Each trace below is the far end of one of them. Which trace belongs to the run described?",
+      hint: "More resistance in front of the cable's capacitance makes the edge slower; with very little, the far end overshoots.",
+      explanation: "The edge slows as the series resistance grows: almost none overshoots and rings, a moderate one gives a clean step, a large one climbs slowly.",
+      runs: [bufferRun("beside-ground", 5, 0), bufferRun("beside-ground", 5, 100), bufferRun("beside-ground", 5, 330), bufferRun("beside-ground", 5, 1000)],
+    },
+    {
+      kind: "choice",
+      id: "predict-edge",
+      ask: "predict",
+      prompt: "Before the simulator draws it: what will the far end of this run look like at the first pixel's data pin?",
+      hint: "Compare the source resistance (driver plus resistor) with the cable's impedance.",
+      explanation: "A source far below the cable's impedance overshoots and rings; one close to it gives a clean step; one far above it climbs in steps, one per round trip.",
+      runs: [bufferRun("beside-ground", 2, 0), bufferRun("beside-ground", 8, 100), bufferRun("beside-ground", 8, 330), bufferRun("three-core", 2, 330)],
     },
     {
       kind: "text",

@@ -1,3 +1,4 @@
+import { bufferRun, pinRun } from "../choice-check-runs";
 import { buffer5v } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
@@ -238,6 +239,24 @@ Your company's standard asks for a data cable whose characteristic impedance lie
       answer: { value: numbers.permittivityCheck.squared.value, unit: "", tolerance: 0.02 },
       hint: "Delay per metre = √ε_eff × {{textbook.vacuumDelay}}; solve for ε_eff.",
       explanation: "{{beside.delay|bare}} / {{textbook.vacuumDelay|bare}} = {{permittivityCheck.ratio}}; squared, ε_eff ≈ {{permittivityCheck.squared}}.",
+    },
+    {
+      kind: "choice",
+      id: "pick-cable-trace",
+      ask: "pick-trace",
+      prompt: "The same buffer and resistor drive the same length of four different cables. Each trace below is the far end of one of them. Which trace belongs to the run described?",
+      hint: "The cable's impedance decides how the source resistance compares with it, and its delay per metre when the edge arrives.",
+      explanation: "Against a high-impedance cable the source looks small and the far end overshoots; against a low-impedance cable the same source looks large and the far end climbs. The delay per metre moves the whole trace in time.",
+      runs: [bufferRun("lone-lead", 10, 47), bufferRun("beside-ground", 10, 220), bufferRun("three-core", 10, 47), bufferRun("coax-75", 10, 470)],
+    },
+    {
+      kind: "choice",
+      id: "predict-line",
+      ask: "predict",
+      prompt: "Before the simulator draws it: what will the far end of this run look like at the first pixel's data pin?",
+      hint: "Work out the launched step: the source resistance and the cable's impedance divide the driver's voltage.",
+      explanation: "A launched step near the full swing doubles at the open far end and overshoots; one near half the swing arrives as a clean step; a small one needs several round trips, a staircase.",
+      runs: [bufferRun("lone-lead", 10, 0), bufferRun("twisted-pair", 10, 82), bufferRun("coax-75", 10, 330), pinRun("twisted-pair", 10, 100)],
     },
   ],
   lab,

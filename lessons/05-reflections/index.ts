@@ -1,3 +1,4 @@
+import { bufferRun, courseFixes, pinRun } from "../choice-check-runs";
 import { OUTCOME_WORDS } from "@/lib/sim";
 import { buffer5v, controllerPin3v3 } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
@@ -266,6 +267,25 @@ Everything here is fixed by two numbers you control: the cable (which sets Z0) a
       answer: { value: numbers.case3.far.n2.value, unit: "V", tolerance: 0.02 },
       hint: "V_far(n) = V × (1 − Γ_s^n) with n = 2.",
       explanation: "{{case3.gamma}}² = {{case3.squared}}; {{buffer.volts}} × (1 − {{case3.squared}}) ≈ {{case3.far.n2}}, just above a 5 V pixel's {{pixel.high}} threshold.",
+    },
+    {
+      kind: "choice",
+      id: "predict-reflection",
+      ask: "predict",
+      prompt: "Before the simulator draws it: what will the far end of this run look like at the first pixel's data pin?",
+      hint: "Work out the sign of the source's reflection coefficient: (R_source − Z0) / (R_source + Z0).",
+      explanation: "A negative source coefficient alternates the reflections: ringing. A positive one adds them in the same direction: a staircase. Near zero, the first arrival is the settled level.",
+      runs: [bufferRun("beside-ground", 10, 0), bufferRun("beside-ground", 10, 82), bufferRun("beside-ground", 10, 330), bufferRun("three-core", 10, 220)],
+    },
+    {
+      kind: "choice",
+      id: "diagnose-reflection",
+      ask: "diagnose",
+      prompt: "This run flickers on site. The far end, as the simulator draws it, is below. Which one change makes it work on every pixel that meets its datasheet?",
+      hint: "Name the shape first: a staircase that arrives too late, or a level that never reaches the threshold.",
+      explanation: "A staircase comes from a source far above the cable's impedance: less resistance brings the first step up. A level below the threshold needs a driver with a higher level.",
+      runs: [bufferRun("beside-ground", 20, 220), bufferRun("three-core", 10, 220), pinRun("lone-lead", 10, 47), bufferRun("coax-75", 20, 220)],
+      fixes: courseFixes,
     },
     {
       kind: "text",

@@ -1,3 +1,4 @@
+import { bufferRun, courseFixes, pinRun } from "../choice-check-runs";
 import { controllerPin3v3 } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
@@ -193,6 +194,25 @@ On the workbench the limit lies lower still, because the falling staircase also 
       answer: { value: numbers.threeCoreRun.fast.crossing.value, unit: "ns", tolerance: 0.02 },
       hint: "The nth arrival comes (2n − 1) one-way delays after the switch.",
       explanation: "One way: {{threeCoreRun.length}} × {{threeCore.delay}} = {{threeCoreRun.delay}}. Arrival {{threeCoreRun.fast.arrival}}: {{threeCoreRun.fast.factor}} × {{threeCoreRun.delay}} ≈ {{threeCoreRun.fast.crossing}}. The 0 bit's fall reaches the far end at {{sim.zeroHigh|unit=ns|dp=0}} + {{threeCoreRun.delay}} ≈ {{threeCoreRun.fall}}, so the pixel sees a pulse of barely {{threeCoreRun.fast.lead}} before the far end turns down: shorter than the {{sim.minPulse|unit=ns|dp=0}} it needs to count a pulse.",
+    },
+    {
+      kind: "choice",
+      id: "pick-termination-trace",
+      ask: "pick-trace",
+      prompt: "The same buffer drives the same run of twisted pair through three different series resistors. Each trace below is the far end of one of them. Which trace belongs to the run described?",
+      hint: "The matched resistor makes the source equal the cable's impedance: the far end steps once to the full level.",
+      explanation: "Below the match the far end overshoots and rings; at the match it steps once; well above it, it climbs a staircase.",
+      runs: [bufferRun("twisted-pair", 15, 0), bufferRun("twisted-pair", 15, 82), bufferRun("twisted-pair", 15, 330)],
+    },
+    {
+      kind: "choice",
+      id: "diagnose-termination",
+      ask: "diagnose",
+      prompt: "This run flickers on site. The far end, as the simulator draws it, is below. Which one change makes it work on every pixel that meets its datasheet?",
+      hint: "Compare the source resistance with the cable's impedance, and the settled level with the threshold.",
+      explanation: "A resistor far above the match makes a staircase: a third of it comes near the match. A 3.3 V level below the threshold is fixed only by a driver with a higher level.",
+      runs: [bufferRun("beside-ground", 20, 220), bufferRun("lone-lead", 20, 1000), pinRun("three-core", 10, 47), bufferRun("three-core", 20, 220)],
+      fixes: courseFixes,
     },
     {
       kind: "text",

@@ -1,3 +1,4 @@
+import { bufferRun, courseFixes, pinRun } from "../choice-check-runs";
 import { buffer5v } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
@@ -118,6 +119,25 @@ The cure is a **short ground**: the spring-clip ground tip supplied with most pr
       answer: { value: numbers.loading.loneProbe.value, unit: "ns", tolerance: 0.03 },
       hint: "τ = Z0 × C with C the total at the far end; rise ≈ {{textbook.ln9}} × τ.",
       explanation: "τ = {{lone.z0}} × {{probe.withPixel}} = {{loading.loneTau}}; {{textbook.ln9}} × {{loading.loneTau}} ≈ {{loading.loneProbe}}.",
+    },
+    {
+      kind: "choice",
+      id: "predict-scope",
+      ask: "predict",
+      prompt: "You are about to probe the first pixel's data pin of this run. Before the simulator draws it: what shape do you expect on the scope?",
+      hint: "Predict from the run's numbers before you look: the driver's level against the threshold, the source resistance against the cable's impedance.",
+      explanation: "A prediction made before probing tells a fault in the run from a fault in the measurement: when the scope disagrees with it, check the probe's ground lead first.",
+      runs: [bufferRun("lone-lead", 8, 0), bufferRun("twisted-pair", 15, 100), bufferRun("beside-ground", 15, 330), pinRun("twisted-pair", 10, 100)],
+    },
+    {
+      kind: "choice",
+      id: "diagnose-bench",
+      ask: "diagnose",
+      prompt: "The scope on site agrees with the simulator's far end below, and the pixels flicker. Which one change makes it work on every pixel that meets its datasheet?",
+      hint: "Name the shape first, then the change that addresses its cause.",
+      explanation: "A staircase that arrives too late comes from too much resistance; a settled level below the threshold from the driver. Each has one change that addresses it.",
+      runs: [bufferRun("beside-ground", 10, 220), pinRun("beside-ground", 5, 220), bufferRun("three-core", 20, 220), pinRun("lone-lead", 10, 47)],
+      fixes: courseFixes,
     },
     {
       kind: "text",
