@@ -28,7 +28,7 @@ export function simulateCheckRun(run: CheckRun): SimResult {
   const key = JSON.stringify(run);
   const known = runs.get(key);
   if (known) return known;
-  const result = simulateRun(checkSimInput(run), { grid: { finestInterval: 0, maxPoints: 800 } });
+  const result = simulateRun(checkSimInput(run), { grid: { finestInterval: 0, maxPoints: 4000 } });
   if (runs.size >= KEPT_RUNS) runs.delete(runs.keys().next().value!);
   runs.set(key, result);
   return result;

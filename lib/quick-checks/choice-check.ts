@@ -14,8 +14,8 @@ export type Fix = (typeof FIXES)[number];
 
 export type ChoiceOption = { key: string; label: string };
 
-/** A far-end trace to draw: the simulator's samples and the run's line delay. */
-export type DrawnTrace = { key: string; label: string; time: number[]; farEnd: number[] };
+/** A far-end trace to draw: the simulator's samples and when the first 1 bit left the driver (s). */
+export type DrawnTrace = { key: string; label: string; time: number[]; farEnd: number[]; firstOneStart: number };
 
 /** One learner's copy of a choice check: what the page shows before an answer, nothing that tells the right option. */
 export type PresentedChoiceCheck = {
@@ -30,7 +30,8 @@ export type PresentedChoiceCheck = {
 };
 
 function drawn(key: string, label: string, result: SimResult): DrawnTrace {
-  return { key, label, time: result.time, farEnd: result.farEnd };
+  const firstOne = result.bits.find((bit) => bit.sent === 1) ?? result.bits[0];
+  return { key, label, time: result.time, farEnd: result.farEnd, firstOneStart: firstOne.start };
 }
 
 /** The run the seed gives this learner: for pick-trace the one described, otherwise the one asked about. */
