@@ -210,7 +210,7 @@ On the workbench the limit lies lower still, because the falling staircase also 
       ask: "diagnose",
       prompt: "This run flickers on site. The far end, as the simulator draws it, is below. Which one change makes it work on every pixel that meets its datasheet?",
       hint: "Compare the source resistance with the cable's impedance, and the settled level with the threshold.",
-      explanation: "A resistor far above the match makes a staircase: a third of it comes near the match. A 3.3 V level below the threshold is fixed only by a driver with a higher level.",
+      explanation: "A resistor far above the match makes a staircase: a third of it comes near the match. A controller pin whose level stays below the threshold is fixed only by a driver with a higher level.",
       runs: [bufferRun("beside-ground", 20, 220), bufferRun("lone-lead", 20, 1000), pinRun("three-core", 10, 47), bufferRun("three-core", 20, 220)],
       fixes: courseFixes,
     },

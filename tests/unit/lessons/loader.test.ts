@@ -124,8 +124,13 @@ describe("validateLesson", () => {
   });
 
   it("refuses a lesson with fewer than three quick checks", () => {
-    const error = contentErrorOf(() => validateLesson(brokenSource(0, (lesson) => (lesson.blocks = lesson.blocks.filter((b) => b.kind !== "check")))));
-    expect(error.message).toMatch(/blocks: a lesson needs 3 to 6 quick checks, found 0/);
+    const error = contentErrorOf(() => validateLesson(brokenSource(0, (lesson) => (lesson.blocks = lesson.blocks.filter((b) => b.kind !== "check" && b.kind !== "choice")))));
+    expect(error.message).toMatch(/blocks: a lesson needs 3 to 8 quick checks, found 0/);
+  });
+
+  it("refuses a lesson with fewer than two checks that are not numeric", () => {
+    const error = contentErrorOf(() => validateLesson(brokenSource(0, (lesson) => (lesson.blocks = lesson.blocks.filter((b) => b.kind !== "choice")))));
+    expect(error.message).toMatch(/blocks: a lesson needs at least 2 checks that are not numeric, found 0/);
   });
 
   it("refuses an unknown figure id", () => {
