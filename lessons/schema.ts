@@ -432,7 +432,7 @@ export const lessonSchema = z
   });
 
 /** A numeric check as served: the text and answer of each given, printed with the given's numbers as `given.…`. */
-export type CheckVariant = { prompt: string; hint: string; explanation: string; answer: NumericAnswer };
+export type CheckVariant = { prompt: string; hint: string; explanation: string; answer: NumericAnswer; given: LessonNumbers };
 
 function resolveCheck(block: z.infer<typeof checkBlockSchema>, numbers: LessonNumbers, report: (problem: TextProblem) => void, path: (string | number)[]) {
   const { givens, answer, ...rest } = block;
@@ -440,9 +440,10 @@ function resolveCheck(block: z.infer<typeof checkBlockSchema>, numbers: LessonNu
   const variants: CheckVariant[] = givens
     ? givens.map((given, g) => {
         const scoped = { ...numbers, ...Object.fromEntries(Object.entries(given.numbers).map(([name, value]) => [`given.${name}`, value])) };
-        return { ...resolveText(texts, scoped, ({ path: at, message }) => report({ path: [...path, ...at], message: `given ${g}: ${message}` })), answer: given.answer };
+        const resolved = resolveText(texts, scoped, ({ path: at, message }) => report({ path: [...path, ...at], message: `given ${g}: ${message}` }));
+        return { ...resolved, answer: given.answer, given: given.numbers };
       })
-    : [{ ...resolveText(texts, numbers, ({ path: at, message }) => report({ path: [...path, ...at], message })), answer: answer! }];
+    : [{ ...resolveText(texts, numbers, ({ path: at, message }) => report({ path: [...path, ...at], message })), answer: answer!, given: {} }];
   return { kind: block.kind, id: block.id, ...variants[0], variants };
 }
 
