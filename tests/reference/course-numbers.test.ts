@@ -93,11 +93,11 @@ const formulas: Record<string, Formula> = {
   "timing-budget/frame-time": { source: "T = N·24·T_bit + T_latch", value: () => frame(360, 300e-6) },
   "timing-budget/refresh-rate": { source: "f = 1 / T_frame", value: () => 1 / frame(360, 300e-6) },
 
-  "logic-levels/high-threshold-5v": { source: "simulator default high threshold × VDD", value: () => HIGH * 5 },
+  "logic-levels/high-threshold-5v": { source: "simulator default high threshold × VDD", value: (given) => HIGH * given("supply") },
   "logic-levels/margin-sagged-supply": { source: "NM_high = V_OH − 0.7·VDD", value: () => 3.3 - HIGH * 4.5 },
-  "logic-levels/shifter-input-margin": { source: "JEDEC JESD8 TTL-compatible V_IH = 2.0 V", value: () => 3.3 - TTL_HIGH },
+  "logic-levels/shifter-input-margin": { source: "JEDEC JESD8 TTL-compatible V_IH = 2.0 V", value: (given) => given("high") - TTL_HIGH },
   "logic-levels/ground-offset": { source: "Ohm's law; 20 AWG from ASTM B258 + IEC 60028", value: () => 4 * 2.5 * awgResistancePerMetre(20) },
-  "logic-levels/mid-supply-margin": { source: "V_OH − VDD/2", value: () => 3.3 - 5 / 2 },
+  "logic-levels/mid-supply-margin": { source: "V_OH − VDD/2", value: (given) => given("high") - 5 / 2 },
   "thresholds/direct-high-margin": { source: "NM_high = V_OH − 0.7·VDD", value: () => 3.3 - HIGH * 5 },
   "thresholds/shifted-high-margin": { source: "NM_high = V_OH − 0.7·VDD", value: () => 5 - HIGH * 5 },
 
