@@ -4,7 +4,7 @@ import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
-import { numbers } from "./numbers";
+import { checkGivens, numbers } from "./numbers";
 
 const { sim, pixel } = sharedNumbers;
 
@@ -80,18 +80,18 @@ The {{buffer.edge}} edge of the buffer has become a {{shortLead.rise}} edge at t
     {
       kind: "check",
       id: "time-constant",
-      prompt: "A {{buffer.resistance}} driver feeds {{shortLead.capacitance}} through a {{shortLead.series}} series resistor. What is the time constant τ?",
-      answer: { value: numbers.shortLead.tau.value, unit: "ns", tolerance: 0.02 },
+      prompt: "A {{buffer.resistance}} driver feeds {{given.capacitance}} through a {{given.series}} series resistor. What is the time constant τ?",
+      givens: checkGivens.timeConstant.map((given) => ({ numbers: given, answer: { value: given.tau.value, unit: "ns", tolerance: 0.02 } })),
       hint: "Add the resistances in series, then τ = R × C.",
-      explanation: "R = {{buffer.resistance}} + {{shortLead.series}} = {{shortLead.resistance}}. τ = {{shortLead.resistance}} × {{shortLead.capacitance|unit=F|exp=-12|dp=0}} = {{shortLead.tau|unit=s|exp=-9}} = {{shortLead.tau}}.",
+      explanation: "R = {{buffer.resistance}} + {{given.series}} = {{given.resistance}}. τ = {{given.resistance}} × {{given.capacitance|unit=F|exp=-12|dp=0}} = {{given.tau|unit=s|exp=-9}} = {{given.tau}}.",
     },
     {
       kind: "check",
       id: "rise-time",
-      prompt: "What 10–90 % rise time does that time constant give?",
-      answer: { value: numbers.shortLead.rise.value, unit: "ns", tolerance: 0.03 },
+      prompt: "Another lead's RC has a time constant of {{given.tau}}. What 10–90 % rise time does it give?",
+      givens: checkGivens.riseTime.map((given) => ({ numbers: given, answer: { value: given.rise.value, unit: "ns", tolerance: 0.03 } })),
       hint: "t_rise = τ × ln 9 ≈ {{textbook.ln9}} × τ.",
-      explanation: "{{textbook.ln9}} × {{shortLead.tau}} ≈ {{shortLead.rise}} (exactly, ln 9 × {{shortLead.tau}} = {{shortLead.rise|dp=1}}).",
+      explanation: "{{textbook.ln9}} × {{given.tau}} ≈ {{given.rise}} (exactly, ln 9 × {{given.tau}} = {{given.rise|dp=1}}).",
     },
     {
       kind: "text",
@@ -178,10 +178,10 @@ Back-powering works both ways: a strip whose supply is switched off can still be
       kind: "check",
       id: "clamp-current",
       prompt:
-        "A 5 V driver ({{buffer.resistance}}) is connected through {{shortLead.series}} to a pixel whose supply is off. Taking the clamp diode's forward drop as {{textbook.diodeDrop}}, about how much current flows into the pixel's input?",
-      answer: { value: numbers.clamp.fitted.value, unit: "mA", tolerance: 0.03 },
+        "A 5 V driver ({{buffer.resistance}}) is connected through {{given.series}} to a pixel whose supply is off. Taking the clamp diode's forward drop as {{textbook.diodeDrop}}, about how much current flows into the pixel's input?",
+      givens: checkGivens.clampCurrent.map((given) => ({ numbers: given, answer: { value: given.current.value, unit: "mA", tolerance: 0.03 } })),
       hint: "The voltage left after the diode drop, divided by the total series resistance.",
-      explanation: "({{buffer.volts}} − {{textbook.diodeDrop}}) / ({{buffer.resistance}} + {{shortLead.series}}) = {{clamp.drive}} / {{shortLead.resistance}} ≈ {{clamp.fittedExact}}.",
+      explanation: "({{buffer.volts}} − {{textbook.diodeDrop}}) / ({{buffer.resistance}} + {{given.series}}) = {{clamp.drive}} / {{given.resistance}} ≈ {{given.current}}.",
     },
     {
       kind: "choice",

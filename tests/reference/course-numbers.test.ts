@@ -102,13 +102,13 @@ const formulas: Record<string, Formula> = {
   "thresholds/shifted-high-margin": { source: "NM_high = V_OH − 0.7·VDD", value: () => 5 - HIGH * 5 },
 
   "edges/time-constant": {
-    source: "τ = R·C; C from the catalogue (2 m) plus the simulator's default input capacitance",
-    value: () => 350 * (2 * beside.perMetre.capacitance + INPUT_C),
+    source: "τ = R·C; C from the catalogue plus the simulator's default input capacitance",
+    value: (given) => (20 + given("series")) * (given("length") * beside.perMetre.capacitance + INPUT_C),
   },
-  "edges/rise-time": { source: "RC charge: t(10→90 %) = τ·ln 9", value: () => LN9 * 350 * (2 * beside.perMetre.capacitance + INPUT_C) },
+  "edges/rise-time": { source: "RC charge: t(10→90 %) = τ·ln 9", value: (given) => LN9 * given("tau") },
   "edges/cable-capacitance": { source: "C′·length + input capacitance", value: () => 4 * beside.perMetre.capacitance + INPUT_C },
   "edges/largest-resistance": { source: "R = t_rise / (C·ln 9)", value: () => 100e-9 / (LN9 * (4 * beside.perMetre.capacitance + INPUT_C)) },
-  "edges/clamp-current": { source: "Ohm's law with a 0.7 V silicon diode drop (textbook)", value: () => (5 - DIODE_DROP) / (20 + 330) },
+  "edges/clamp-current": { source: "Ohm's law with a 0.7 V silicon diode drop (textbook)", value: (given) => (5 - DIODE_DROP) / (20 + given("series")) },
 
   "transmission-line/z0-from-per-metre": { source: "Z0 = √(L′/C′)", value: () => Math.sqrt(520e-9 / 52e-12) },
   "transmission-line/delay-per-metre": { source: "delay = √(L′·C′)", value: () => Math.sqrt(520e-9 * 52e-12) },
