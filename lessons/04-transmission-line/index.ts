@@ -4,7 +4,7 @@ import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
-import { numbers } from "./numbers";
+import { checkGivens, numbers } from "./numbers";
 
 export const lesson = {
   slug: "transmission-line",
@@ -177,10 +177,10 @@ Compared with data beside ground, the second return raised C′ by a third and c
       kind: "check",
       id: "launched-step",
       prompt:
-        "A 5 V driver with {{buffer.resistance}} of output resistance drives a {{beside.z0}} line through a {{launch.series}} resistor. How large is the step it launches onto the line?",
-      answer: { value: numbers.launch.step.value, unit: "V", tolerance: 0.02 },
+        "A 5 V driver with {{buffer.resistance}} of output resistance drives a {{beside.z0}} line through a {{given.series}} resistor. How large is the step it launches onto the line?",
+      givens: checkGivens.launchedStep.map((given) => ({ numbers: given, answer: { value: given.step.value, unit: "V", tolerance: 0.02 } })),
       hint: "Until anything returns from the far end the line is a {{beside.z0}} resistor: use the voltage divider.",
-      explanation: "V = {{buffer.volts}} × {{beside.z0|bare}} / ({{buffer.resistance|bare}} + {{launch.series|bare}} + {{beside.z0|bare}}) = {{buffer.volts}} × {{beside.z0|bare}} / {{launch.total|bare}} ≈ {{launch.step}}.",
+      explanation: "V = {{buffer.volts}} × {{beside.z0|bare}} / ({{buffer.resistance|bare}} + {{given.series|bare}} + {{beside.z0|bare}}) = {{buffer.volts}} × {{beside.z0|bare}} / {{given.total|bare}} ≈ {{given.step}}.",
     },
     {
       kind: "text",
@@ -226,19 +226,19 @@ Your company's standard asks for a data cable whose characteristic impedance lie
       kind: "check",
       id: "round-trip-length",
       prompt:
-        "A 3.3 V controller pin switches in {{pin.edge}}. At what length of twisted pair ({{twisted.delay}}) does the round trip equal the rise time?",
-      answer: { value: numbers.pinOnTwisted.roundTripLength.value, unit: "m", tolerance: 0.02 },
-      hint: "Round trip = 2 × length × delay per metre; set it equal to {{pin.edge}}.",
-      explanation: "Length = {{pin.edge}} ÷ (2 × {{twisted.delay}}) ≈ {{pinOnTwisted.roundTripLength}}. Any longer and reflections come back after the edge has finished, as separate steps.",
+        "A controller pin switches in {{given.edge}}. At what length of twisted pair ({{twisted.delay}}) does the round trip equal the rise time?",
+      givens: checkGivens.roundTripLength.map((given) => ({ numbers: given, answer: { value: given.length.value, unit: "m", tolerance: 0.02 } })),
+      hint: "Round trip = 2 × length × delay per metre; set it equal to {{given.edge}}.",
+      explanation: "Length = {{given.edge}} ÷ (2 × {{twisted.delay}}) ≈ {{given.length}}. Any longer and reflections come back after the edge has finished, as separate steps.",
     },
     {
       kind: "check",
       id: "effective-permittivity",
       prompt:
-        "A cable's delay is {{beside.delay}}. Light in vacuum takes {{textbook.vacuumDelay|bare}} ns per metre. What is the cable's effective relative permittivity? (A plain number.)",
-      answer: { value: numbers.permittivityCheck.squared.value, unit: "", tolerance: 0.02 },
+        "A cable's delay is {{given.delay}}. Light in vacuum takes {{textbook.vacuumDelay|bare}} ns per metre. What is the cable's effective relative permittivity? (A plain number.)",
+      givens: checkGivens.permittivity.map((given) => ({ numbers: given, answer: { value: given.squared.value, unit: "", tolerance: 0.02 } })),
       hint: "Delay per metre = √ε_eff × {{textbook.vacuumDelay}}; solve for ε_eff.",
-      explanation: "{{beside.delay|bare}} / {{textbook.vacuumDelay|bare}} = {{permittivityCheck.ratio}}; squared, ε_eff ≈ {{permittivityCheck.squared}}.",
+      explanation: "{{given.delay|bare}} / {{textbook.vacuumDelay|bare}} = {{given.ratio}}; squared, ε_eff ≈ {{given.squared}}.",
     },
     {
       kind: "choice",

@@ -113,14 +113,14 @@ const formulas: Record<string, Formula> = {
   "transmission-line/z0-from-per-metre": { source: "Z0 = √(L′/C′)", value: () => Math.sqrt(520e-9 / 52e-12) },
   "transmission-line/delay-per-metre": { source: "delay = √(L′·C′)", value: () => Math.sqrt(520e-9 * 52e-12) },
   "transmission-line/run-delay": { source: "length × catalogue delay per metre", value: () => 12 * beside.delayPerMetre },
-  "transmission-line/launched-step": { source: "voltage divider with Z0 (catalogue)", value: () => (5 * beside.z0) / (53 + beside.z0) },
+  "transmission-line/launched-step": { source: "voltage divider with Z0 (catalogue)", value: (given) => (5 * beside.z0) / (20 + given("series") + beside.z0) },
   "transmission-line/round-trip-length": {
-    source: "2·length·delay = rise time; controller pin edge (lessons/drivers.ts), catalogue delay",
-    value: () => controllerPin3v3.edgeTime / (2 * twisted.delayPerMetre),
+    source: "2·length·delay = rise time; catalogue delay",
+    value: (given) => given("edge") / (2 * twisted.delayPerMetre),
   },
   "transmission-line/effective-permittivity": {
     source: "delay = √ε_eff / c",
-    value: () => (beside.delayPerMetre * SPEED_OF_LIGHT) ** 2,
+    value: (given) => (given("delay") * SPEED_OF_LIGHT) ** 2,
   },
   "cable-spec/capacitance-10m": { source: "C′·length (catalogue)", value: () => 10 * beside.perMetre.capacitance },
   "cable-spec/round-trip-twisted": { source: "2 · length · delay per metre (catalogue)", value: () => 2 * 10 * twisted.delayPerMetre },
