@@ -125,14 +125,14 @@ const formulas: Record<string, Formula> = {
   "cable-spec/capacitance-10m": { source: "C′·length (catalogue)", value: () => 10 * beside.perMetre.capacitance },
   "cable-spec/round-trip-twisted": { source: "2 · length · delay per metre (catalogue)", value: () => 2 * 10 * twisted.delayPerMetre },
 
-  "reflections/source-coefficient": { source: "Γ = (R − Z0)/(R + Z0)", value: () => gamma(53, beside.z0) },
-  "reflections/first-arrival": { source: "V_far(1) = V·(1 − Γs)", value: () => 5 * (1 - gamma(53, beside.z0)) },
-  "reflections/ringing-period": { source: "four one-way delays (catalogue)", value: () => 4 * 10 * lone.delayPerMetre },
+  "reflections/source-coefficient": { source: "Γ = (R − Z0)/(R + Z0)", value: (given) => gamma(20 + given("series"), beside.z0) },
+  "reflections/first-arrival": { source: "V_far(1) = V·(1 − Γs)", value: (given) => 5 * (1 - gamma(20 + given("series"), beside.z0)) },
+  "reflections/ringing-period": { source: "four one-way delays (catalogue)", value: (given) => 4 * given("length") * lone.delayPerMetre },
   "reflections/settling-time": {
     source: "first n with |Γs|^n < 1 %, arriving at (2n − 1)·T_d (catalogue delay, controller pin)",
-    value: () => (2 * settlingArrival(gamma(CASE4_SOURCE, lone.z0), 0.01) - 1) * CASE4_DELAY,
+    value: (given) => (2 * settlingArrival(gamma(controllerPin3v3.outputResistance + given("series"), lone.z0), 0.01) - 1) * CASE4_DELAY,
   },
-  "reflections/staircase-second-step": { source: "V_far(n) = V·(1 − Γs^n)", value: () => 5 * (1 - gamma(290, beside.z0) ** 2) },
+  "reflections/staircase-second-step": { source: "V_far(n) = V·(1 − Γs^n)", value: (given) => 5 * (1 - gamma(20 + given("series"), beside.z0) ** 2) },
 
   "series-termination/matching-resistor": { source: "R_s = Z0 − R_out (catalogue Z0)", value: () => lone.z0 - 30 },
   "series-termination/first-arrival-3v3": { source: "V_far(1) = 2·V·Z0/(R_src + Z0)", value: () => (2 * 3.3 * lone.z0) / (280 + lone.z0) },
