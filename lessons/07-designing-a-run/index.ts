@@ -5,7 +5,7 @@ import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { bench } from "./bench";
 import { lab } from "./lab";
-import { numbers } from "./numbers";
+import { checkGivens, numbers } from "./numbers";
 
 export const lesson = {
   slug: "designing-a-run",
@@ -156,10 +156,10 @@ Low-voltage DC at high current can start fires. A conductor too thin for its cur
     {
       kind: "check",
       id: "supply-drop",
-      prompt: "A 5 V strip draws {{supply.current}} through {{supply.length}} of two-core {{supply.gauge}} AWG cable ({{supply.perMetre}} per conductor). What is the voltage drop in the cable?",
-      answer: { value: numbers.supply.drop.value, unit: "V", tolerance: 0.02 },
+      prompt: "A 5 V strip draws {{given.current}} through {{given.length}} of two-core {{supply.gauge}} AWG cable ({{supply.perMetre}} per conductor). What is the voltage drop in the cable?",
+      givens: checkGivens.supplyDrop.map((given) => ({ numbers: given, answer: { value: given.drop.value, unit: "V", tolerance: 0.02 } })),
       hint: "The current flows out on one conductor and back on the other: the loop is twice the length.",
-      explanation: "R = 2 × {{supply.length}} × {{supply.perMetreInOhms}} = {{supply.loop}}; V = {{supply.current}} × {{supply.loop}} ≈ {{supply.drop}}, far too much for a 5 V strip.",
+      explanation: "R = 2 × {{given.length}} × {{supply.perMetreInOhms}} = {{given.loop}}; V = {{given.current}} × {{given.loop}} ≈ {{given.drop}}, a large share of a 5 V strip's supply.",
     },
     {
       kind: "text",

@@ -5,7 +5,7 @@ import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { bench } from "./bench";
 import { lab } from "./lab";
-import { numbers } from "./numbers";
+import { checkGivens, numbers } from "./numbers";
 
 export const lesson = {
   slug: "on-the-bench",
@@ -47,18 +47,18 @@ The scope's **sample rate** matters too: it must take several samples during the
     {
       kind: "check",
       id: "scope-rise-time",
-      prompt: "Using t_rise ≈ {{scopeFactor}} / bandwidth, what is the rise time of a {{scope100.bandwidth}} oscilloscope?",
-      answer: { value: numbers.scope100.rise.value, unit: "ns", tolerance: 0.02 },
+      prompt: "Using t_rise ≈ {{scopeFactor}} / bandwidth, what is the rise time of a {{given.bandwidth}} oscilloscope?",
+      givens: checkGivens.scopeRise.map((given) => ({ numbers: given, answer: { value: given.rise.value, unit: "ns", tolerance: 0.02 } })),
       hint: "Divide {{scopeFactor}} by the bandwidth in hertz.",
-      explanation: "{{scopeFactor}} / {{scope100.bandwidth|unit=Hz|exp=6}} = {{scope100.rise|unit=s|exp=-9}} = {{scope100.rise}}.",
+      explanation: "{{scopeFactor}} / {{given.bandwidth|unit=Hz|exp=6}} = {{given.rise|unit=s|exp=-9}} = {{given.rise}}.",
     },
     {
       kind: "check",
       id: "measured-rise",
-      prompt: "A true {{trueEdge}} edge is viewed on that {{scope100.bandwidth}} scope ({{scope100.rise}}). About what rise time does the screen show?",
-      answer: { value: numbers.scope100.seen.value, unit: "ns", tolerance: 0.02 },
+      prompt: "A true {{trueEdge}} edge is viewed on a {{given.bandwidth}} scope ({{given.rise}}). About what rise time does the screen show?",
+      givens: checkGivens.measuredRise.map((given) => ({ numbers: given, answer: { value: given.seen.value, unit: "ns", tolerance: 0.02 } })),
       hint: "Root sum of squares: √(t_signal² + t_scope²).",
-      explanation: "√({{trueEdge|bare}}² + {{scope100.rise|bare}}²) ns = √{{scope100.sumOfSquares}} ns ≈ {{scope100.seen}}.",
+      explanation: "√({{trueEdge|bare}}² + {{given.rise|bare}}²) ns = √{{given.sumOfSquares}} ns ≈ {{given.seen}}.",
     },
     {
       kind: "text",
@@ -106,19 +106,19 @@ The cure is a **short ground**: the spring-clip ground tip supplied with most pr
     {
       kind: "check",
       id: "ground-lead-ring",
-      prompt: "A probe's {{probe.capacitance}} tip capacitance and a {{ground.inductance}} ground lead form a resonant circuit. At what frequency does it ring?",
-      answer: { value: numbers.ground.frequency.value, unit: "MHz", tolerance: 0.02 },
+      prompt: "A probe's {{probe.capacitance}} tip capacitance and a {{given.inductance}} ground lead form a resonant circuit. At what frequency does it ring?",
+      givens: checkGivens.groundRing.map((given) => ({ numbers: given, answer: { value: given.frequency.value, unit: "MHz", tolerance: 0.02 } })),
       hint: "f = 1 / (2π × √(L × C)), in henries and farads.",
-      explanation: "√({{ground.inductance|unit=H|exp=-9|bare}} × {{probe.capacitance|unit=F|exp=-12|bare}}) = {{ground.rootLC|unit=s|exp=-9}}; 2π × that = {{ground.period|unit=s|exp=-9}}; 1 / {{ground.period}} ≈ {{ground.frequency}}.",
+      explanation: "√({{given.inductance|unit=H|exp=-9|bare}} × {{probe.capacitance|unit=F|exp=-12|bare}}) = {{given.rootLC|unit=s|exp=-9}}; 2π × that = {{given.period|unit=s|exp=-9}}; 1 / {{given.period}} ≈ {{given.frequency}}.",
     },
     {
       kind: "check",
       id: "probe-loading",
       prompt:
-        "At the far end of a lone lead (Z0 ≈ {{lone.z0}}), the pixel's {{sim.inputCapacitance}} and a probe's {{probe.capacitance}} charge through Z0. About what 10–90 % rise time does that capacitance add?",
-      answer: { value: numbers.loading.loneProbe.value, unit: "ns", tolerance: 0.03 },
+        "At the far end of a lone lead (Z0 ≈ {{lone.z0}}), the pixel's {{sim.inputCapacitance}} and a probe's {{given.capacitance}} charge through Z0. About what 10–90 % rise time does that capacitance add?",
+      givens: checkGivens.probeLoading.map((given) => ({ numbers: given, answer: { value: given.rise.value, unit: "ns", tolerance: 0.03 } })),
       hint: "τ = Z0 × C with C the total at the far end; rise ≈ {{textbook.ln9}} × τ.",
-      explanation: "τ = {{lone.z0}} × {{probe.withPixel}} = {{loading.loneTau}}; {{textbook.ln9}} × {{loading.loneTau}} ≈ {{loading.loneProbe}}.",
+      explanation: "τ = {{lone.z0}} × {{given.withPixel}} = {{given.tau}}; {{textbook.ln9}} × {{given.tau}} ≈ {{given.rise}}.",
     },
     {
       kind: "choice",

@@ -135,25 +135,34 @@ const formulas: Record<string, Formula> = {
   "reflections/staircase-second-step": { source: "V_far(n) = V·(1 − Γs^n)", value: (given) => 5 * (1 - gamma(20 + given("series"), beside.z0) ** 2) },
 
   "series-termination/matching-resistor": { source: "R_s = Z0 − R_out (catalogue Z0)", value: () => lone.z0 - 30 },
-  "series-termination/first-arrival-3v3": { source: "V_far(1) = 2·V·Z0/(R_src + Z0)", value: () => (2 * 3.3 * lone.z0) / (280 + lone.z0) },
+  "series-termination/first-arrival-3v3": { source: "V_far(1) = 2·V·Z0/(R_src + Z0)", value: (given) => (2 * 3.3 * lone.z0) / (30 + given("series") + lone.z0) },
   "series-termination/beside-ground-limit": {
     source: "first arrival 0.3 V above the highest typical rise level: R_src = Z0·(2V/(V_rise + m) − 1)",
     value: () => firstArrivalLimit(beside.z0, 3.3, TYPICAL_RISE, 0.3) - 30,
   },
-  "series-termination/staircase-arrival": { source: "(2n − 1)·T_d with n = 3 (catalogue delay)", value: () => 5 * 15 * threeCore.delayPerMetre },
+  "series-termination/staircase-arrival": {
+    source: "(2n − 1)·T_d, n the first arrival V·(1 − Γs^n) above 0.7·VDD (catalogue delay)",
+    value: (given) => {
+      const n = Math.ceil(Math.log(1 - HIGH) / Math.log(gamma(20 + given("series"), threeCore.z0)));
+      return (2 * n - 1) * 15 * threeCore.delayPerMetre;
+    },
+  },
 
   "designing-a-run/twisted-pair-limit": {
     source: "first arrival 0.3 V above the highest typical rise level",
     value: () => firstArrivalLimit(twisted.z0, 3.3, TYPICAL_RISE, 0.3) - 30,
   },
   "designing-a-run/resistor-tolerance": { source: "IEC 60063: E24 with ±5 %", value: () => 68 * 1.05 },
-  "designing-a-run/supply-drop": { source: "Ohm's law over the loop; 18 AWG from ASTM B258 + IEC 60028", value: () => 10 * 2 * 5 * awgResistancePerMetre(18) },
+  "designing-a-run/supply-drop": {
+    source: "Ohm's law over the loop; 18 AWG from ASTM B258 + IEC 60028",
+    value: (given) => given("current") * 2 * given("length") * awgResistancePerMetre(18),
+  },
   "designing-a-run/long-run-delay": { source: "length × catalogue delay per metre", value: () => 25 * twisted.delayPerMetre },
 
-  "on-the-bench/scope-rise-time": { source: "t_rise ≈ 0.35 / bandwidth", value: () => 0.35 / 100e6 },
-  "on-the-bench/measured-rise": { source: "root sum of squares of cascaded rise times", value: () => Math.hypot(10e-9, 0.35 / 100e6) },
-  "on-the-bench/ground-lead-ring": { source: "f = 1/(2π√(LC))", value: () => 1 / (2 * Math.PI * Math.sqrt(150e-9 * PROBE_C)) },
-  "on-the-bench/probe-loading": { source: "far-end τ = Z0·C, rise = τ·ln 9", value: () => LN9 * lone.z0 * (INPUT_C + PROBE_C) },
+  "on-the-bench/scope-rise-time": { source: "t_rise ≈ 0.35 / bandwidth", value: (given) => 0.35 / given("bandwidth") },
+  "on-the-bench/measured-rise": { source: "root sum of squares of cascaded rise times", value: (given) => Math.hypot(10e-9, 0.35 / given("bandwidth")) },
+  "on-the-bench/ground-lead-ring": { source: "f = 1/(2π√(LC))", value: (given) => 1 / (2 * Math.PI * Math.sqrt(given("inductance") * PROBE_C)) },
+  "on-the-bench/probe-loading": { source: "far-end τ = Z0·C, rise = τ·ln 9", value: (given) => LN9 * lone.z0 * (INPUT_C + given("capacitance")) },
 };
 
 const course = getCourse();

@@ -60,7 +60,7 @@ describe("validateLesson", () => {
   it("rejects a wrong field with the lesson file and the field path in the message", () => {
     let index = -1;
     const source = brokenSource(2, (lesson) => {
-      index = checkIndexes(lesson)[0]!;
+      index = checkIndexes(lesson).find((i) => lesson.blocks[i]!.answer !== undefined)!;
       (lesson.blocks[index]!.answer as { unit: unknown }).unit = 42;
     });
     const error = contentErrorOf(() => validateLesson(source));
