@@ -3,11 +3,10 @@
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { recordQuickCheckAnswer } from "@/db/queries/quick-checks";
-import { gradeNumericAnswer } from "@/lib/answers";
 import { requireRouteAccess } from "@/lib/auth/current-user";
 import { describeError } from "@/lib/http/errors";
 import { isLessonOpen } from "@/lib/progress";
-import { gradeChoiceCheck, numericCheckFor, quickCheckSeed } from "@/lib/quick-checks";
+import { gradeChoiceCheck, gradeNumericCheck, quickCheckSeed } from "@/lib/quick-checks";
 import type { QuickCheckState } from "@/components/lesson/quick-check-state";
 import { getLesson } from "@/lessons";
 import { formDataOrEmpty } from "@/lib/http/form-state";
@@ -58,8 +57,7 @@ export async function answerQuickCheck(_previous: QuickCheckState, formData: For
 
   const check = getLesson(lessonSlug)?.blocks.find((block) => block.kind === "check" && block.id === checkId);
   if (!check || check.kind !== "check") return gone(entry);
-  const given = numericCheckFor(check, quickCheckSeed(user.id, lessonSlug, checkId));
-  const grade = gradeNumericAnswer(entry, given.answer);
+  const grade = gradeNumericCheck(check, quickCheckSeed(user.id, lessonSlug, checkId), entry);
   const worthStoring = grade.status !== "unreadable" || (grade.problem !== "empty" && grade.problem !== "too-long");
   const graded = worthStoring ? { entry: entry.trim(), value: grade.value, correct: grade.correct } : null;
   const failed = await storeAnswer({ userId: user.id, lessonSlug, checkId }, graded, entry);
