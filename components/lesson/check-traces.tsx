@@ -18,7 +18,7 @@ const GRID_NS = [0, 200, 400, 600];
 export function CheckTraces({ traces, caption }: { traces: readonly DrawnTrace[]; caption: string }) {
   return (
     <figure className="mt-4">
-      <div className={`grid gap-3 ${traces.length > 1 ? "sm:grid-cols-2" : ""}`}>
+      <div className={`grid gap-3 ${traces.length > 1 ? "sm:grid-cols-2" : "sm:max-w-sm"}`}>
         {traces.map((trace) => (
           <TracePlot key={trace.key} trace={trace} />
         ))}

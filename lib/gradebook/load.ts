@@ -108,5 +108,5 @@ export async function loadLearnerRecord(params: {
   const bench = items
     .filter((item) => item.kind === "bench")
     .map((item): BenchRecord => ({ item, work: benchWork.find((w) => itemKey("bench", w.exerciseSlug) === item.key) ?? null }));
-  return { cohort, learner, labs, bench, checks: quickCheckRecords(getCourse(), answers) };
+  return { cohort, learner, labs, bench, checks: quickCheckRecords(getCourse(), params.learnerId, answers) };
 }

@@ -348,6 +348,8 @@ describe("a learner's quick checks", () => {
     expect(shown.number).toBe(lesson.number);
     const choiceShown = shown.checks.find((c) => c.id === choice!.id)!;
     expect(choiceShown.kind).toBe("Predict, then run");
+    expect(choiceShown.expected).toBe(answers[1]!.entry);
+    expect(choiceShown.asked).toMatch(/^The run: /);
     expect(choiceShown.answers.map(({ entry, correct }) => ({ entry, correct }))).toEqual([answers[0], answers[1]]);
     expect(shown.checks.find((c) => c.id === numeric!.id)!.answers).toMatchObject([{ entry: "2 kHz", correct: false }]);
     // Lessons the learner never answered in are left out.

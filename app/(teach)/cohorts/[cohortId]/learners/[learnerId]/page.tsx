@@ -83,6 +83,11 @@ function QuickCheckAnswers({ lesson }: { lesson: LessonChecksRecord }) {
             {check.answers.length === 0 ? <span className="text-ink-soft"> · not answered yet</span> : null}
           </p>
           {check.answers.length > 0 ? (
+            <p className="mt-1 text-ink-soft">
+              {check.asked} <span className="text-ink">Accepted answer: {check.expected}.</span>
+            </p>
+          ) : null}
+          {check.answers.length > 0 ? (
             <ol className="mt-1 space-y-0.5">
               {check.answers.map((answer) => (
                 <li key={answer.createdAt.toISOString()} className="flex flex-wrap gap-x-2">
