@@ -2,6 +2,7 @@ import { asc, eq } from "drizzle-orm";
 import type { Browser, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
+import { markLessonsCompleted } from "@/db/queries/progress";
 import { cohortMemberships, quickCheckAnswers } from "@/db/schema";
 import { getLesson, type Lesson } from "@/lessons";
 import { correctChoice, presentChoiceCheck, quickCheckSeed } from "@/lib/quick-checks";
@@ -17,6 +18,8 @@ const lesson = getLesson("pixel-data-stream")!;
 type Choice = Extract<Lesson["blocks"][number], { kind: "choice" }>;
 const pickTrace = lesson.blocks.find((b): b is Choice => b.kind === "choice" && b.ask === "pick-trace")!;
 const predict = lesson.blocks.find((b): b is Choice => b.kind === "choice" && b.ask === "predict")!;
+const lessonTwo = getLesson("logic-levels")!;
+const diagnose = lessonTwo.blocks.find((b): b is Choice => b.kind === "choice" && b.ask === "diagnose")!;
 
 let browser: Browser;
 beforeAll(async () => {
@@ -38,8 +41,8 @@ async function startSession(viewport: keyof typeof viewports) {
 }
 
 /** The learner's options for a check: the right one and a wrong one, by their words on the page. */
-function optionsFor(learnerId: string, check: Choice) {
-  const seed = quickCheckSeed(learnerId, lesson.slug, check.id);
+function optionsFor(learnerId: string, check: Choice, slug = lesson.slug) {
+  const seed = quickCheckSeed(learnerId, slug, check.id);
   const options = presentChoiceCheck(check, seed).options;
   const right = correctChoice(check, seed);
   return { right: options.find((o) => o.key === right)!.label, wrong: options.find((o) => o.key !== right)!.label };
@@ -132,6 +135,25 @@ describe("quick checks answered by choosing", () => {
       await predicting.locator('[data-trace="run"]').waitFor({ timeout: 15_000 });
       await predicting.screenshot({ path: `${screenshotDir}/predict-narrow.png` });
       await saveScreenshot(page, "lesson-1-choice-checks-narrow");
+      expect(errors).toEqual([]);
+    } finally {
+      await context.close();
+    }
+  });
+
+  it("diagnoses a failing run from its drawn trace and symptom on a phone", async () => {
+    const { learner, context, page, errors } = await startSession("narrow");
+    try {
+      await markLessonsCompleted({ userId: learner.id, completions: [{ lessonSlug: lesson.slug, completedAt: new Date() }] });
+      await page.goto(`/lessons/${lessonTwo.slug}`);
+      const diagnosing = page.locator(`#check-${diagnose.id}`);
+      expect(await diagnosing.locator('[data-trace="given"]').count()).toBe(1);
+      expect(await diagnosing.getByText(/^On site:/).isVisible()).toBe(true);
+      const fix = optionsFor(learner.id, diagnose, lessonTwo.slug);
+      await diagnosing.scrollIntoViewIfNeeded();
+      await choose(diagnosing, fix.wrong, "Check answer", `Not yet: ${fix.wrong} is not the answer.`);
+      await choose(diagnosing, fix.right, "Check answer", `Correct: ${fix.right}.`);
+      await diagnosing.screenshot({ path: `${screenshotDir}/diagnose-narrow.png` });
       expect(errors).toEqual([]);
     } finally {
       await context.close();
