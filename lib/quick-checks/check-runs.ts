@@ -34,10 +34,13 @@ export function simulateCheckRun(run: CheckRun): SimResult {
   return result;
 }
 
+/** A label inside a sentence: its first letter in lower case, units such as "Ω" and "V" left as they are. */
+export const inSentence = (label: string) => label.charAt(0).toLowerCase() + label.slice(1);
+
 const ohms = (value: number) => (value === 0 ? "no series resistor" : `a ${Number(value.toPrecision(3))} Ω series resistor`);
 
 /** The run in an installer's words, from its data: "5 V buffered output, 12 m of twisted pair, a 33 Ω series resistor". */
 export function describeCheckRun(run: CheckRun): string {
-  const cable = cableCatalogue[run.cable].label.toLowerCase();
+  const cable = inSentence(cableCatalogue[run.cable].label);
   return `${run.driver.label}, ${Number(run.length.toPrecision(3))} m of ${cable}, ${ohms(run.seriesResistance)}`;
 }

@@ -1,7 +1,7 @@
 import { cableCatalogue, type SimResult } from "@/lib/sim";
 import { buffer5v } from "@/lessons/drivers";
 import type { CheckFixes, CheckRun, ChoiceCheckBlock } from "@/lessons/schema";
-import { describeCheckRun, simulateCheckRun } from "./check-runs";
+import { describeCheckRun, inSentence, simulateCheckRun } from "./check-runs";
 import { FAR_END_SHAPES, SHAPE_WORDS, readFarEndShape } from "./far-end-shape";
 import { seededIndex, seededOrder } from "./seed";
 
@@ -65,9 +65,9 @@ function fixWords(fix: Fix, fixes: CheckFixes): string {
     case "less-resistance":
       return `Less series resistance: a ${ordinal(fixes.resistanceFactor)} of it`;
     case "other-cable":
-      return `Another cable: ${cableCatalogue[fixes.cable].label.toLowerCase()}, same length`;
+      return `Another cable: ${inSentence(cableCatalogue[fixes.cable].label)}, same length`;
     case "level-shifter":
-      return `A level shifter: drive the line from a ${buffer5v.label.toLowerCase()}`;
+      return `A level shifter: drive the line from a ${inSentence(buffer5v.label)}`;
   }
 }
 

@@ -5,7 +5,8 @@
 import { describe, expect, it } from "vitest";
 import { getCourse } from "@/lessons";
 import type { ChoiceCheckBlock } from "@/lessons/schema";
-import { simulateCheckRun } from "@/lib/quick-checks/check-runs";
+import { bufferRun } from "@/lessons/choice-check-runs";
+import { describeCheckRun, simulateCheckRun } from "@/lib/quick-checks/check-runs";
 import { FIXES, applyFix, correctChoice, gradeChoiceCheck, presentChoiceCheck } from "@/lib/quick-checks/choice-check";
 import { readFarEndShape } from "@/lib/quick-checks/far-end-shape";
 
@@ -93,5 +94,12 @@ describe.each(choiceChecks)("%s", (_, block: ChoiceCheckBlock) => {
       expect(page).not.toContain(right.label);
       if (block.ask === "predict") expect(shown.traces).toEqual([]);
     }
+  });
+});
+
+describe("a run in words", () => {
+  it("keeps units' capitals inside the sentence", () => {
+    expect(describeCheckRun(bufferRun("coax-75", 10, 47))).toBe("5 V buffered output, 10 m of 75 Ω coax, a 47 Ω series resistor");
+    expect(describeCheckRun(bufferRun("twisted-pair", 8, 0))).toBe("5 V buffered output, 8 m of twisted pair, no series resistor");
   });
 });
