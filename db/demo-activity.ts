@@ -1,3 +1,4 @@
+import { correctChoice, gradeChoiceCheck, numericCheckFor, presentChoiceCheck, quickCheckSeed } from "@/lib/quick-checks";
 // A few weeks of made-up work by the demo learners, so the instructor's grid, charts and review
 // queue and the learners' own pages have something to show. Every number is produced by the code
 // the app itself runs: lab attempts by the grader on the learner's own variant, quick-check
@@ -205,20 +206,38 @@ function recordAttempt(work: LearnerWork, learner: { id: string; cohortId: strin
 }
 
 function answerChecks(work: LearnerWork, userId: string, lesson: Lesson, share: number, clock: ReturnType<typeof sessionClock>, random: () => number) {
-  const checks = lesson.blocks.flatMap((block) => (block.kind === "check" ? [block] : []));
+  const checks = lesson.blocks.flatMap((block) => (block.kind === "check" || block.kind === "choice" ? [block] : []));
   for (const check of checks.slice(0, Math.ceil(checks.length * share))) {
+    const seed = quickCheckSeed(userId, lesson.slug, check.id);
     const slips = random() < 0.35 ? (random() < 0.3 ? 2 : 1) : 0;
-    const entries = [
-      ...Array.from({ length: slips }, () => formatInUnit(check.answer.value * pick([10, 0.1, 1.5, 0.5, 2], random), check.answer.unit)),
-      formatInUnit(check.answer.value, check.answer.unit),
-    ];
-    for (const entry of entries) {
+    const graded =
+      check.kind === "check"
+        ? (() => {
+            const { answer } = numericCheckFor(check, seed);
+            const entries = [
+              ...Array.from({ length: slips }, () => formatInUnit(answer.value * pick([10, 0.1, 1.5, 0.5, 2], random), answer.unit)),
+              formatInUnit(answer.value, answer.unit),
+            ];
+            return entries.map((entry) => {
+              const result = gradeNumericAnswer(entry, answer);
+              return { entry, value: result.value, correct: result.correct };
+            });
+          })()
+        : (() => {
+            const right = correctChoice(check, seed);
+            const wrong = presentChoiceCheck(check, seed).options.filter((o) => o.key !== right);
+            return [...wrong.slice(0, slips).map((o) => o.key), right].map((key) => {
+              const result = gradeChoiceCheck(check, seed, key);
+              if (result.status === "unreadable") throw new Error(`demo answer ${key} is not an option of ${check.id}`);
+              return { entry: result.entry, value: null, correct: result.correct };
+            });
+          })();
+    for (const { entry, value, correct } of graded) {
       const at = clock(1, 6);
-      const result = gradeNumericAnswer(entry, check.answer);
-      work.answers.push({ userId, lessonSlug: lesson.slug, checkId: check.id, entry, value: result.value, correct: result.correct, createdAt: at });
+      work.answers.push({ userId, lessonSlug: lesson.slug, checkId: check.id, entry, value, correct, createdAt: at });
       const key = checkKey(lesson.slug, check.id);
       const fact = work.checks.get(key) ?? { answers: 0, firstCorrectAt: null };
-      work.checks.set(key, { answers: fact.answers + 1, firstCorrectAt: fact.firstCorrectAt ?? (result.correct ? at : null) });
+      work.checks.set(key, { answers: fact.answers + 1, firstCorrectAt: fact.firstCorrectAt ?? (correct ? at : null) });
     }
   }
 }

@@ -2,8 +2,8 @@ import { z } from "zod";
 import { cableKindSchema } from "./cable-kinds";
 import { figureBlockSchema } from "./figures";
 import { JUDGEMENTS } from "@/lib/sim";
-import { lessonNumbersSchema } from "./numbers/lesson-number";
-import { resolveText } from "./numbers/resolve-text";
+import { lessonNumbersSchema, type LessonNumbers } from "./numbers/lesson-number";
+import { resolveText, type TextProblem } from "./numbers/resolve-text";
 
 const slug = z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, "must be a kebab-case slug");
 const markdown = z.string().trim().min(1);
@@ -36,21 +36,35 @@ const idsAt = (list: string, items: readonly { id: string }[]): Keyed[] =>
 export const numericAnswerSchema = z.strictObject({
   value: z.number().finite(),
   unit: z.string(),
-  tolerance: z.number().gt(0).max(0.2),
+  /** 0 asks for the exact value: a count rounded the way the lesson teaches, where the other rounding is wrong. */
+  tolerance: z.number().min(0).max(0.2),
 });
 
 export const textBlockSchema = z.strictObject({ kind: z.literal("text"), markdown });
 export const cautionBlockSchema = z.strictObject({ kind: z.literal("caution"), title: z.string().trim().min(1), markdown });
-export const checkBlockSchema = z.strictObject({
-  kind: z.literal("check"),
-  id: slug,
-  prompt: markdown,
-  answer: numericAnswerSchema,
-  hint: markdown,
-  explanation: markdown,
-});
 
-export const blockSchema = z.discriminatedUnion("kind", [textBlockSchema, cautionBlockSchema, figureBlockSchema, checkBlockSchema]);
+/**
+ * One of a seeded check's givens: numbers its prompt, hint and explanation quote as `{{given.…}}`,
+ * and the answer computed from them. A learner's seed picks one (lib/quick-checks), so the value
+ * asked for is not the one the lesson worked out above the question.
+ */
+export const checkGivenSchema = z.strictObject({ numbers: lessonNumbersSchema, answer: numericAnswerSchema });
+
+/** A numeric quick check: one `answer`, or per-learner `givens` (at least three) instead. */
+export const checkBlockSchema = z
+  .strictObject({
+    kind: z.literal("check"),
+    id: slug,
+    prompt: markdown,
+    answer: numericAnswerSchema.optional(),
+    givens: z.array(checkGivenSchema).min(3).max(12).optional(),
+    hint: markdown,
+    explanation: markdown,
+  })
+  .refine((check) => (check.answer === undefined) !== (check.givens === undefined), {
+    message: "a check has either one answer or givens, not both",
+    path: ["answer"],
+  });
 
 export const driverSchema = z.strictObject({
   id: slug,
@@ -61,6 +75,77 @@ export const driverSchema = z.strictObject({
   outputResistanceLow: ohms.optional(),
   edgeTime: seconds,
 });
+
+/** A run a non-numeric check draws: what it varies; the pixel and the bits sent are the course's (lib/quick-checks). */
+export const checkRunSchema = z.strictObject({
+  driver: driverSchema,
+  cable: cableKindSchema,
+  length: z.number().positive().max(100),
+  seriesResistance: ohms,
+});
+
+/**
+ * pick-trace: which of the drawn far-end traces belongs to the described run;
+ * predict: the far end's shape, committed to before the run is drawn;
+ * diagnose: given a failing run's trace and symptom, which change fixes it.
+ */
+export const CHOICE_ASKS = ["pick-trace", "predict", "diagnose"] as const;
+
+/**
+ * The changes a diagnose check offers, each one thing in the failing run: the series resistance
+ * times or divided by `resistanceFactor`, the cable replaced by `cable`, or a level shifter (the
+ * course's 5 V buffered output) in place of the driver.
+ */
+export const checkFixesSchema = z.strictObject({
+  resistanceFactor: z.number().gt(1).max(10),
+  cable: cableKindSchema,
+});
+
+/**
+ * A quick check answered by choosing, graded on the server: which option is right is computed
+ * from the simulator for the run the learner's seed picks, never written here.
+ * pick-trace: `runs` are the candidate traces (3 or 4), one of them described;
+ * predict and diagnose: `runs` are the runs a learner may be given, one per seed.
+ */
+export const choiceCheckBlockSchema = z
+  .strictObject({
+    kind: z.literal("choice"),
+    id: slug,
+    ask: z.enum(CHOICE_ASKS),
+    prompt: markdown,
+    hint: markdown,
+    explanation: markdown,
+    runs: z.array(checkRunSchema).min(2).max(8),
+    fixes: checkFixesSchema.optional(),
+  })
+  .superRefine((check, ctx) => {
+    if (check.ask === "pick-trace" && check.runs.length > 4) {
+      ctx.addIssue({ code: "custom", path: ["runs"], message: "a pick-the-trace check draws 3 or 4 traces" });
+    }
+    if (check.ask !== "pick-trace" && check.runs.length < 3) {
+      ctx.addIssue({ code: "custom", path: ["runs"], message: "a seeded check needs at least 3 runs to pick from" });
+    }
+    if (check.ask === "pick-trace" && check.runs.length < 3) {
+      ctx.addIssue({ code: "custom", path: ["runs"], message: "a pick-the-trace check draws 3 or 4 traces" });
+    }
+    if ((check.ask === "diagnose") !== (check.fixes !== undefined)) {
+      ctx.addIssue({ code: "custom", path: ["fixes"], message: "diagnose checks, and only they, offer fixes" });
+    }
+    if (check.ask === "diagnose") {
+      check.runs.forEach((run, i) => {
+        if (run.seriesResistance === 0) ctx.addIssue({ code: "custom", path: ["runs", i, "seriesResistance"], message: "a diagnosed run needs a resistor to scale" });
+        if (run.cable === check.fixes?.cable) ctx.addIssue({ code: "custom", path: ["runs", i, "cable"], message: "the run already uses the cable offered as the fix" });
+      });
+    }
+  });
+
+export const blockSchema = z.discriminatedUnion("kind", [textBlockSchema, cautionBlockSchema, figureBlockSchema, checkBlockSchema, choiceCheckBlockSchema]);
+
+/** Quick checks of either kind, in lesson order: what a lesson's completion counts. */
+export function quickCheckIds(blocks: readonly { kind: string; id?: string }[]): string[] {
+  return blocks.flatMap((block) => (block.kind === "check" || block.kind === "choice" ? [block.id!] : []));
+}
+
 
 export const receiverSchema = z.strictObject({
   supplyVoltage: volts,
@@ -327,16 +412,40 @@ export const lessonSchema = z
     bench: benchExerciseSchema.optional(),
   })
   .superRefine((lesson, ctx) => {
-    const checks = lesson.blocks.flatMap((b, i) => (b.kind === "check" ? [{ value: b.id, path: ["blocks", i, "id"], where: `blocks.${i}.id` }] : []));
-    if (checks.length < 3 || checks.length > 6) {
-      ctx.addIssue({ code: "custom", path: ["blocks"], message: `a lesson needs 3 to 6 quick checks, found ${checks.length}` });
+    const checks = lesson.blocks.flatMap((b, i) =>
+      b.kind === "check" || b.kind === "choice" ? [{ value: b.id, path: ["blocks", i, "id"], where: `blocks.${i}.id` }] : [],
+    );
+    if (checks.length < 3 || checks.length > 8) {
+      ctx.addIssue({ code: "custom", path: ["blocks"], message: `a lesson needs 3 to 8 quick checks, found ${checks.length}` });
     }
+    const choices = lesson.blocks.filter((b) => b.kind === "choice").length;
+    if (choices < 2) ctx.addIssue({ code: "custom", path: ["blocks"], message: `a lesson needs at least 2 checks that are not numeric, found ${choices}` });
     flagRepeats(ctx, checks);
   })
-  .transform(({ numbers, ...content }, ctx) => ({
-    numbers,
-    ...resolveText(content, numbers, ({ path, message }) => ctx.addIssue({ code: "custom", path, message })),
-  }));
+  .transform(({ numbers, blocks, ...content }, ctx) => {
+    const report = ({ path, message }: TextProblem) => ctx.addIssue({ code: "custom", path, message });
+    return {
+      numbers,
+      ...resolveText(content, numbers, report),
+      blocks: blocks.map((block, i) => (block.kind === "check" ? resolveCheck(block, numbers, report, ["blocks", i]) : resolveText(block, numbers, report, ["blocks", i]))),
+    };
+  });
+
+/** A numeric check as served: the text and answer of each given, printed with the given's numbers as `given.…`. */
+export type CheckVariant = { prompt: string; hint: string; explanation: string; answer: NumericAnswer; given: LessonNumbers };
+
+function resolveCheck(block: z.infer<typeof checkBlockSchema>, numbers: LessonNumbers, report: (problem: TextProblem) => void, path: (string | number)[]) {
+  const { givens, answer, ...rest } = block;
+  const texts = { prompt: rest.prompt, hint: rest.hint, explanation: rest.explanation };
+  const variants: CheckVariant[] = givens
+    ? givens.map((given, g) => {
+        const scoped = { ...numbers, ...Object.fromEntries(Object.entries(given.numbers).map(([name, value]) => [`given.${name}`, value])) };
+        const resolved = resolveText(texts, scoped, ({ path: at, message }) => report({ path: [...path, ...at], message: `given ${g}: ${message}` }));
+        return { ...resolved, answer: given.answer, given: given.numbers };
+      })
+    : [{ ...resolveText(texts, numbers, ({ path: at, message }) => report({ path: [...path, ...at], message })), answer: answer!, given: {} }];
+  return { kind: block.kind, id: block.id, ...variants[0], variants };
+}
 
 export const courseSchema = z
   .strictObject({
@@ -396,8 +505,12 @@ export const courseSchema = z
   });
 
 export type NumericAnswer = z.infer<typeof numericAnswerSchema>;
-export type Block = z.infer<typeof blockSchema>;
-export type CheckBlock = z.infer<typeof checkBlockSchema>;
+export type Block = Lesson["blocks"][number];
+export type CheckBlock = Extract<Block, { kind: "check" }>;
+export type ChoiceCheckBlock = z.infer<typeof choiceCheckBlockSchema>;
+export type CheckRun = z.infer<typeof checkRunSchema>;
+export type CheckFixes = z.infer<typeof checkFixesSchema>;
+export type ChoiceAsk = (typeof CHOICE_ASKS)[number];
 export type Driver = z.infer<typeof driverSchema>;
 export type Receiver = z.infer<typeof receiverSchema>;
 export type Signal = z.infer<typeof signalSchema>;

@@ -41,6 +41,11 @@ function mulberry32(state: number): () => number {
   };
 }
 
+/** A PRNG drawn from a seed string: the same text always gives the same sequence. */
+export function seededRandom(text: string): () => number {
+  return mulberry32(hashSeed(text));
+}
+
 function pick<T>(items: readonly T[], random: () => number): T {
   return items[Math.floor(random() * items.length)];
 }

@@ -222,6 +222,27 @@ export async function listLearnerAttemptsForViewer(params: {
     .orderBy(asc(labAttempts.labSlug), asc(labAttempts.attemptNumber));
 }
 
+export type LearnerQuickCheckAnswer = { lessonSlug: string; checkId: string; entry: string; correct: boolean; createdAt: Date };
+
+/** Every quick-check answer of a learner of the cohort, oldest first. */
+export async function listLearnerQuickCheckAnswersForViewer(params: {
+  cohortId: string;
+  learnerId: string;
+  viewer: GradebookViewer;
+}): Promise<LearnerQuickCheckAnswer[]> {
+  return db
+    .select({
+      lessonSlug: quickCheckAnswers.lessonSlug,
+      checkId: quickCheckAnswers.checkId,
+      entry: quickCheckAnswers.entry,
+      correct: quickCheckAnswers.correct,
+      createdAt: quickCheckAnswers.createdAt,
+    })
+    .from(quickCheckAnswers)
+    .where(and(eq(quickCheckAnswers.userId, params.learnerId), learnerOfCohort(params), viewerSeesCohort(params.viewer, params.cohortId)))
+    .orderBy(asc(quickCheckAnswers.createdAt), asc(quickCheckAnswers.id));
+}
+
 export type LearnerBenchWork = {
   submissionId: string;
   exerciseSlug: string;

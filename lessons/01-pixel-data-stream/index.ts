@@ -1,9 +1,10 @@
+import { bufferRun, pinRun } from "../choice-check-runs";
 import { buffer5v } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
-import { FIGURE_BITS, numbers } from "./numbers";
+import { checkGivens, FIGURE_BITS, numbers } from "./numbers";
 
 const { sim } = sharedNumbers;
 
@@ -77,10 +78,10 @@ The simulator adds two more rules, which you will meet on the workbench. A pulse
     {
       kind: "check",
       id: "bit-rate",
-      prompt: "A controller is set to a bit period of {{sim.bitPeriod}}. What is its bit rate? Give a frequency with its unit.",
-      answer: { value: sim.bitRate.value, unit: "kHz", tolerance: 0.01 },
+      prompt: "A controller is set to a bit period of {{given.period}}. What is its bit rate? Give a frequency with its unit.",
+      givens: checkGivens.bitRate.map((given) => ({ numbers: given, answer: { value: given.rate.value, unit: "kHz", tolerance: 0.01 } })),
       hint: "The bit rate is one bit per period: f = 1 / T.",
-      explanation: "f = 1 / {{sim.bitPeriod}} = 1 / {{sim.bitPeriod|unit=s|exp=-6}} = {{sim.bitRate|unit=Hz}} = {{sim.bitRate}}.",
+      explanation: "f = 1 / {{given.period}} = 1 / {{given.period|unit=s|exp=-6}} = {{given.rate}}.",
     },
     {
       kind: "text",
@@ -185,27 +186,48 @@ Round *down*: {{smooth.oneMore}} pixels would no longer fit in a {{smooth.rate}}
     {
       kind: "check",
       id: "frame-time-200",
-      prompt: "An output drives {{rows.p200.pixels}} pixels with a {{longLatch}} latch gap and a {{sim.bitPeriod}} bit period. What is the frame time?",
-      answer: { value: numbers.rows.p200.frame.value, unit: "ms", tolerance: 0.01 },
+      prompt: "An output drives {{given.pixels}} pixels with a {{longLatch}} latch gap and a {{sim.bitPeriod}} bit period. What is the frame time?",
+      givens: checkGivens.frameTime.map((given) => ({ numbers: given, answer: { value: given.frame.value, unit: "ms", tolerance: 0.01 } })),
       hint: "T_frame = N × {{sim.wordBits}} × T_bit + T_latch.",
-      explanation: "{{rows.p200.pixels}} × {{sim.wordBits}} × {{sim.bitPeriod}} = {{rows.p200.data|unit=µs|dp=0}} = {{rows.p200.data}}; plus {{longLatch|unit=ms|dp=2}} of latch gap gives {{rows.p200.frame}}.",
+      explanation: "{{given.pixels}} × {{sim.wordBits}} × {{sim.bitPeriod}} = {{given.data}}; plus {{longLatch|unit=ms|dp=2}} of latch gap gives {{given.frame}}.",
     },
     {
       kind: "check",
       id: "refresh-200",
-      prompt: "For that same {{rows.p200.pixels}}-pixel output (frame time {{rows.p200.frame}}), what is the refresh rate?",
-      answer: { value: numbers.rows.p200.refresh.value, unit: "Hz", tolerance: 0.01 },
+      prompt: "Another output drives {{given.pixels}} pixels; its frame time is {{given.frame}}. What is its refresh rate?",
+      givens: checkGivens.refresh.map((given) => ({ numbers: given, answer: { value: given.refresh.value, unit: "Hz", tolerance: 0.01 } })),
       hint: "The refresh rate is the number of frames per second: 1 / T_frame.",
-      explanation: "1 / {{rows.p200.frame}} = 1 / {{rows.p200.frame|unit=s|dp=5}} ≈ {{rows.p200.refresh|dp=1}}.",
+      explanation: "1 / {{given.frame}} = 1 / {{given.frame|unit=s|dp=5}} ≈ {{given.refresh|dp=1}}.",
     },
     {
       kind: "check",
       id: "max-pixels-40hz",
       prompt:
-        "You want at least {{forty.rate|bare}} frames per second on one output, with a {{sim.latchGap}} latch gap. How many pixels can the output drive at most? Give a whole number.",
-      answer: { value: numbers.forty.max.value, unit: "", tolerance: 0.002 },
+        "You want at least {{given.rate|bare}} frames per second on one output, with a {{sim.latchGap}} latch gap. How many pixels can the output drive at most? Give a whole number.",
+      // Exact: the rounded-up count is the mistake the lesson warns against, so it must not pass.
+      givens: checkGivens.maxPixels.map((given) => ({ numbers: given, answer: { value: given.max.value, unit: "", tolerance: 0 } })),
       hint: "N_max = (1 / f − T_latch) / {{wordTime}}, then round down.",
-      explanation: "1 / {{forty.rate}} = {{forty.period|dp=0}} = {{forty.period|unit=µs|dp=0}}. ({{forty.period|unit=µs|dp=0}} − {{sim.latchGap}}) / {{wordTime}} = {{forty.exact}}, rounded down to {{forty.max}} pixels.",
+      explanation:
+        "1 / {{given.rate}} = {{given.period|unit=µs|dp=0}}. ({{given.period|unit=µs|dp=0}} − {{sim.latchGap}}) / {{wordTime}} = {{given.exact}}, rounded down to {{given.max}} pixels: {{given.nextUp}} would no longer fit in a frame.",
+    },
+    {
+      kind: "choice",
+      id: "pick-delay-trace",
+      ask: "pick-trace",
+      prompt:
+        "The same controller sends the same bits down twisted pair of four different lengths. Each trace below is the far end of one of them, drawn by the simulator on the same time axis. Which trace belongs to the run described?",
+      hint: "A cable delays the whole waveform: the longer the run, the later the first rising edge arrives.",
+      explanation: "Every edge arrives later on a longer run, by the same amount for rising and falling edges, so the widths the pixel measures survive. The run that is longest starts rising last.",
+      runs: [bufferRun("twisted-pair", 2, 100), bufferRun("twisted-pair", 10, 100), bufferRun("twisted-pair", 20, 100), bufferRun("twisted-pair", 30, 100)],
+    },
+    {
+      kind: "choice",
+      id: "predict-first-pixel",
+      ask: "predict",
+      prompt: "Before the simulator draws it: what will the far end of this run look like at the first pixel's data pin?",
+      hint: "Ask how the driver's level compares with the pixel's high threshold, and how the resistance in front of the cable compares with the cable's impedance.",
+      explanation: "The later lessons explain each shape: a driver below the threshold never gets there, a source far below the cable's impedance rings, one far above it climbs a staircase, and one near it gives a clean step.",
+      runs: [bufferRun("twisted-pair", 8, 0), bufferRun("twisted-pair", 8, 100), bufferRun("beside-ground", 8, 330), pinRun("beside-ground", 8, 100)],
     },
     {
       kind: "text",

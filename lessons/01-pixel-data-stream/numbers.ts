@@ -56,7 +56,6 @@ function pixelsFor(rate: number, latch: number) {
 /** The figure's bits, whose length `figureSlots` quotes. */
 export const FIGURE_BITS = "01101000";
 const smooth = pixelsFor(60, LONG_LATCH);
-const forty = pixelsFor(40, latchGap.value);
 const PIXEL_CURRENT = 60e-3;
 const POWERED_PIXELS = 300;
 const LATE_LENGTH = 10;
@@ -80,7 +79,6 @@ export const numbers = {
   rows: { p100: frameRow(100), p200: frameRow(200), p500: frameRow(500), p1000: frameRow(1000) },
   smooth: { ...smooth, oneMore: q(smooth.max.value + 1, "", 0, "one pixel more than N_max") },
   greenWord: colourWord([0, 170, 0]),
-  forty: { rate: forty.rate, period: forty.period, exact: forty.exact, max: forty.max },
   late: {
     length: q(LATE_LENGTH, "m", 0, PREMISE),
     least: q(Math.min(...delays), "ns", 0, "length × the catalogue's smallest delay per metre"),
@@ -92,6 +90,26 @@ export const numbers = {
     total: q(POWERED_PIXELS * PIXEL_CURRENT, "A", 0, "pixels × current per pixel"),
   },
 } satisfies NumberTree;
+
+const GIVEN = "the learner's given (a premise; lib/quick-checks picks one per learner)";
+
+/**
+ * Each learner's premises for the quick checks, away from the worked examples above them (the
+ * frame table's pixel counts, the default bit period, the smooth refresh rate), and the answers
+ * computed from them.
+ */
+export const checkGivens = {
+  bitRate: [1.0e-6, 1.1e-6, 1.2e-6, 1.3e-6, 1.4e-6].map((period) => ({
+    period: q(period, "µs", 2, GIVEN),
+    rate: q(1 / period, "kHz", 1, "f = 1 / T"),
+  })),
+  frameTime: [150, 250, 300, 400, 600].map((pixels) => ({ ...frameRow(pixels), pixels: q(pixels, "", 0, GIVEN) })),
+  refresh: [120, 240, 360, 450, 700].map((pixels) => ({ ...frameRow(pixels), pixels: q(pixels, "", 0, GIVEN) })),
+  maxPixels: [30, 45, 50, 75, 90].map((rate) => {
+    const row = pixelsFor(rate, latchGap.value);
+    return { ...row, rate: q(rate, "Hz", 0, GIVEN), nextUp: q(row.max.value + 1, "", 0, "N_max + 1, the rounded-up count that no longer fits") };
+  }),
+};
 
 export const plainNumbers: PlainNumber[] = [
   { text: "the 128s place, then 64, 32, 16, 8, 4, 2, 1", why: "binary place values" },

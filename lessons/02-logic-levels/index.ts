@@ -1,8 +1,9 @@
+import { bufferRun, courseFixes, pinRun } from "../choice-check-runs";
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { RECEIVER_MODEL_MARKDOWN, receiverLevels } from "../receiver-model";
-import { numbers } from "./numbers";
+import { checkGivens, numbers } from "./numbers";
 
 const typical5 = receiverLevels(5);
 
@@ -89,10 +90,10 @@ The high margin is **negative**. Even with a perfect wire, the driver cannot rea
     {
       kind: "check",
       id: "high-threshold-5v",
-      prompt: "A pixel runs from a 5.0 V supply and its datasheet guarantees a high above 0.7 × VDD. What is its high threshold?",
-      answer: { value: 3.5, unit: "V", tolerance: 0.01 },
+      prompt: "A pixel runs from a {{given.supply}} supply and its datasheet guarantees a high above 0.7 × VDD. What is its high threshold?",
+      givens: checkGivens.highThreshold.map((given) => ({ numbers: given, answer: { value: given.threshold.value, unit: "V", tolerance: 0.01 } })),
       hint: "Multiply the supply by the fraction.",
-      explanation: "0.7 × 5.0 V = 3.5 V.",
+      explanation: "0.7 × {{given.supply}} = {{given.threshold}}.",
     },
     {
       kind: "check",
@@ -152,10 +153,10 @@ As noted above, some runs lift the far end above the driver level. Lesson 6 trea
       kind: "check",
       id: "shifter-input-margin",
       prompt:
-        "A 3.3 V controller output drives a 5 V buffer with TTL-compatible inputs (high guaranteed above 2.0 V). What is the high noise margin at the buffer's input?",
-      answer: { value: 1.3, unit: "V", tolerance: 0.02 },
+        "A 3.3 V controller whose output high sags to {{given.high}} under load drives a 5 V buffer with TTL-compatible inputs (high guaranteed above 2.0 V). What is the high noise margin at the buffer's input?",
+      givens: checkGivens.shifterMargin.map((given) => ({ numbers: given, answer: { value: given.margin.value, unit: "V", tolerance: 0.02 } })),
       hint: "NM_high = driver high level − receiver high threshold.",
-      explanation: "3.3 V − 2.0 V = 1.3 V. The TTL-level input is what makes a 5 V buffer a level shifter.",
+      explanation: "{{given.high}} − 2.0 V = {{given.margin}}. The TTL-level input is what makes a 5 V buffer a level shifter.",
     },
     {
       kind: "text",
@@ -235,10 +236,30 @@ The workbench shows a controller with two outputs to choose from: its own 3.3 V 
       kind: "check",
       id: "mid-supply-margin",
       prompt:
-        "Take a 5 V pixel whose input happens to switch exactly at mid-supply, with no hysteresis. How much margin does a 3.3 V high have against that switching point?",
-      answer: { value: 0.8, unit: "V", tolerance: 0.02 },
+        "Take a 5 V pixel whose input happens to switch exactly at mid-supply, with no hysteresis. How much margin does a controller's high of {{given.high}} have against that switching point?",
+      givens: checkGivens.midSupplyMargin.map((given) => ({ numbers: given, answer: { value: given.margin.value, unit: "V", tolerance: 0.02 } })),
       hint: "Mid-supply is VDD / 2.",
-      explanation: "5.0 V / 2 = 2.5 V; 3.3 V − 2.5 V = 0.8 V. It is real for that one part, but no datasheet guarantees it: the next part may switch anywhere up to 3.5 V.",
+      explanation:
+        "5.0 V / 2 = {{given.mid}}; {{given.high}} − {{given.mid}} = {{given.margin}}. It is real for that one part, but no datasheet guarantees it: the next part may switch anywhere up to 3.5 V.",
+    },
+    {
+      kind: "choice",
+      id: "predict-driver-level",
+      ask: "predict",
+      prompt: "Before the simulator draws it: what will the far end of this run look like at the first pixel's data pin?",
+      hint: "Compare the driver's high level with the pixel's guaranteed high threshold first; only then ask what the cable does.",
+      explanation: "A 3.3 V output behind enough resistance settles at its own level, below a 5 V pixel's guaranteed high threshold. The 5 V buffer settles above it.",
+      runs: [pinRun("beside-ground", 5, 100), bufferRun("beside-ground", 5, 100), pinRun("three-core", 8, 47), bufferRun("twisted-pair", 8, 0)],
+    },
+    {
+      kind: "choice",
+      id: "diagnose-level",
+      ask: "diagnose",
+      prompt: "An installer sends this run to a 5 V pixel and the first pixels flicker. The far end, as the simulator draws it, is below. Which one change makes it work on every pixel that meets its datasheet?",
+      hint: "Look at where the far end settles during a long high, and compare it with the pixel's guaranteed high threshold.",
+      explanation: "When the settled level is below the guaranteed threshold, no resistor or cable can lift it: only a driver with a higher level can. When the level is fine but the edge climbs slowly, less resistance does it.",
+      runs: [pinRun("three-core", 10, 47), pinRun("beside-ground", 5, 220), pinRun("coax-75", 10, 47), bufferRun("beside-ground", 10, 220)],
+      fixes: courseFixes,
     },
   ],
   lab,

@@ -1,9 +1,10 @@
+import { bufferRun } from "../choice-check-runs";
 import { buffer5v } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
-import { numbers } from "./numbers";
+import { checkGivens, numbers } from "./numbers";
 
 const { sim, pixel } = sharedNumbers;
 
@@ -79,18 +80,18 @@ The {{buffer.edge}} edge of the buffer has become a {{shortLead.rise}} edge at t
     {
       kind: "check",
       id: "time-constant",
-      prompt: "A {{buffer.resistance}} driver feeds {{shortLead.capacitance}} through a {{shortLead.series}} series resistor. What is the time constant τ?",
-      answer: { value: numbers.shortLead.tau.value, unit: "ns", tolerance: 0.02 },
+      prompt: "A {{buffer.resistance}} driver feeds {{given.capacitance}} through a {{given.series}} series resistor. What is the time constant τ?",
+      givens: checkGivens.timeConstant.map((given) => ({ numbers: given, answer: { value: given.tau.value, unit: "ns", tolerance: 0.02 } })),
       hint: "Add the resistances in series, then τ = R × C.",
-      explanation: "R = {{buffer.resistance}} + {{shortLead.series}} = {{shortLead.resistance}}. τ = {{shortLead.resistance}} × {{shortLead.capacitance|unit=F|exp=-12|dp=0}} = {{shortLead.tau|unit=s|exp=-9}} = {{shortLead.tau}}.",
+      explanation: "R = {{buffer.resistance}} + {{given.series}} = {{given.resistance}}. τ = {{given.resistance}} × {{given.capacitance|unit=F|exp=-12|dp=0}} = {{given.tau|unit=s|exp=-9}} = {{given.tau}}.",
     },
     {
       kind: "check",
       id: "rise-time",
-      prompt: "What 10–90 % rise time does that time constant give?",
-      answer: { value: numbers.shortLead.rise.value, unit: "ns", tolerance: 0.03 },
+      prompt: "Another lead's RC has a time constant of {{given.tau}}. What 10–90 % rise time does it give?",
+      givens: checkGivens.riseTime.map((given) => ({ numbers: given, answer: { value: given.rise.value, unit: "ns", tolerance: 0.03 } })),
       hint: "t_rise = τ × ln 9 ≈ {{textbook.ln9}} × τ.",
-      explanation: "{{textbook.ln9}} × {{shortLead.tau}} ≈ {{shortLead.rise}} (exactly, ln 9 × {{shortLead.tau}} = {{shortLead.rise|dp=1}}).",
+      explanation: "{{textbook.ln9}} × {{given.tau}} ≈ {{given.rise}} (exactly, ln 9 × {{given.tau}} = {{given.rise|dp=1}}).",
     },
     {
       kind: "text",
@@ -177,10 +178,28 @@ Back-powering works both ways: a strip whose supply is switched off can still be
       kind: "check",
       id: "clamp-current",
       prompt:
-        "A 5 V driver ({{buffer.resistance}}) is connected through {{shortLead.series}} to a pixel whose supply is off. Taking the clamp diode's forward drop as {{textbook.diodeDrop}}, about how much current flows into the pixel's input?",
-      answer: { value: numbers.clamp.fitted.value, unit: "mA", tolerance: 0.03 },
+        "A 5 V driver ({{buffer.resistance}}) is connected through {{given.series}} to a pixel whose supply is off. Taking the clamp diode's forward drop as {{textbook.diodeDrop}}, about how much current flows into the pixel's input?",
+      givens: checkGivens.clampCurrent.map((given) => ({ numbers: given, answer: { value: given.current.value, unit: "mA", tolerance: 0.03 } })),
       hint: "The voltage left after the diode drop, divided by the total series resistance.",
-      explanation: "({{buffer.volts}} − {{textbook.diodeDrop}}) / ({{buffer.resistance}} + {{shortLead.series}}) = {{clamp.drive}} / {{shortLead.resistance}} ≈ {{clamp.fittedExact}}.",
+      explanation: "({{buffer.volts}} − {{textbook.diodeDrop}}) / ({{buffer.resistance}} + {{given.series}}) = {{clamp.drive}} / {{given.resistance}} ≈ {{given.current}}.",
+    },
+    {
+      kind: "choice",
+      id: "pick-edge-trace",
+      ask: "pick-trace",
+      prompt: "The same buffer drives the same cable through four different series resistors. Each trace below is the far end of one of them. Which trace belongs to the run described?",
+      hint: "More resistance in front of the cable's capacitance makes the edge slower; with very little, the far end overshoots.",
+      explanation: "The edge slows as the series resistance grows: almost none overshoots and rings, a moderate one gives a clean step, a large one climbs slowly.",
+      runs: [bufferRun("beside-ground", 5, 0), bufferRun("beside-ground", 5, 100), bufferRun("beside-ground", 5, 330), bufferRun("beside-ground", 5, 1000)],
+    },
+    {
+      kind: "choice",
+      id: "predict-edge",
+      ask: "predict",
+      prompt: "Before the simulator draws it: what will the far end of this run look like at the first pixel's data pin?",
+      hint: "Compare the source resistance (driver plus resistor) with the cable's impedance.",
+      explanation: "A source far below the cable's impedance overshoots and rings; one close to it gives a clean step; one far above it climbs in steps, one per round trip.",
+      runs: [bufferRun("beside-ground", 2, 0), bufferRun("beside-ground", 8, 100), bufferRun("beside-ground", 8, 330), bufferRun("three-core", 2, 330)],
     },
     {
       kind: "text",

@@ -80,7 +80,6 @@ export const numbers = {
     drive: q(V - DIODE, "V", 1, "driver level − diode drop"),
     bare: q((V - DIODE) / DRIVER_R, "mA", 0, "(V − 0.7 V) / R_out"),
     fitted: q((V - DIODE) / shortLead.resistance.value, "mA", 0, "(V − 0.7 V) / (R_out + R_s)"),
-    fittedExact: q((V - DIODE) / shortLead.resistance.value, "mA", 1, "(V − 0.7 V) / (R_out + R_s)"),
   },
   shortRoundTrip: {
     least: q(2 * shortLead.length.value * catalogue.delayLeast.value, "ns", 0, "2 × length × the catalogue's smallest delay per metre"),
@@ -97,6 +96,19 @@ export const numbers = {
     reached: q(1 - Math.exp(-sim.zeroHigh.value / longRun.tau.value), "%", 0, "1 − e^(−t/τ) at the end of a 0 bit"),
   },
 } satisfies NumberTree;
+
+const GIVEN = "the learner's given (a premise; lib/quick-checks picks one per learner)";
+const givenSeries = (series: number) => ({ ...lumped(shortLead.length.value, series), series: q(series, "Ω", 0, GIVEN) });
+
+/** Each learner's premises for the quick checks, away from the lesson's worked resistors, and the answers computed from them. */
+export const checkGivens = {
+  timeConstant: [150, 220, 270, 390, 470].map(givenSeries),
+  riseTime: [100, 180, 300, 560].map(givenSeries),
+  clampCurrent: [150, 220, 270, 390, 470].map((series) => {
+    const lead = givenSeries(series);
+    return { ...lead, current: q((V - DIODE) / lead.resistance.value, "mA", 1, "(V − 0.7 V) / (R_out + R_s)") };
+  }),
+};
 
 export const plainNumbers: PlainNumber[] = [
   { text: "rather than 0 % and 100 %", why: "the definition of rise time" },

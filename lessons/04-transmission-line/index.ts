@@ -1,9 +1,10 @@
+import { bufferRun, pinRun } from "../choice-check-runs";
 import { buffer5v } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
-import { numbers } from "./numbers";
+import { checkGivens, numbers } from "./numbers";
 
 export const lesson = {
   slug: "transmission-line",
@@ -176,10 +177,10 @@ Compared with data beside ground, the second return raised C′ by a third and c
       kind: "check",
       id: "launched-step",
       prompt:
-        "A 5 V driver with {{buffer.resistance}} of output resistance drives a {{beside.z0}} line through a {{launch.series}} resistor. How large is the step it launches onto the line?",
-      answer: { value: numbers.launch.step.value, unit: "V", tolerance: 0.02 },
+        "A 5 V driver with {{buffer.resistance}} of output resistance drives a {{beside.z0}} line through a {{given.series}} resistor. How large is the step it launches onto the line?",
+      givens: checkGivens.launchedStep.map((given) => ({ numbers: given, answer: { value: given.step.value, unit: "V", tolerance: 0.02 } })),
       hint: "Until anything returns from the far end the line is a {{beside.z0}} resistor: use the voltage divider.",
-      explanation: "V = {{buffer.volts}} × {{beside.z0|bare}} / ({{buffer.resistance|bare}} + {{launch.series|bare}} + {{beside.z0|bare}}) = {{buffer.volts}} × {{beside.z0|bare}} / {{launch.total|bare}} ≈ {{launch.step}}.",
+      explanation: "V = {{buffer.volts}} × {{beside.z0|bare}} / ({{buffer.resistance|bare}} + {{given.series|bare}} + {{beside.z0|bare}}) = {{buffer.volts}} × {{beside.z0|bare}} / {{given.total|bare}} ≈ {{given.step}}.",
     },
     {
       kind: "text",
@@ -225,19 +226,37 @@ Your company's standard asks for a data cable whose characteristic impedance lie
       kind: "check",
       id: "round-trip-length",
       prompt:
-        "A 3.3 V controller pin switches in {{pin.edge}}. At what length of twisted pair ({{twisted.delay}}) does the round trip equal the rise time?",
-      answer: { value: numbers.pinOnTwisted.roundTripLength.value, unit: "m", tolerance: 0.02 },
-      hint: "Round trip = 2 × length × delay per metre; set it equal to {{pin.edge}}.",
-      explanation: "Length = {{pin.edge}} ÷ (2 × {{twisted.delay}}) ≈ {{pinOnTwisted.roundTripLength}}. Any longer and reflections come back after the edge has finished, as separate steps.",
+        "A controller pin switches in {{given.edge}}. At what length of twisted pair ({{twisted.delay}}) does the round trip equal the rise time?",
+      givens: checkGivens.roundTripLength.map((given) => ({ numbers: given, answer: { value: given.length.value, unit: "m", tolerance: 0.02 } })),
+      hint: "Round trip = 2 × length × delay per metre; set it equal to {{given.edge}}.",
+      explanation: "Length = {{given.edge}} ÷ (2 × {{twisted.delay}}) ≈ {{given.length}}. Any longer and reflections come back after the edge has finished, as separate steps.",
     },
     {
       kind: "check",
       id: "effective-permittivity",
       prompt:
-        "A cable's delay is {{beside.delay}}. Light in vacuum takes {{textbook.vacuumDelay|bare}} ns per metre. What is the cable's effective relative permittivity? (A plain number.)",
-      answer: { value: numbers.permittivityCheck.squared.value, unit: "", tolerance: 0.02 },
+        "A cable's delay is {{given.delay}}. Light in vacuum takes {{textbook.vacuumDelay|bare}} ns per metre. What is the cable's effective relative permittivity? (A plain number.)",
+      givens: checkGivens.permittivity.map((given) => ({ numbers: given, answer: { value: given.squared.value, unit: "", tolerance: 0.02 } })),
       hint: "Delay per metre = √ε_eff × {{textbook.vacuumDelay}}; solve for ε_eff.",
-      explanation: "{{beside.delay|bare}} / {{textbook.vacuumDelay|bare}} = {{permittivityCheck.ratio}}; squared, ε_eff ≈ {{permittivityCheck.squared}}.",
+      explanation: "{{given.delay|bare}} / {{textbook.vacuumDelay|bare}} = {{given.ratio}}; squared, ε_eff ≈ {{given.squared}}.",
+    },
+    {
+      kind: "choice",
+      id: "pick-cable-trace",
+      ask: "pick-trace",
+      prompt: "The same buffer and resistor drive the same length of four different cables. Each trace below is the far end of one of them. Which trace belongs to the run described?",
+      hint: "The cable's impedance decides how the source resistance compares with it, and its delay per metre when the edge arrives.",
+      explanation: "Against a high-impedance cable the source looks small and the far end overshoots; against a low-impedance cable the same source looks large and the far end climbs. The delay per metre moves the whole trace in time.",
+      runs: [bufferRun("lone-lead", 10, 47), bufferRun("beside-ground", 10, 220), bufferRun("three-core", 10, 47), bufferRun("coax-75", 10, 470)],
+    },
+    {
+      kind: "choice",
+      id: "predict-line",
+      ask: "predict",
+      prompt: "Before the simulator draws it: what will the far end of this run look like at the first pixel's data pin?",
+      hint: "Work out the launched step: the source resistance and the cable's impedance divide the driver's voltage.",
+      explanation: "A launched step near the full swing doubles at the open far end and overshoots; one near half the swing arrives as a clean step; a small one needs several round trips, a staircase.",
+      runs: [bufferRun("lone-lead", 10, 0), bufferRun("twisted-pair", 10, 82), bufferRun("coax-75", 10, 330), pinRun("twisted-pair", 10, 100)],
     },
   ],
   lab,

@@ -28,7 +28,6 @@ function launch() {
   return {
     series: q(RUN_SERIES, "Ω", 0, PREMISE),
     source: q(source, "Ω", 0, "driver resistance + series resistor"),
-    total: q(source + beside.z0, "Ω", 1, "source resistance + Z0"),
     fraction: q(beside.z0 / (source + beside.z0), "", 3, DIVIDER),
     step: q(launchedStep(V, source, beside.z0), "V", 2, DIVIDER),
   };
@@ -162,7 +161,6 @@ export const numbers = {
     least: q(Math.min(...jacketed), "ns/m", 1, "smallest delay per metre of the catalogue's jacketed cables"),
     most: q(Math.max(...jacketed), "ns/m", 1, "largest delay per metre of the catalogue's jacketed cables"),
   },
-  permittivityCheck: { ratio: q(beside.delayPerMetre * C_LIGHT, "", 3, "delay per metre × c"), squared: q((beside.delayPerMetre * C_LIGHT) ** 2, "", 2, "(delay × c)²") },
   standard: {
     minZ0: q(spec!.minZ0, "Ω", 0, "the lab's cable standard (lessons/04-transmission-line/lab.ts)"),
     maxZ0: q(spec!.maxZ0, "Ω", 0, "the lab's cable standard"),
@@ -171,6 +169,30 @@ export const numbers = {
     series: q(lab.runs[0].scenario.seriesResistance, "Ω", 0, "the lab's fitted resistor"),
   },
 } satisfies NumberTree;
+
+const GIVEN = "the learner's given (a premise; lib/quick-checks picks one per learner)";
+
+/** Each learner's premises for the quick checks, away from the lesson's worked examples, and the answers computed from them. */
+export const checkGivens = {
+  launchedStep: [47, 68, 82, 100, 150].map((series) => {
+    const source = buffer5v.outputResistance + series;
+    const DIVIDER = "voltage divider of the source resistance and Z0 (catalogue)";
+    return {
+      series: q(series, "Ω", 0, GIVEN),
+      total: q(source + beside.z0, "Ω", 1, "source resistance + Z0"),
+      step: q(launchedStep(V, source, beside.z0), "V", 2, DIVIDER),
+    };
+  }),
+  roundTripLength: [3e-9, 5e-9, 6e-9, 8e-9].map((edge) => ({
+    edge: q(edge, "ns", 0, GIVEN),
+    length: q(edge / (2 * twisted.delayPerMetre), "m", 2, "edge time ÷ (2 × delay per metre)"),
+  })),
+  permittivity: [4.2e-9, 4.4e-9, 4.8e-9, 6.2e-9].map((delay) => ({
+    delay: q(delay, "ns/m", 1, GIVEN),
+    ratio: q(delay * C_LIGHT, "", 3, "delay per metre × c"),
+    squared: q((delay * C_LIGHT) ** 2, "", 2, "(delay × c)²"),
+  })),
+};
 
 export const plainNumbers: PlainNumber[] = [
   { text: "(120 / √", why: "the two-wire formula's constant, η0 / π ≈ 120 Ω (textbook form)" },

@@ -1,3 +1,4 @@
+import { bufferRun, courseFixes, pinRun } from "../choice-check-runs";
 import { OUTCOME_WORDS } from "@/lib/sim";
 import { buffer5v, controllerPin3v3 } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
@@ -5,7 +6,7 @@ import { sharedNumbers } from "../numbers/shared-numbers";
 import { RECEIVER_MODEL_MARKDOWN } from "../receiver-model";
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
-import { numbers } from "./numbers";
+import { checkGivens, numbers } from "./numbers";
 
 const pin = { highVoltage: controllerPin3v3.highVoltage, outputResistance: controllerPin3v3.outputResistance, edgeTime: controllerPin3v3.edgeTime };
 const buffer = { highVoltage: buffer5v.highVoltage, outputResistance: buffer5v.outputResistance, edgeTime: buffer5v.edgeTime };
@@ -122,27 +123,27 @@ No overshoot now: a **staircase**, one step per round trip ({{case3.roundTrip}} 
     {
       kind: "check",
       id: "source-coefficient",
-      prompt: "A source of {{case2.resistance}} (driver plus series resistor) drives a {{beside.z0}} line. What is the reflection coefficient at the source? (A plain number, with its sign.)",
-      answer: { value: numbers.case2.gamma.value, unit: "", tolerance: 0.02 },
+      prompt: "A source of {{given.resistance}} (driver plus series resistor) drives a {{beside.z0}} line. What is the reflection coefficient at the source? (A plain number, with its sign.)",
+      givens: checkGivens.sourceCoefficient.map((given) => ({ numbers: given, answer: { value: given.gamma.value, unit: "", tolerance: 0.02 } })),
       hint: "Γ_s = (R_src − Z0) / (R_src + Z0).",
-      explanation: "({{case2.resistance|bare}} − {{beside.z0|bare}}) / ({{case2.resistance|bare}} + {{beside.z0|bare}}) = {{case2.numerator}} / {{case2.denominator}} ≈ {{case2.gamma}}. Negative: returning waves come back inverted.",
+      explanation: "({{given.resistance|bare}} − {{beside.z0|bare}}) / ({{given.resistance|bare}} + {{beside.z0|bare}}) = {{given.numerator}} / {{given.denominator}} ≈ {{given.gamma}}. Negative: returning waves come back inverted.",
     },
     {
       kind: "check",
       id: "first-arrival",
       prompt:
-        "With that source (Γ_s = {{case2.gamma}}) and a 5 V driver, what voltage does the open far end reach when the first wave arrives, ignoring the clamp diodes?",
-      answer: { value: numbers.case2.far.n1.value, unit: "V", tolerance: 0.02 },
+        "A 5 V driver behind a source with Γ_s = {{given.gamma}} drives an open-ended line. What voltage does the far end reach when the first wave arrives, ignoring the clamp diodes?",
+      givens: checkGivens.firstArrival.map((given) => ({ numbers: given, answer: { value: given.n1.value, unit: "V", tolerance: 0.02 } })),
       hint: "V_far(1) = V × (1 − Γ_s). Equivalently: twice the launched step.",
-      explanation: "{{buffer.volts}} × (1 + {{case2.gamma|abs}}) = {{case2.far.n1}}, which is twice the launched {{case2.launched}}.",
+      explanation: "{{buffer.volts}} × (1 + {{given.gamma|abs}}) = {{given.n1}}, which is twice the launched {{given.launched}}.",
     },
     {
       kind: "check",
       id: "ringing-period",
-      prompt: "A {{run.length}} lone lead has {{lone.delay}} of delay. What is the period of the ringing when the source resistance is much lower than Z0?",
-      answer: { value: numbers.case1.period.value, unit: "ns", tolerance: 0.02 },
+      prompt: "A {{given.length}} lone lead has {{lone.delay}} of delay. What is the period of the ringing when the source resistance is much lower than Z0?",
+      givens: checkGivens.ringingPeriod.map((given) => ({ numbers: given, answer: { value: given.period.value, unit: "ns", tolerance: 0.02 } })),
       hint: "With Γ_s negative the far-end voltage repeats after two round trips: four one-way delays.",
-      explanation: "One way: {{run.length}} × {{lone.delay}} = {{case1.delay}}. Period: 4 × {{case1.delay}} = {{case1.period}} (about {{case1.frequency}}).",
+      explanation: "One way: {{given.length}} × {{lone.delay}} = {{given.delay}}. Period: 4 × {{given.delay}} = {{given.period}} (about {{given.frequency}}).",
     },
     {
       kind: "text",
@@ -173,10 +174,10 @@ A fourth case, one wave at a time: the 3.3 V controller pin ({{pin.resistance}},
       kind: "check",
       id: "settling-time",
       prompt:
-        "In the fourth case (Γ_s = {{case4.gamma}}, T_d = {{case4.delay}}, open far end), how long after the driver switches does the far end stay within 1 % of its final level?",
-      answer: { value: numbers.case4.settledAt.value, unit: "ns", tolerance: 0.02 },
+        "The controller pin now drives the same lead through another resistor: Γ_s = {{given.gamma}}, T_d = {{given.delay}}, open far end. How long after the driver switches does the far end stay within 1 % of its final level?",
+      givens: checkGivens.settlingTime.map((given) => ({ numbers: given, answer: { value: given.settledAt.value, unit: "ns", tolerance: 0.02 } })),
       hint: "Find the first n with |Γ_s|^n < 0.01; arrival n comes at (2n − 1) × T_d.",
-      explanation: "ln 0.01 / ln {{case4.gamma|abs}} = {{case4.settlingRatio}}, so n = {{case4.settledArrival}}, which arrives at {{case4.settledFactor}} × {{case4.delay}} ≈ {{case4.settledAt}}: just after a 0 bit's {{sim.zeroHigh|unit=ns|dp=0}} high time has ended.",
+      explanation: "ln 0.01 / ln {{given.gamma|abs}} = {{given.settlingRatio}}, so n = {{given.settledArrival}}, which arrives at {{given.settledFactor}} × {{given.delay}} ≈ {{given.settledAt}}.",
     },
     {
       kind: "text",
@@ -262,10 +263,29 @@ Everything here is fixed by two numbers you control: the cable (which sets Z0) a
       kind: "check",
       id: "staircase-second-step",
       prompt:
-        "A 5 V driver with Γ_s = {{case3.gamma|sign}} drives an open-ended line. What is the far-end voltage after the second arrival?",
-      answer: { value: numbers.case3.far.n2.value, unit: "V", tolerance: 0.02 },
+        "A 5 V driver with Γ_s = {{given.gamma|sign}} drives an open-ended line. What is the far-end voltage after the second arrival?",
+      givens: checkGivens.secondStep.map((given) => ({ numbers: given, answer: { value: given.n2.value, unit: "V", tolerance: 0.02 } })),
       hint: "V_far(n) = V × (1 − Γ_s^n) with n = 2.",
-      explanation: "{{case3.gamma}}² = {{case3.squared}}; {{buffer.volts}} × (1 − {{case3.squared}}) ≈ {{case3.far.n2}}, just above a 5 V pixel's {{pixel.high}} threshold.",
+      explanation: "{{given.gamma}}² = {{given.squared}}; {{buffer.volts}} × (1 − {{given.squared}}) ≈ {{given.n2}}, against a 5 V pixel's {{pixel.high}} threshold.",
+    },
+    {
+      kind: "choice",
+      id: "predict-reflection",
+      ask: "predict",
+      prompt: "Before the simulator draws it: what will the far end of this run look like at the first pixel's data pin?",
+      hint: "Work out the sign of the source's reflection coefficient: (R_source − Z0) / (R_source + Z0).",
+      explanation: "A negative source coefficient alternates the reflections: ringing. A positive one adds them in the same direction: a staircase. Near zero, the first arrival is the settled level.",
+      runs: [bufferRun("beside-ground", 10, 0), bufferRun("beside-ground", 10, 82), bufferRun("beside-ground", 10, 330), bufferRun("three-core", 10, 220)],
+    },
+    {
+      kind: "choice",
+      id: "diagnose-reflection",
+      ask: "diagnose",
+      prompt: "This run flickers on site. The far end, as the simulator draws it, is below. Which one change makes it work on every pixel that meets its datasheet?",
+      hint: "Name the shape first: a staircase that arrives too late, or a level that never reaches the threshold.",
+      explanation: "A staircase comes from a source far above the cable's impedance: less resistance brings the first step up. A level below the threshold needs a driver with a higher level.",
+      runs: [bufferRun("beside-ground", 20, 220), bufferRun("three-core", 10, 220), pinRun("lone-lead", 10, 47), bufferRun("coax-75", 20, 220)],
+      fixes: courseFixes,
     },
     {
       kind: "text",

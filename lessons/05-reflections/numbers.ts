@@ -60,9 +60,6 @@ function caseTwo() {
     resistance,
     gamma,
     far,
-    numerator: q(resistance.value - beside.z0, "", 1, "R_src − Z0"),
-    denominator: q(resistance.value + beside.z0, "", 1, "R_src + Z0"),
-    launched: q(launchedStep(buffer5v.highVoltage, resistance.value, beside.z0), "V", 2, "V × Z0 / (R_src + Z0)"),
     overshoot: q(line.far(1) - buffer5v.highVoltage, "V", 1, "first arrival − settled level"),
     clampCurrent: q((line.far(1) - pixel.clamp.value) / beside.z0, "mA", 0, "(V_far(1) − clamp level) / Z0"),
   };
@@ -76,7 +73,6 @@ function caseThree() {
     resistance,
     gamma,
     far,
-    squared: q(line.gamma ** 2, "", 3, "Γs²"),
     roundTrip: q(2 * line.delay, "ns", 0, "2 × T_d"),
     delay: q(line.delay, "ns", 1, "length × delay per metre (catalogue)"),
     crossArrival: q(crossing, "", 0, "first n with V × (1 − Γs^n) above the high threshold"),
@@ -165,6 +161,57 @@ export const numbers = {
   },
 } satisfies NumberTree;
 
+const GIVEN = "the learner's given (a premise; lib/quick-checks picks one per learner)";
+
+/** The buffer through `series` into data beside ground, as a learner's given. */
+function besideGiven(series: number) {
+  const resistance = buffer5v.outputResistance + series;
+  const line = bounce(buffer5v.highVoltage, resistance, beside.z0, beside.delayPerMetre);
+  return {
+    series: q(series, "Ω", 0, GIVEN),
+    resistance: q(resistance, "Ω", 0, "driver resistance + series resistor"),
+    numerator: q(resistance - beside.z0, "", 1, "R_src − Z0"),
+    denominator: q(resistance + beside.z0, "", 1, "R_src + Z0"),
+    gamma: q(line.gamma, "", 3, GAMMA),
+    squared: q(line.gamma ** 2, "", 3, "Γs²"),
+    launched: q(launchedStep(buffer5v.highVoltage, resistance, beside.z0), "V", 2, "V × Z0 / (R_src + Z0)"),
+    n1: q(line.far(1), "V", 2, FAR),
+    n2: q(line.far(2), "V", 2, FAR),
+  };
+}
+
+/** The controller pin through `series` into 10 m of lone lead, settling as a learner's given. */
+function settlingGiven(series: number) {
+  const line = bounce(controllerPin3v3.highVoltage, controllerPin3v3.outputResistance + series, lone.z0, lone.delayPerMetre);
+  const settled = settlingArrival(line.gamma, 0.01);
+  return {
+    series: q(series, "Ω", 0, GIVEN),
+    gamma: q(line.gamma, "", 3, GAMMA),
+    delay: q(line.delay, "ns", 1, "length × delay per metre (catalogue)"),
+    settlingRatio: q(Math.log(0.01) / Math.log(Math.abs(line.gamma)), "", 1, "ln 0.01 / ln |Γs|"),
+    settledArrival: q(settled, "", 0, "first n with |Γs|^n < 0.01"),
+    settledFactor: q(2 * settled - 1, "", 0, "2n − 1"),
+    settledAt: q(line.at(settled), "ns", 0, AT),
+  };
+}
+
+/** Each learner's premises for the quick checks, away from the lesson's worked cases, and the answers computed from them. */
+export const checkGivens = {
+  sourceCoefficient: [10, 47, 56, 68].map(besideGiven),
+  firstArrival: [0, 22, 39, 62].map(besideGiven),
+  ringingPeriod: [6, 8, 12, 15].map((length) => {
+    const delay = length * lone.delayPerMetre;
+    return {
+      length: q(length, "m", 0, GIVEN),
+      delay: q(delay, "ns", 1, "length × delay per metre (catalogue)"),
+      period: q(4 * delay, "ns", 0, "four one-way delays"),
+      frequency: q(1 / (4 * delay), "MHz", 1, "1 / period"),
+    };
+  }),
+  settlingTime: [47, 68, 150, 180].map(settlingGiven),
+  secondStep: [200, 220, 240, 440].map(besideGiven),
+};
+
 export const plainNumbers: PlainNumber[] = [
   { text: "2 × V_incident", why: "the doubling at an open end, in the formula" },
   { text: "2 × V_launched", why: "the doubling at an open end, in the formula" },
@@ -172,6 +219,7 @@ export const plainNumbers: PlainNumber[] = [
   { text: "ringing every 4 T_d", why: "the ringing period, four one-way delays" },
   { text: "faster than 4 T_d", why: "the ringing period, four one-way delays" },
   { text: "4 × {{case1.delay}}", why: "the ringing period, four one-way delays" },
+  { text: "4 × {{given.delay}}", why: "the ringing period, four one-way delays" },
   { text: "ln 0.01", why: "the lesson's 1 % settling criterion (its own choice, as the text says)" },
   { text: "|Γ_s|^n < 0.01", why: "the lesson's 1 % settling criterion" },
 ];

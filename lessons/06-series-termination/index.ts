@@ -1,9 +1,10 @@
+import { bufferRun, courseFixes, pinRun } from "../choice-check-runs";
 import { controllerPin3v3 } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { lab } from "./lab";
-import { numbers } from "./numbers";
+import { checkGivens, numbers } from "./numbers";
 
 const pin = { highVoltage: controllerPin3v3.highVoltage, outputResistance: controllerPin3v3.outputResistance, edgeTime: controllerPin3v3.edgeTime };
 
@@ -124,10 +125,11 @@ The second arrival matters as much as the first: after the doubled wave lifts th
       kind: "check",
       id: "first-arrival-3v3",
       prompt:
-        "A 3.3 V pin ({{pin.resistance}}) drives a {{lone.z0}} lone lead through {{field.lone}}. What voltage does the first arrival reach at the open far end?",
-      answer: { value: numbers.onLone.field.first.value, unit: "V", tolerance: 0.02 },
+        "A 3.3 V pin ({{pin.resistance}}) drives a {{lone.z0}} lone lead through {{given.series}}. What voltage does the first arrival reach at the open far end?",
+      givens: checkGivens.firstArrival.map((given) => ({ numbers: given, answer: { value: given.first.value, unit: "V", tolerance: 0.02 } })),
       hint: "V_far(1) = 2 × V × Z0 / (R_src + Z0).",
-      explanation: "2 × {{pin.volts}} × {{lone.z0|bare}} / ({{onLone.field.resistance|bare}} + {{lone.z0|bare}}) = {{onLone.field.firstNumerator}} / {{onLone.field.firstDenominator}} ≈ {{onLone.field.first}}: over a 5 V pixel's {{pixel.high}} threshold by only {{onLone.field.aboveThreshold}}, and for a few nanoseconds; what the run can count on is the {{onLone.field.riseMargin}} it clears where typical pixels read a rise.",
+      explanation:
+        "2 × {{pin.volts}} × {{lone.z0|bare}} / ({{given.resistance|bare}} + {{lone.z0|bare}}) ≈ {{given.first}}, against a 5 V pixel's {{pixel.high}} threshold; and the first arrival lasts only a round trip before the next one pulls it back.",
     },
     {
       kind: "text",
@@ -189,10 +191,30 @@ On the workbench the limit lies lower still, because the falling staircase also 
       kind: "check",
       id: "staircase-arrival",
       prompt:
-        "A 5 V driver with R_src = {{threeCoreRun.fast.resistance}} drives {{threeCoreRun.length}} of three-core cable (Z0 = {{threeCore.z0}}, {{threeCore.delay}}). Arrival n = {{threeCoreRun.fast.arrival|bare}} is the first above {{pixel.high}}. How long after the driver switches does it arrive?",
-      answer: { value: numbers.threeCoreRun.fast.crossing.value, unit: "ns", tolerance: 0.02 },
+        "A 5 V driver with R_src = {{given.resistance}} drives {{threeCoreRun.length}} of three-core cable (Z0 = {{threeCore.z0}}, {{threeCore.delay}}). Arrival n = {{given.arrival|bare}} is the first above {{pixel.high}}. How long after the driver switches does it arrive?",
+      givens: checkGivens.staircaseArrival.map((given) => ({ numbers: given, answer: { value: given.crossing.value, unit: "ns", tolerance: 0.02 } })),
       hint: "The nth arrival comes (2n − 1) one-way delays after the switch.",
-      explanation: "One way: {{threeCoreRun.length}} × {{threeCore.delay}} = {{threeCoreRun.delay}}. Arrival {{threeCoreRun.fast.arrival}}: {{threeCoreRun.fast.factor}} × {{threeCoreRun.delay}} ≈ {{threeCoreRun.fast.crossing}}. The 0 bit's fall reaches the far end at {{sim.zeroHigh|unit=ns|dp=0}} + {{threeCoreRun.delay}} ≈ {{threeCoreRun.fall}}, so the pixel sees a pulse of barely {{threeCoreRun.fast.lead}} before the far end turns down: shorter than the {{sim.minPulse|unit=ns|dp=0}} it needs to count a pulse.",
+      explanation:
+        "One way: {{threeCoreRun.length}} × {{threeCore.delay}} = {{threeCoreRun.delay}}. Arrival {{given.arrival}}: {{given.factor}} × {{threeCoreRun.delay}} ≈ {{given.crossing}}. The 0 bit's fall reaches the far end at {{sim.zeroHigh|unit=ns|dp=0}} + {{threeCoreRun.delay}} ≈ {{threeCoreRun.fall}}: compare the two to see how much of the pulse the pixel gets.",
+    },
+    {
+      kind: "choice",
+      id: "pick-termination-trace",
+      ask: "pick-trace",
+      prompt: "The same buffer drives the same run of twisted pair through three different series resistors. Each trace below is the far end of one of them. Which trace belongs to the run described?",
+      hint: "The matched resistor makes the source equal the cable's impedance: the far end steps once to the full level.",
+      explanation: "Below the match the far end overshoots and rings; at the match it steps once; well above it, it climbs a staircase.",
+      runs: [bufferRun("twisted-pair", 15, 0), bufferRun("twisted-pair", 15, 82), bufferRun("twisted-pair", 15, 330)],
+    },
+    {
+      kind: "choice",
+      id: "diagnose-termination",
+      ask: "diagnose",
+      prompt: "This run flickers on site. The far end, as the simulator draws it, is below. Which one change makes it work on every pixel that meets its datasheet?",
+      hint: "Compare the source resistance with the cable's impedance, and the settled level with the threshold.",
+      explanation: "A resistor far above the match makes a staircase: a third of it comes near the match. A controller pin whose level stays below the threshold is fixed only by a driver with a higher level.",
+      runs: [bufferRun("beside-ground", 20, 220), bufferRun("lone-lead", 20, 1000), pinRun("three-core", 10, 47), bufferRun("three-core", 20, 220)],
+      fixes: courseFixes,
     },
     {
       kind: "text",

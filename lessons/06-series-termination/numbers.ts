@@ -106,7 +106,6 @@ function threeCoreStaircase(series: number) {
 const threeCoreDelay = THREE_CORE_LENGTH * threeCore.delayPerMetre;
 const fallAtFarEnd = sim.zeroHigh.value + threeCoreDelay;
 const fast = threeCoreStaircase(330);
-const firstOnLone = arrivals(FIELD_LONE, lone.z0).first.value;
 
 export const numbers = {
   field: { lone: q(FIELD_LONE, "Ω", 0, FIELD_RULE), beside: q(FIELD_BESIDE, "Ω", 0, FIELD_RULE) },
@@ -119,9 +118,6 @@ export const numbers = {
     field: {
       ...source(FIELD_LONE, lone.z0),
       ...arrivals(FIELD_LONE, lone.z0),
-      firstNumerator: q(2 * PIN_V * lone.z0, "", 1, "2 × V × Z0"),
-      firstDenominator: q(PIN_R + FIELD_LONE + lone.z0, "", 1, "R_src + Z0"),
-      aboveThreshold: q(firstOnLone - HIGH, "V", 2, "first arrival − high threshold"),
     },
     small: { ...source(FIELD_BESIDE, lone.z0), first: arrivals(FIELD_BESIDE, lone.z0).first, second: arrivals(FIELD_BESIDE, lone.z0).second },
   },
@@ -167,6 +163,18 @@ export const numbers = {
     timingMargin: q(lab.passRule.minTimingMargin, "ns", 0, "the lab's pass rule (lab.ts)"),
   },
 } satisfies NumberTree;
+
+const GIVEN = "the learner's given (a premise; lib/quick-checks picks one per learner)";
+
+/** Each learner's premises for the quick checks, away from the lesson's worked resistors, and the answers computed from them. */
+export const checkGivens = {
+  firstArrival: [120, 150, 160, 180].map((series) => ({
+    series: q(series, "Ω", 0, GIVEN),
+    ...source(series, lone.z0),
+    first: arrivals(series, lone.z0).first,
+  })),
+  staircaseArrival: [150, 180, 560, 680].map((series) => ({ ...threeCoreStaircase(series), series: q(series, "Ω", 0, GIVEN) })),
+};
 
 export const plainNumbers: PlainNumber[] = [
   { text: "V / 2", why: "half the driver's level, in the formulas of a matched line" },

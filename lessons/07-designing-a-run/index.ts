@@ -1,10 +1,11 @@
+import { bufferRun, courseFixes, pinRun } from "../choice-check-runs";
 import { controllerPin3v3 } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { bench } from "./bench";
 import { lab } from "./lab";
-import { numbers } from "./numbers";
+import { checkGivens, numbers } from "./numbers";
 
 export const lesson = {
   slug: "designing-a-run",
@@ -155,10 +156,10 @@ Low-voltage DC at high current can start fires. A conductor too thin for its cur
     {
       kind: "check",
       id: "supply-drop",
-      prompt: "A 5 V strip draws {{supply.current}} through {{supply.length}} of two-core {{supply.gauge}} AWG cable ({{supply.perMetre}} per conductor). What is the voltage drop in the cable?",
-      answer: { value: numbers.supply.drop.value, unit: "V", tolerance: 0.02 },
+      prompt: "A 5 V strip draws {{given.current}} through {{given.length}} of two-core {{supply.gauge}} AWG cable ({{supply.perMetre}} per conductor). What is the voltage drop in the cable?",
+      givens: checkGivens.supplyDrop.map((given) => ({ numbers: given, answer: { value: given.drop.value, unit: "V", tolerance: 0.02 } })),
       hint: "The current flows out on one conductor and back on the other: the loop is twice the length.",
-      explanation: "R = 2 × {{supply.length}} × {{supply.perMetreInOhms}} = {{supply.loop}}; V = {{supply.current}} × {{supply.loop}} ≈ {{supply.drop}}, far too much for a 5 V strip.",
+      explanation: "R = 2 × {{given.length}} × {{supply.perMetreInOhms}} = {{given.loop}}; V = {{given.current}} × {{given.loop}} ≈ {{given.drop}}, a large share of a 5 V strip's supply.",
     },
     {
       kind: "text",
@@ -197,6 +198,25 @@ The other tool uses the pixel chain itself. Every pixel regenerates the data wit
       answer: { value: numbers.longTwisted.delay.value, unit: "ns", tolerance: 0.02 },
       hint: "Length × delay per metre.",
       explanation: "{{longTwisted.length}} × {{twisted.delay}} = {{longTwisted.delay}}. A staircase needing three arrivals would cross {{longTwisted.factor}} × {{longTwisted.delay}} = {{longTwisted.crossing}} after the switch, after a 0 bit's fall has reached the far end ({{sim.zeroHigh|unit=ns|dp=0}} + {{longTwisted.delay}} = {{longTwisted.fall}}): the 0s would be lost.",
+    },
+    {
+      kind: "choice",
+      id: "pick-design-trace",
+      ask: "pick-trace",
+      prompt: "Four candidate designs for the same twisted-pair run. Each trace below is the far end of one of them. Which trace belongs to the design described?",
+      hint: "Read the level first (which driver), then the shape (how the resistor compares with the cable's impedance).",
+      explanation: "The 3.3 V pin settles at its own lower level; with the buffer the resistor decides between overshoot, a clean step and a staircase.",
+      runs: [bufferRun("twisted-pair", 10, 82), pinRun("twisted-pair", 10, 82), bufferRun("twisted-pair", 10, 0), bufferRun("twisted-pair", 10, 470)],
+    },
+    {
+      kind: "choice",
+      id: "diagnose-design",
+      ask: "diagnose",
+      prompt: "A design that flickers on site. The far end, as the simulator draws it, is below. Which one change makes it work on every pixel that meets its datasheet?",
+      hint: "Decide whether the trouble is the level the far end settles at or how slowly it gets there.",
+      explanation: "A slow staircase needs less resistance; a level below the threshold needs a driver with a higher level. Another cable changes neither enough here.",
+      runs: [bufferRun("coax-75", 10, 470), pinRun("coax-75", 10, 47), bufferRun("beside-ground", 30, 220), pinRun("lone-lead", 20, 47)],
+      fixes: courseFixes,
     },
     {
       kind: "text",

@@ -172,6 +172,27 @@ export const numbers = {
   longTwisted: longTwisted(),
 } satisfies NumberTree;
 
+const GIVEN = "the learner's given (a premise; lib/quick-checks picks one per learner)";
+
+/** Each learner's premises for the quick checks, away from the lesson's worked feed, and the answers computed from them. */
+export const checkGivens = {
+  supplyDrop: [
+    [6, 5],
+    [8, 4],
+    [12, 3],
+    [9, 3],
+  ].map(([current, length]) => {
+    const perMetre = awgResistancePerMetre(18);
+    const loop = 2 * length * perMetre;
+    return {
+      current: q(current, "A", 0, GIVEN),
+      length: q(length, "m", 0, GIVEN),
+      loop: q(loop, "Ω", 3, "2 × length × resistance per metre"),
+      drop: q(current * loop, "V", 2, "I × R"),
+    };
+  }),
+};
+
 export const plainNumbers: PlainNumber[] = [
   { text: "one controller with 3.3 V outputs", why: "the controller-pin class" },
   { text: "**The 3.3 V window closes.**", why: "the controller-pin class" },

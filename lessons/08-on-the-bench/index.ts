@@ -1,10 +1,11 @@
+import { bufferRun, courseFixes, pinRun } from "../choice-check-runs";
 import { buffer5v } from "../drivers";
 import { lessonNumbers } from "../numbers/lesson-numbers";
 import { sharedNumbers } from "../numbers/shared-numbers";
 import type { LessonInput } from "../schema";
 import { bench } from "./bench";
 import { lab } from "./lab";
-import { numbers } from "./numbers";
+import { checkGivens, numbers } from "./numbers";
 
 export const lesson = {
   slug: "on-the-bench",
@@ -46,18 +47,18 @@ The scope's **sample rate** matters too: it must take several samples during the
     {
       kind: "check",
       id: "scope-rise-time",
-      prompt: "Using t_rise ≈ {{scopeFactor}} / bandwidth, what is the rise time of a {{scope100.bandwidth}} oscilloscope?",
-      answer: { value: numbers.scope100.rise.value, unit: "ns", tolerance: 0.02 },
+      prompt: "Using t_rise ≈ {{scopeFactor}} / bandwidth, what is the rise time of a {{given.bandwidth}} oscilloscope?",
+      givens: checkGivens.scopeRise.map((given) => ({ numbers: given, answer: { value: given.rise.value, unit: "ns", tolerance: 0.02 } })),
       hint: "Divide {{scopeFactor}} by the bandwidth in hertz.",
-      explanation: "{{scopeFactor}} / {{scope100.bandwidth|unit=Hz|exp=6}} = {{scope100.rise|unit=s|exp=-9}} = {{scope100.rise}}.",
+      explanation: "{{scopeFactor}} / {{given.bandwidth|unit=Hz|exp=6}} = {{given.rise|unit=s|exp=-9}} = {{given.rise}}.",
     },
     {
       kind: "check",
       id: "measured-rise",
-      prompt: "A true {{trueEdge}} edge is viewed on that {{scope100.bandwidth}} scope ({{scope100.rise}}). About what rise time does the screen show?",
-      answer: { value: numbers.scope100.seen.value, unit: "ns", tolerance: 0.02 },
+      prompt: "A true {{trueEdge}} edge is viewed on a {{given.bandwidth}} scope ({{given.rise}}). About what rise time does the screen show?",
+      givens: checkGivens.measuredRise.map((given) => ({ numbers: given, answer: { value: given.seen.value, unit: "ns", tolerance: 0.02 } })),
       hint: "Root sum of squares: √(t_signal² + t_scope²).",
-      explanation: "√({{trueEdge|bare}}² + {{scope100.rise|bare}}²) ns = √{{scope100.sumOfSquares}} ns ≈ {{scope100.seen}}.",
+      explanation: "√({{trueEdge|bare}}² + {{given.rise|bare}}²) ns = √{{given.sumOfSquares}} ns ≈ {{given.seen}}.",
     },
     {
       kind: "text",
@@ -105,19 +106,38 @@ The cure is a **short ground**: the spring-clip ground tip supplied with most pr
     {
       kind: "check",
       id: "ground-lead-ring",
-      prompt: "A probe's {{probe.capacitance}} tip capacitance and a {{ground.inductance}} ground lead form a resonant circuit. At what frequency does it ring?",
-      answer: { value: numbers.ground.frequency.value, unit: "MHz", tolerance: 0.02 },
+      prompt: "A probe's {{probe.capacitance}} tip capacitance and a {{given.inductance}} ground lead form a resonant circuit. At what frequency does it ring?",
+      givens: checkGivens.groundRing.map((given) => ({ numbers: given, answer: { value: given.frequency.value, unit: "MHz", tolerance: 0.02 } })),
       hint: "f = 1 / (2π × √(L × C)), in henries and farads.",
-      explanation: "√({{ground.inductance|unit=H|exp=-9|bare}} × {{probe.capacitance|unit=F|exp=-12|bare}}) = {{ground.rootLC|unit=s|exp=-9}}; 2π × that = {{ground.period|unit=s|exp=-9}}; 1 / {{ground.period}} ≈ {{ground.frequency}}.",
+      explanation: "√({{given.inductance|unit=H|exp=-9|bare}} × {{probe.capacitance|unit=F|exp=-12|bare}}) = {{given.rootLC|unit=s|exp=-9}}; 2π × that = {{given.period|unit=s|exp=-9}}; 1 / {{given.period}} ≈ {{given.frequency}}.",
     },
     {
       kind: "check",
       id: "probe-loading",
       prompt:
-        "At the far end of a lone lead (Z0 ≈ {{lone.z0}}), the pixel's {{sim.inputCapacitance}} and a probe's {{probe.capacitance}} charge through Z0. About what 10–90 % rise time does that capacitance add?",
-      answer: { value: numbers.loading.loneProbe.value, unit: "ns", tolerance: 0.03 },
+        "At the far end of a lone lead (Z0 ≈ {{lone.z0}}), the pixel's {{sim.inputCapacitance}} and a probe's {{given.capacitance}} charge through Z0. About what 10–90 % rise time does that capacitance add?",
+      givens: checkGivens.probeLoading.map((given) => ({ numbers: given, answer: { value: given.rise.value, unit: "ns", tolerance: 0.03 } })),
       hint: "τ = Z0 × C with C the total at the far end; rise ≈ {{textbook.ln9}} × τ.",
-      explanation: "τ = {{lone.z0}} × {{probe.withPixel}} = {{loading.loneTau}}; {{textbook.ln9}} × {{loading.loneTau}} ≈ {{loading.loneProbe}}.",
+      explanation: "τ = {{lone.z0}} × {{given.withPixel}} = {{given.tau}}; {{textbook.ln9}} × {{given.tau}} ≈ {{given.rise}}.",
+    },
+    {
+      kind: "choice",
+      id: "predict-scope",
+      ask: "predict",
+      prompt: "You are about to probe the first pixel's data pin of this run. Before the simulator draws it: what shape do you expect on the scope?",
+      hint: "Predict from the run's numbers before you look: the driver's level against the threshold, the source resistance against the cable's impedance.",
+      explanation: "A prediction made before probing tells a fault in the run from a fault in the measurement: when the scope disagrees with it, check the probe's ground lead first.",
+      runs: [bufferRun("lone-lead", 8, 0), bufferRun("twisted-pair", 15, 100), bufferRun("beside-ground", 15, 330), pinRun("twisted-pair", 10, 100)],
+    },
+    {
+      kind: "choice",
+      id: "diagnose-bench",
+      ask: "diagnose",
+      prompt: "The scope on site agrees with the simulator's far end below, and the pixels flicker. Which one change makes it work on every pixel that meets its datasheet?",
+      hint: "Name the shape first, then the change that addresses its cause.",
+      explanation: "A staircase that arrives too late comes from too much resistance; a settled level below the threshold from the driver. Each has one change that addresses it.",
+      runs: [bufferRun("beside-ground", 10, 220), pinRun("beside-ground", 5, 220), bufferRun("three-core", 20, 220), pinRun("lone-lead", 10, 47)],
+      fixes: courseFixes,
     },
     {
       kind: "text",

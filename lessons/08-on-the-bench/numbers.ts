@@ -40,7 +40,6 @@ function farEndRise(z0: number, capacitance: number) {
 }
 
 const lead = GROUND_LEAD_LENGTH * INDUCTANCE_PER_METRE;
-const leadRootLC = Math.sqrt(lead * PROBE_C);
 const wanted = buffer5v.edgeTime / 3;
 const lone = cableCatalogue["lone-lead"];
 const beside = cableCatalogue["beside-ground"];
@@ -67,13 +66,10 @@ export const numbers = {
     lonePixel: farEndRise(lone.z0, INPUT_C),
     loneProbe: farEndRise(lone.z0, INPUT_C + PROBE_C),
     besideProbe: farEndRise(beside.z0, INPUT_C + PROBE_C),
-    loneTau: q(lone.z0 * (INPUT_C + PROBE_C), "ns", 1, "τ = Z0 × C"),
   },
   ground: {
     length: q(GROUND_LEAD_LENGTH, "cm", 0, PRACTICE),
     inductance: q(lead, "nH", 0, "length × about 1 nH per millimetre (rule of thumb)"),
-    rootLC: q(leadRootLC, "ns", 3, "√(L × C)"),
-    period: q(2 * Math.PI * leadRootLC, "ns", 2, "2π × √(L × C)"),
     frequency: q(resonance(lead, PROBE_C), "MHz", 0, "f = 1 / (2π × √(L × C))"),
     besideHalfR: q(Math.round(beside.z0) / 2, "Ω", 0, "R / 2 with R ≈ Z0 of data beside ground"),
     besideDamping: q(damping(beside.z0, lead, PROBE_C), "", 2, "ζ = (R / 2) × √(C / L)"),
@@ -88,6 +84,30 @@ export const numbers = {
   },
   longLatch: pixelDataStream.longLatch,
 } satisfies NumberTree;
+
+const GIVEN = "the learner's given (a premise; lib/quick-checks picks one per learner)";
+
+/** Each learner's premises for the quick checks, away from the lesson's worked scopes and probe, and the answers computed from them. */
+export const checkGivens = {
+  scopeRise: [60e6, 70e6, 150e6, 200e6].map((bandwidth) => ({ ...scope(bandwidth), bandwidth: q(bandwidth, "MHz", 0, GIVEN) })),
+  measuredRise: [40e6, 60e6, 70e6, 80e6].map((bandwidth) => ({ ...scope(bandwidth), bandwidth: q(bandwidth, "MHz", 0, GIVEN) })),
+  groundRing: [0.05, 0.1, 0.2, 0.3].map((length) => {
+    const inductance = length * INDUCTANCE_PER_METRE;
+    const rootLC = Math.sqrt(inductance * PROBE_C);
+    return {
+      inductance: q(inductance, "nH", 0, GIVEN),
+      rootLC: q(rootLC, "ns", 3, "√(L × C)"),
+      period: q(2 * Math.PI * rootLC, "ns", 2, "2π × √(L × C)"),
+      frequency: q(resonance(inductance, PROBE_C), "MHz", 0, "f = 1 / (2π × √(L × C))"),
+    };
+  }),
+  probeLoading: [7e-12, 12e-12, 14e-12, 20e-12].map((capacitance) => ({
+    capacitance: q(capacitance, "pF", 0, GIVEN),
+    withPixel: q(capacitance + INPUT_C, "pF", 0, "probe + the pixel's input capacitance"),
+    tau: q(lone.z0 * (INPUT_C + capacitance), "ns", 1, "τ = Z0 × C"),
+    rise: farEndRise(lone.z0, INPUT_C + capacitance),
+  })),
+};
 
 export const plainNumbers: PlainNumber[] = [
   { text: "(−3 dB)", why: "the definition of bandwidth" },

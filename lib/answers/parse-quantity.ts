@@ -127,6 +127,8 @@ export function gradeNumericAnswer(entry: string, answer: NumericAnswer): Numeri
   const readAs = sameText(entry, parsed.shown) ? parsed.shown : `${quoted(entry)} works out to ${parsed.shown}, which`;
   const message = correct
     ? `Correct: ${parsed.shown}.`
-    : `Not yet: ${readAs} is not the answer (answers within ${percent(answer.tolerance)} count).`;
+    : answer.tolerance === 0
+      ? `Not yet: ${readAs} is not the answer (only the exact value counts).`
+      : `Not yet: ${readAs} is not the answer (answers within ${percent(answer.tolerance)} count).`;
   return { status: correct ? "correct" : "incorrect", correct, value: parsed.value, message };
 }

@@ -7,6 +7,7 @@ import {
   listGradebookLearners,
   listLearnerAttemptsForViewer,
   listLearnerBenchWorkForViewer,
+  listLearnerQuickCheckAnswersForViewer,
   type CohortLearner,
   type GradebookViewer,
   type LearnerBenchWork,
@@ -17,6 +18,7 @@ import { assembleGradebook, type Gradebook } from "./assemble";
 import { attemptRecord, type AttemptRecord } from "./attempt-record";
 import { attemptsPerDay, scoreDistributions, type AttemptDay, type ScoreDistribution } from "./charts";
 import { gradebookItems, itemKey, type GradebookItem } from "./items";
+import { quickCheckRecords, type LessonChecksRecord } from "./quick-check-record";
 
 export type CohortGradebook = { cohort: Cohort; gradebook: Gradebook };
 
@@ -78,6 +80,8 @@ export type LearnerRecord = {
   learner: CohortLearner;
   labs: LabRecord[];
   bench: BenchRecord[];
+  /** Quick-check answers, per lesson the learner has answered in. */
+  checks: LessonChecksRecord[];
 };
 
 /** One learner of the cohort: every lab attempt, rebuilt for redrawing, and their bench work. */
@@ -86,11 +90,12 @@ export async function loadLearnerRecord(params: {
   learnerId: string;
   viewer: GradebookViewer;
 }): Promise<LearnerRecord | null> {
-  const [cohort, learner, attempts, benchWork] = await Promise.all([
+  const [cohort, learner, attempts, benchWork, answers] = await Promise.all([
     findCohortForViewer(params),
     findCohortLearnerForViewer(params),
     listLearnerAttemptsForViewer(params),
     listLearnerBenchWorkForViewer(params),
+    listLearnerQuickCheckAnswersForViewer(params),
   ]);
   if (!cohort || !learner) return null;
   const items = gradebookItems(getCourse());
@@ -103,5 +108,5 @@ export async function loadLearnerRecord(params: {
   const bench = items
     .filter((item) => item.kind === "bench")
     .map((item): BenchRecord => ({ item, work: benchWork.find((w) => itemKey("bench", w.exerciseSlug) === item.key) ?? null }));
-  return { cohort, learner, labs, bench };
+  return { cohort, learner, labs, bench, checks: quickCheckRecords(getCourse(), params.learnerId, answers) };
 }

@@ -1,3 +1,4 @@
+import { quickCheckIds } from "@/lessons/schema";
 import type { Course } from "@/lessons/schema";
 
 export type LessonState = "locked" | "open" | "done";
@@ -75,7 +76,7 @@ function latest(dates: (Date | null)[]): Date | null {
 export function computeCourseProgress(course: Course, record: LearnerRecord): CourseProgress {
   const lessons: LessonProgressView[] = [];
   for (const lesson of course.lessons) {
-    const checkIds = lesson.blocks.flatMap((block) => (block.kind === "check" ? [block.id] : []));
+    const checkIds = quickCheckIds(lesson.blocks);
     const checkRows = checkIds.map((id) => record.checks.get(checkKey(lesson.slug, id)));
     const labRow = lesson.lab ? record.labs.get(lesson.lab.slug) : undefined;
     const stored = record.lessons.get(lesson.slug);

@@ -120,6 +120,7 @@ const openBenchOnlyAction: Row<ActionOutcome> = ["sign-in", "accepted", "refused
 
 const actionTable: Record<string, Row<ActionOutcome>> = {
   "app/(learn)/lessons/[lessonSlug]/actions.ts#answerQuickCheck": learnerAction,
+  "app/(learn)/lessons/[lessonSlug]/actions.ts#answerChoiceCheck": learnerAction,
   "app/(learn)/bench/[exerciseSlug]/actions.ts#startBenchDraft": openBenchOnlyAction,
   "app/(learn)/bench/[exerciseSlug]/actions.ts#submitBenchWork": openBenchOnlyAction,
   // Learner A's photo: learner B is told it is already gone.

@@ -3,6 +3,10 @@ import type { Browser, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { cohortMemberships, lessonProgress, quickCheckAnswers } from "@/db/schema";
+import { getLesson, type CheckBlock } from "@/lessons";
+import { formatQuantity } from "@/lessons/numbers/format-quantity";
+import { formatInUnit } from "@/lib/answers";
+import { numericCheckFor, quickCheckSeed } from "@/lib/quick-checks";
 import { createPerson, findDemoCohortId } from "../integration/support/people";
 import { launchBrowser, openPage, saveScreenshot, screenshotDir, signInThroughForm, type viewports } from "./support/browser";
 
@@ -42,8 +46,18 @@ async function answer(check: Locator, entry: string, expected: string): Promise<
   await check.getByRole("status").getByText(expected, { exact: true }).waitFor({ timeout: 15_000 });
 }
 
+const lessonOne = getLesson("pixel-data-stream")!;
+const bitRate = lessonOne.blocks.find((b): b is CheckBlock => b.kind === "check" && b.id === "bit-rate")!;
+const checkCount = lessonOne.blocks.filter((b) => b.kind === "check" || b.kind === "choice").length;
+
+/** The bit rate a learner's own copy of the first check asks for, as the page prints it. */
+function bitRateFor(learnerId: string): { period: string; rate: number; shown: string } {
+  const given = numericCheckFor(bitRate, quickCheckSeed(learnerId, lessonOne.slug, bitRate.id));
+  return { period: formatQuantity(given.given.period!.value, given.given.period!), rate: given.answer.value, shown: formatInUnit(given.answer.value, "kHz") };
+}
+
 function firstCheck(page: Page): Locator {
-  return page.getByRole("region", { name: "Quick check 1 of 5" });
+  return page.getByRole("region", { name: `Quick check 1 of ${checkCount}` });
 }
 
 describe("lessons and the course map", () => {
@@ -71,18 +85,19 @@ describe("lessons and the course map", () => {
       expect(await check.getByText("Hint").count()).toBe(0);
       await answer(check, "500 kHz", "Not yet: 500 kHz is not the answer (answers within 1 % count).");
       expect(await check.getByText("The bit rate is one bit per period").isVisible()).toBe(true);
-      await answer(check, "800 kHz", "Correct: 800 kHz.");
+      const mine = bitRateFor(learner.id);
+      await answer(check, mine.shown, `Correct: ${mine.shown}.`);
       await check.getByText("Why", { exact: true }).waitFor();
       expect(await check.getByText("Answered correctly").isVisible()).toBe(true);
       await check.screenshot({ path: `${screenshotDir}/lesson-1-check-answered-wide.png` });
 
       await page.reload();
       const reloaded = firstCheck(page);
-      await reloaded.getByRole("status").getByText("You answered this correctly: 800 kHz.").waitFor();
-      expect(await reloaded.getByLabel("Your answer").inputValue()).toBe("800 kHz");
-      expect(await reloaded.getByText("f = 1 / 1.25 µs", { exact: false }).isVisible()).toBe(true);
+      await reloaded.getByRole("status").getByText(`You answered this correctly: ${mine.shown}.`).waitFor();
+      expect(await reloaded.getByLabel("Your answer").inputValue()).toBe(mine.shown);
+      expect(await reloaded.getByText(`f = 1 / ${mine.period}`, { exact: false }).isVisible()).toBe(true);
       const rail = page.getByRole("complementary", { name: "In this lesson" });
-      expect(await rail.getByText("Quick checks: 1 of 5 answered correctly").isVisible()).toBe(true);
+      expect(await rail.getByText(`Quick checks: 1 of ${checkCount} answered correctly`).isVisible()).toBe(true);
       await saveScreenshot(page, "lesson-1-wide");
 
       const rows = await db
@@ -93,7 +108,7 @@ describe("lessons and the course map", () => {
       expect(rows).toEqual([
         { entry: "3 V", value: null, correct: false, checkId: "bit-rate" },
         { entry: "500 kHz", value: 500e3, correct: false, checkId: "bit-rate" },
-        { entry: "800 kHz", value: 800e3, correct: true, checkId: "bit-rate" },
+        { entry: mine.shown, value: expect.closeTo(Number(mine.shown.replace(" kHz", "")) * 1e3, 6), correct: true, checkId: "bit-rate" },
       ]);
       const [opened] = await db
         .select()
@@ -103,8 +118,8 @@ describe("lessons and the course map", () => {
 
       await page.getByRole("link", { name: "Course map" }).first().click();
       await page.waitForURL("**/learn");
-      const lessonOne = page.getByRole("listitem").filter({ hasText: "1. The pixel data stream" });
-      expect(await lessonOne.getByText("Quick checks 1 of 5 right").isVisible()).toBe(true);
+      const lessonOneItem = page.getByRole("listitem").filter({ hasText: "1. The pixel data stream" });
+      expect(await lessonOneItem.getByText(`Quick checks 1 of ${checkCount} right`).isVisible()).toBe(true);
       expect(await page.getByRole("link", { name: "Continue lesson 1" }).isVisible()).toBe(true);
       expect(await page.getByRole("listitem").filter({ hasText: "2. Logic levels and noise margin" }).getByText("Locked").isVisible()).toBe(true);
       await saveScreenshot(page, "course-map-wide");
@@ -120,7 +135,7 @@ describe("lessons and the course map", () => {
   });
 
   it("redraws the pulse-train figure from the keyboard and reads a check on a phone", async () => {
-    const { context, page, errors } = await startSession("narrow");
+    const { learner, context, page, errors } = await startSession("narrow");
     try {
       await page.goto(lessonPath);
       const figure = page.getByRole("figure", { name: "Pulse train" });
@@ -135,7 +150,8 @@ describe("lessons and the course map", () => {
       await figure.screenshot({ path: `${screenshotDir}/lesson-1-figure-narrow.png` });
 
       const check = firstCheck(page);
-      await answer(check, "0.8MHz", "Correct: 800 kHz.");
+      const mine = bitRateFor(learner.id);
+      await answer(check, `${Number((mine.rate / 1e6).toPrecision(4))}MHz`, `Correct: ${mine.shown}.`);
       await saveScreenshot(page, "lesson-1-narrow");
       await page.goto("/learn");
       await saveScreenshot(page, "course-map-narrow");

@@ -13,6 +13,7 @@ import {
   listGradebookLearners,
   listLearnerAttemptsForViewer,
   listLearnerBenchWorkForViewer,
+  listLearnerQuickCheckAnswersForViewer,
   type GradebookViewer,
 } from "@/db/queries/gradebook";
 import { benchReviews, benchSubmissions, cohortMemberships, cohorts, labAttempts, schools, users, type User } from "@/db/schema";
@@ -24,6 +25,8 @@ import { loadCohortGradebook, loadCohortOverview, loadLearnerRecord } from "@/li
 import { gradeWork, outcomeOf, scoreWork, variantSeedFor } from "@/lib/grading";
 import { simulateRun } from "@/lib/sim";
 import { createPerson, findDemoSchoolId } from "./support/people";
+import { FAR_END_SHAPES } from "@/lib/quick-checks/far-end-shape";
+import { answerCheck, quickChecksOf, rightEntryFor } from "./support/quick-checks";
 
 // The grade book against the real database: rows in, grid out; every query refuses viewers who
 // do not teach the cohort or run its school; the query count does not grow with the cohort; the
@@ -285,6 +288,7 @@ describe("who may see a cohort", () => {
       expect(await findCohortLearnerForViewer(learnerParams)).toBeUndefined();
       expect(await listLearnerAttemptsForViewer(learnerParams)).toEqual([]);
       expect(await listLearnerBenchWorkForViewer(learnerParams)).toEqual([]);
+      expect(await listLearnerQuickCheckAnswersForViewer(learnerParams)).toEqual([]);
       expect(await loadLearnerRecord(learnerParams)).toBeNull();
     }
     // The other instructor still sees their own cohort.
@@ -320,6 +324,36 @@ describe("a learner's page", () => {
     expect(record.labs[2].attempts).toEqual([]);
     const bench = record.bench.find((b) => b.item.slug === benchSlug)!;
     expect(bench.work).toMatchObject({ status: "returned", reviews: [expect.objectContaining({ total: 6, maxTotal: 10, decision: "return" })] });
+  });
+});
+
+describe("a learner's quick checks", () => {
+  it("shows the instructor every stored answer in words, right or wrong, under its lesson and check", async () => {
+    const learner = learners.ana;
+    const lesson = getCourse().lessons[1]!;
+    const [numeric] = quickChecksOf(lesson).filter((c) => c.kind === "check");
+    const [choice] = quickChecksOf(lesson).filter((c) => c.kind === "choice");
+    const right = rightEntryFor(learner.id, lesson, choice!);
+    expect(choice).toMatchObject({ ask: "predict" });
+    const wrong = FAR_END_SHAPES.find((shape) => shape !== right)!;
+    const answers = [
+      await answerCheck(learner.id, lesson, choice!, wrong),
+      await answerCheck(learner.id, lesson, choice!, right),
+      await answerCheck(learner.id, lesson, numeric!, "2 kHz"),
+    ];
+    expect(answers.map((a) => a.correct)).toEqual([false, true, false]);
+
+    const record = (await loadLearnerRecord({ cohortId, learnerId: learner.id, viewer: viewerOf(instructor) }))!;
+    const shown = record.checks.find((l) => l.slug === lesson.slug)!;
+    expect(shown.number).toBe(lesson.number);
+    const choiceShown = shown.checks.find((c) => c.id === choice!.id)!;
+    expect(choiceShown.kind).toBe("Predict, then run");
+    expect(choiceShown.expected).toBe(answers[1]!.entry);
+    expect(choiceShown.asked).toMatch(/^The run: /);
+    expect(choiceShown.answers.map(({ entry, correct }) => ({ entry, correct }))).toEqual([answers[0], answers[1]]);
+    expect(shown.checks.find((c) => c.id === numeric!.id)!.answers).toMatchObject([{ entry: "2 kHz", correct: false }]);
+    // Lessons the learner never answered in are left out.
+    expect(record.checks.map((l) => l.slug)).not.toContain(getCourse().lessons[7]!.slug);
   });
 });
 

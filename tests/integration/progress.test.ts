@@ -6,11 +6,10 @@ import { randomUUID } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { recordQuickCheckAnswer } from "@/db/queries/quick-checks";
 import { labAttempts, lessonProgress } from "@/db/schema";
 import { getCourse } from "@/lessons";
-import { gradeNumericAnswer, formatInUnit } from "@/lib/answers";
 import { getCourseProgress, isLessonOpen, recordLessonOpened } from "@/lib/progress";
+import { answerCheck, quickChecksOf, rightEntryFor } from "./support/quick-checks";
 import { createPerson } from "./support/people";
 
 const course = getCourse();
@@ -33,14 +32,11 @@ async function insertAttempt(userId: string, labSlug: string, attempt: { number:
   });
 }
 
-/** Answers every check of a lesson the way the action does: graded, then stored. */
+/** Answers every check of a lesson the way the actions do: graded for the learner's own copy, then stored. */
 async function answerAllChecks(userId: string, lesson: (typeof course.lessons)[number], except: string[] = []) {
-  for (const block of lesson.blocks) {
-    if (block.kind !== "check" || except.includes(block.id)) continue;
-    const entry = formatInUnit(block.answer.value, block.answer.unit);
-    const grade = gradeNumericAnswer(entry, block.answer);
-    expect(grade.correct).toBe(true);
-    await recordQuickCheckAnswer({ userId, lessonSlug: lesson.slug, checkId: block.id, entry, value: grade.value, correct: true });
+  for (const check of quickChecksOf(lesson)) {
+    if (except.includes(check.id)) continue;
+    expect((await answerCheck(userId, lesson, check, rightEntryFor(userId, lesson, check))).correct).toBe(true);
   }
 }
 
@@ -112,10 +108,7 @@ describe("course progress against the database", () => {
     const learner = await newLearner();
     const check = first!.blocks.find((b) => b.kind === "check")!;
     if (check.kind !== "check") throw new Error("lesson 1 has no check");
-    for (const entry of ["3 V", "500 kHz"]) {
-      const grade = gradeNumericAnswer(entry, check.answer);
-      await recordQuickCheckAnswer({ userId: learner.id, lessonSlug: first!.slug, checkId: check.id, entry, value: grade.value, correct: grade.correct });
-    }
+    for (const entry of ["3 V", "500 kHz"]) expect((await answerCheck(learner.id, first!, check, entry)).correct).toBe(false);
     const progress = await getCourseProgress({ userId: learner.id });
     expect(progress.lessons[0]!.checks).toMatchObject({ answered: 1, correct: 0 });
   });

@@ -6,6 +6,7 @@ import { demoCohorts, demoLearnerEmail } from "@/db/demo-data";
 import { listBenchReviewQueue } from "@/db/queries/bench";
 import { benchSubmissions, cohorts, labAttempts, lessonProgress, quickCheckAnswers, users, type User } from "@/db/schema";
 import { getLab, getLesson } from "@/lessons";
+import { correctChoice, numericCheckFor, presentChoiceCheck, quickCheckSeed } from "@/lib/quick-checks";
 import { gradeNumericAnswer } from "@/lib/answers";
 import { stuckRule } from "@/lib/gradebook";
 import { loadCohortGradebook } from "@/lib/gradebook/load";
@@ -101,10 +102,17 @@ describe("the demo school's seeded activity", () => {
     const answers = await db.select().from(quickCheckAnswers).where(inArray(quickCheckAnswers.userId, learnerIds));
     expect(answers.some((a) => !a.correct)).toBe(true);
     for (const answer of answers) {
-      const check = getLesson(answer.lessonSlug)!.blocks.find((block) => block.kind === "check" && block.id === answer.checkId);
-      expect(check?.kind).toBe("check");
-      if (check?.kind !== "check") continue;
-      expect({ entry: answer.entry, correct: answer.correct }).toEqual({ entry: answer.entry, correct: gradeNumericAnswer(answer.entry, check.answer).correct });
+      const lesson = getLesson(answer.lessonSlug)!;
+      const check = lesson.blocks.find((block) => (block.kind === "check" || block.kind === "choice") && block.id === answer.checkId);
+      const seed = quickCheckSeed(answer.userId, lesson.slug, answer.checkId);
+      if (check?.kind === "check") {
+        expect({ entry: answer.entry, correct: answer.correct }).toEqual({ entry: answer.entry, correct: gradeNumericAnswer(answer.entry, numericCheckFor(check, seed).answer).correct });
+      } else {
+        expect(check?.kind).toBe("choice");
+        if (check?.kind !== "choice") continue;
+        const option = presentChoiceCheck(check, seed).options.find((o) => o.label === answer.entry);
+        expect({ entry: answer.entry, correct: answer.correct }).toEqual({ entry: answer.entry, correct: option?.key === correctChoice(check, seed) });
+      }
     }
     const seeded = learners.filter((learner) => !firstLearnerNames.some((name) => demoLearnerEmail(name) === learner.email));
     for (const learner of seeded) {

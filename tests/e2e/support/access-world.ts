@@ -65,6 +65,8 @@ export type AccessWorld = {
   spareCohort: string;
   lessonSlug: string;
   checkId: string;
+  /** A quick check of the same lesson answered by choosing. */
+  choiceCheckId: string;
   attemptId: string;
   reviewSubmissionId: string;
   /** Learner A's editable bench work, photos may still be added to it. */
@@ -271,6 +273,8 @@ async function buildAccessWorld(): Promise<AccessWorld> {
   const lesson = getCourse().lessons[0]!;
   const check = lesson.blocks.find((block) => block.kind === "check");
   if (!check || check.kind !== "check") throw new Error(`Lesson ${lesson.slug} has no quick check.`);
+  const choiceCheck = lesson.blocks.find((block) => block.kind === "choice");
+  if (!choiceCheck || choiceCheck.kind !== "choice") throw new Error(`Lesson ${lesson.slug} has no choice check.`);
 
   const { submissionId: reviewSubmissionId } = await prepareDraft(people.learnerA, reviewedExercise);
   const photoId = await uploadPhoto(people.learnerA, reviewSubmissionId);
@@ -285,6 +289,7 @@ async function buildAccessWorld(): Promise<AccessWorld> {
     spareCohort,
     lessonSlug: lesson.slug,
     checkId: check.id,
+    choiceCheckId: choiceCheck.id,
     attemptId: await submitAttempt(people.learnerA),
     reviewSubmissionId,
     draftSubmissionId: (await prepareDraft(people.learnerA, benchExercise)).submissionId,

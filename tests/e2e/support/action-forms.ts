@@ -60,6 +60,12 @@ export const actionForms: Record<string, ActionForm> = {
     fields: (world) => ({ lessonSlug: world.lessonSlug, checkId: world.checkId, entry: "2 ms" }),
     guarded: ["lessonSlug", "checkId"],
   },
+  "app/(learn)/lessons/[lessonSlug]/actions.ts#answerChoiceCheck": {
+    allowed: "learnerA",
+    path: (world) => `/lessons/${world.lessonSlug}`,
+    fields: (world) => ({ lessonSlug: world.lessonSlug, checkId: world.choiceCheckId, choice: "A" }),
+    guarded: ["lessonSlug", "checkId"],
+  },
   "app/(learn)/bench/[exerciseSlug]/actions.ts#startBenchDraft": {
     allowed: "learnerA",
     path: () => `/bench/${benchExercise}`,

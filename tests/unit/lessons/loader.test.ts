@@ -60,7 +60,7 @@ describe("validateLesson", () => {
   it("rejects a wrong field with the lesson file and the field path in the message", () => {
     let index = -1;
     const source = brokenSource(2, (lesson) => {
-      index = checkIndexes(lesson)[0]!;
+      index = checkIndexes(lesson).find((i) => lesson.blocks[i]!.answer !== undefined)!;
       (lesson.blocks[index]!.answer as { unit: unknown }).unit = 42;
     });
     const error = contentErrorOf(() => validateLesson(source));
@@ -124,8 +124,13 @@ describe("validateLesson", () => {
   });
 
   it("refuses a lesson with fewer than three quick checks", () => {
-    const error = contentErrorOf(() => validateLesson(brokenSource(0, (lesson) => (lesson.blocks = lesson.blocks.filter((b) => b.kind !== "check")))));
-    expect(error.message).toMatch(/blocks: a lesson needs 3 to 6 quick checks, found 0/);
+    const error = contentErrorOf(() => validateLesson(brokenSource(0, (lesson) => (lesson.blocks = lesson.blocks.filter((b) => b.kind !== "check" && b.kind !== "choice")))));
+    expect(error.message).toMatch(/blocks: a lesson needs 3 to 8 quick checks, found 0/);
+  });
+
+  it("refuses a lesson with fewer than two checks that are not numeric", () => {
+    const error = contentErrorOf(() => validateLesson(brokenSource(0, (lesson) => (lesson.blocks = lesson.blocks.filter((b) => b.kind !== "choice")))));
+    expect(error.message).toMatch(/blocks: a lesson needs at least 2 checks that are not numeric, found 0/);
   });
 
   it("refuses an unknown figure id", () => {

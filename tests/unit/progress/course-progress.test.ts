@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { getCourse, type Course } from "@/lessons";
+import { quickCheckIds } from "@/lessons/schema";
 import {
   checkKey,
   computeCourseProgress,
@@ -14,7 +15,7 @@ type Lesson = Course["lessons"][number];
 
 const course = getCourse();
 const [first, second] = course.lessons;
-const checkIdsOf = (lesson: Lesson) => lesson.blocks.flatMap((b) => (b.kind === "check" ? [b.id] : []));
+const checkIdsOf = (lesson: Lesson) => quickCheckIds(lesson.blocks);
 
 const at = (minute: number) => new Date(Date.UTC(2026, 0, 12, 18, minute));
 

@@ -7,16 +7,20 @@ import { LabCard } from "@/components/lesson/lab-card";
 import { LessonMarkdown } from "@/components/lesson/lesson-markdown";
 import { LessonNeighbours } from "@/components/lesson/lesson-neighbours";
 import { LessonRail } from "@/components/lesson/lesson-rail";
+import { CheckTraces } from "@/components/lesson/check-traces";
+import { ChoiceCheckForm } from "@/components/lesson/choice-check-form";
 import { QuickCheckForm, type SavedCheck } from "@/components/lesson/quick-check-form";
 import { lessonSections } from "@/components/lesson/section-headings";
 import { AppFrame } from "@/components/shell/app-frame";
 import { Breadcrumb } from "@/components/ui/breadcrumb";
 import { listQuickCheckStatesByLesson } from "@/db/queries/quick-checks";
 import { getCourse, getLesson } from "@/lessons";
+import { quickCheckIds } from "@/lessons/schema";
 import { describeExpectedEntry } from "@/lib/answers";
 import { requireRouteAccess } from "@/lib/auth/current-user";
 import { getCourseProgress, recordLessonOpened } from "@/lib/progress";
-import { answerQuickCheck } from "./actions";
+import { numericCheckFor, presentChoiceCheck, quickCheckSeed, revealedTraces } from "@/lib/quick-checks";
+import { answerChoiceCheck, answerQuickCheck } from "./actions";
 import { LockedLesson } from "./locked-lesson";
 
 type Props = { params: Promise<{ lessonSlug: string }> };
@@ -44,7 +48,12 @@ export default async function LessonPage({ params }: Props) {
 
   await recordLessonOpened({ userId: user.id, lessonSlug: lesson.slug });
   const saved = new Map((await listQuickCheckStatesByLesson({ userId: user.id, lessonSlug: lesson.slug })).map((s) => [s.checkId, s]));
-  const checkIds = lesson.blocks.flatMap((block) => (block.kind === "check" ? [block.id] : []));
+  const checkIds = quickCheckIds(lesson.blocks);
+  const savedOf = (checkId: string): SavedCheck => {
+    const state = saved.get(checkId);
+    return { answers: state?.answers ?? 0, lastEntry: state?.lastEntry ?? null, correctEntry: state?.correctEntry ?? null };
+  };
+  const seedOf = (checkId: string) => quickCheckSeed(user.id, lesson.slug, checkId);
   const sections = lessonSections(lesson.blocks);
   const course = getCourse();
   const index = course.lessons.findIndex((entry) => entry.slug === lesson.slug);
@@ -74,12 +83,8 @@ export default async function LessonPage({ params }: Props) {
                 case "figure":
                   return <LessonFigure key={i} block={block} />;
                 case "check": {
-                  const state = saved.get(block.id);
-                  const savedCheck: SavedCheck = {
-                    answers: state?.answers ?? 0,
-                    lastEntry: state?.lastEntry ?? null,
-                    correctEntry: state?.correctEntry ?? null,
-                  };
+                  const savedCheck = savedOf(block.id);
+                  const given = numericCheckFor(block, seedOf(block.id));
                   // Quick checks are answered here on the screen, so a printed lesson leaves them out.
                   return (
                     <div key={block.id} className="print:hidden">
@@ -89,10 +94,45 @@ export default async function LessonPage({ params }: Props) {
                         checkId={block.id}
                         number={checkIds.indexOf(block.id) + 1}
                         total={checkIds.length}
+                        prompt={<LessonMarkdown markdown={given.prompt} />}
+                        hint={<LessonMarkdown markdown={given.hint} />}
+                        explanation={savedCheck.correctEntry !== null ? <LessonMarkdown markdown={given.explanation} /> : null}
+                        expected={describeExpectedEntry(given.answer.unit)}
+                        saved={savedCheck}
+                      />
+                    </div>
+                  );
+                }
+                case "choice": {
+                  const savedCheck = savedOf(block.id);
+                  const seed = seedOf(block.id);
+                  const shown = presentChoiceCheck(block, seed);
+                  const revealed = savedCheck.answers > 0 ? revealedTraces(block, seed) : [];
+                  return (
+                    <div key={block.id} className="print:hidden">
+                      <ChoiceCheckForm
+                        action={answerChoiceCheck}
+                        lessonSlug={lesson.slug}
+                        checkId={block.id}
+                        ask={block.ask}
+                        number={checkIds.indexOf(block.id) + 1}
+                        total={checkIds.length}
                         prompt={<LessonMarkdown markdown={block.prompt} />}
+                        run={shown.run}
+                        symptom={shown.symptom}
+                        figure={
+                          shown.traces.length > 0 ? (
+                            <CheckTraces traces={shown.traces} caption="Far-end voltage at the first pixel's data pin, drawn by the simulator; time from the first 1 bit leaving the driver." />
+                          ) : null
+                        }
+                        revealed={
+                          revealed.length > 0 ? (
+                            <CheckTraces traces={revealed} caption="The run you predicted, drawn by the simulator: the far end at the first pixel's data pin." />
+                          ) : null
+                        }
+                        options={shown.options}
                         hint={<LessonMarkdown markdown={block.hint} />}
                         explanation={savedCheck.correctEntry !== null ? <LessonMarkdown markdown={block.explanation} /> : null}
-                        expected={describeExpectedEntry(block.answer.unit)}
                         saved={savedCheck}
                       />
                     </div>

@@ -10,6 +10,7 @@ import { PageHeading } from "@/components/ui/page-heading";
 import { requireRouteAccess } from "@/lib/auth/current-user";
 import type { GradebookItem } from "@/lib/gradebook";
 import { loadLearnerRecord, type BenchRecord, type LabRecord } from "@/lib/gradebook/load";
+import type { LessonChecksRecord } from "@/lib/gradebook/quick-check-record";
 import { plural } from "@/lib/gradebook/words";
 
 export const metadata: Metadata = { title: "Learner's work" };
@@ -71,13 +72,45 @@ function BenchWork({ record, canReview }: { record: BenchRecord; canReview: bool
   );
 }
 
+function QuickCheckAnswers({ lesson }: { lesson: LessonChecksRecord }) {
+  return (
+    <ol className="mt-3 space-y-3 text-sm">
+      {lesson.checks.map((check) => (
+        <li key={check.id} className="rounded-lg border border-line px-3 py-2">
+          <p>
+            <span className="font-semibold">Quick check {check.number}</span>
+            <span className="text-ink-soft"> · {check.kind}</span>
+            {check.answers.length === 0 ? <span className="text-ink-soft"> · not answered yet</span> : null}
+          </p>
+          {check.answers.length > 0 ? (
+            <p className="mt-1 text-ink-soft">
+              {check.asked} <span className="text-ink">Accepted answer: {check.expected}.</span>
+            </p>
+          ) : null}
+          {check.answers.length > 0 ? (
+            <ol className="mt-1 space-y-0.5">
+              {check.answers.map((answer) => (
+                <li key={answer.createdAt.toISOString()} className="flex flex-wrap gap-x-2">
+                  <span className={answer.correct ? "font-medium text-ok" : "text-danger"}>{answer.correct ? "✓ right" : "✗ wrong"}</span>
+                  <span className="break-all font-mono">{answer.entry}</span>
+                  <span className="text-ink-soft">{formatMoment(answer.createdAt)}</span>
+                </li>
+              ))}
+            </ol>
+          ) : null}
+        </li>
+      ))}
+    </ol>
+  );
+}
+
 export default async function LearnerRecordPage({ params }: { params: Promise<{ cohortId: string; learnerId: string }> }) {
   const { cohortId, learnerId } = await params;
   const user = await requireRouteAccess("/cohorts/[cohortId]/learners/[learnerId]", { cohortId, learnerId });
   if (!z.uuid().safeParse(cohortId).success || !z.uuid().safeParse(learnerId).success) notFound();
   const record = await loadLearnerRecord({ cohortId, learnerId, viewer: user });
   if (!record) notFound();
-  const { cohort, learner, labs, bench } = record;
+  const { cohort, learner, labs, bench, checks } = record;
   const passed = labs.filter((lab) => lab.attempts.some((attempt) => attempt.passed)).length;
 
   return (
@@ -122,6 +155,22 @@ export default async function LearnerRecordPage({ params }: { params: Promise<{ 
             </section>
           </Card>
         ))}
+        <Card>
+          <section id="quick-checks" aria-labelledby="quick-checks-heading" className="scroll-mt-6">
+            <h2 id="quick-checks-heading" className="text-lg font-semibold">
+              Quick checks
+            </h2>
+            {checks.length === 0 ? <p className="mt-1 text-sm text-ink-soft">No quick check answered yet.</p> : null}
+            {checks.map((lesson) => (
+              <details key={lesson.slug} className="mt-3 border-t border-line pt-3" open>
+                <summary className="cursor-pointer font-semibold">
+                  Lesson {lesson.number} · {lesson.title}
+                </summary>
+                <QuickCheckAnswers lesson={lesson} />
+              </details>
+            ))}
+          </section>
+        </Card>
         {bench.map((record) => (
           <Card key={record.item.key}>
             <section id={anchorOf(record.item)} aria-labelledby={`${anchorOf(record.item)}-heading`} className="scroll-mt-6">

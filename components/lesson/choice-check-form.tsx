@@ -1,0 +1,118 @@
+"use client";
+
+import { useActionState, useId, type ReactNode } from "react";
+import { FormAlert } from "@/components/forms/form-alert";
+import { SubmitButton } from "@/components/forms/submit-button";
+import type { SavedCheck } from "./quick-check-form";
+import { idleQuickCheckState, type QuickCheckState } from "./quick-check-state";
+
+const ASK_TITLES = { "pick-trace": "Pick the trace", predict: "Predict, then run", diagnose: "Diagnose" } as const;
+
+type Props = {
+  action: (previous: QuickCheckState, formData: FormData) => Promise<QuickCheckState>;
+  lessonSlug: string;
+  checkId: string;
+  ask: keyof typeof ASK_TITLES;
+  number: number;
+  total: number;
+  prompt: ReactNode;
+  /** The learner's run in words. */
+  run: string;
+  symptom: string | null;
+  /** Traces drawn before an answer (every candidate, or the failing run). */
+  figure: ReactNode | null;
+  /** Rendered by the server once the learner has answered: the run a prediction was about. */
+  revealed: ReactNode | null;
+  options: readonly { key: string; label: string }[];
+  hint: ReactNode;
+  /** Rendered by the server only once the learner has answered correctly. */
+  explanation: ReactNode | null;
+  saved: SavedCheck;
+};
+
+const tones = { correct: "success", incorrect: "error", unreadable: "info", error: "error" } as const;
+
+function savedStatus(saved: SavedCheck): { tone: "success" | "info"; message: string } | null {
+  if (saved.correctEntry !== null) return { tone: "success", message: `You answered this correctly: ${saved.correctEntry}.` };
+  if (saved.lastEntry !== null) return { tone: "info", message: `Your last answer, '${saved.lastEntry}', was not right yet. Try again.` };
+  return null;
+}
+
+/** A quick check answered by choosing one option; which one is right is known only to the server. */
+export function ChoiceCheckForm(props: Props) {
+  const { action, lessonSlug, checkId, ask, number, total, prompt, run, symptom, figure, revealed, options, hint, explanation, saved } = props;
+  const [state, formAction, pending] = useActionState(action, idleQuickCheckState);
+  const ids = useId();
+  const live = state.status === "idle" ? null : state;
+  const status = live ? { tone: tones[live.status], message: live.message } : savedStatus(saved);
+  const answeredRight = live ? live.status === "correct" : saved.correctEntry !== null;
+  const showHint = live ? live.status === "incorrect" : saved.answers > 0 && saved.correctEntry === null;
+  const chosen = live?.entry ?? saved.correctEntry ?? saved.lastEntry ?? null;
+
+  return (
+    <section
+      id={`check-${checkId}`}
+      aria-labelledby={`${ids}-title`}
+      className="my-10 scroll-mt-24 rounded-card border border-line bg-surface p-5 shadow-xs sm:p-6"
+      data-check-kind={ask}
+    >
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <h3 id={`${ids}-title`} className="text-sm font-semibold uppercase tracking-wide text-accent">
+          Quick check {number} of {total} · {ASK_TITLES[ask]}
+        </h3>
+        {answeredRight ? (
+          <span className="inline-flex items-center gap-1 rounded-full bg-ok-soft px-2.5 py-0.5 text-xs font-semibold text-ok">
+            <span aria-hidden="true">✓</span> Answered correctly
+          </span>
+        ) : null}
+      </div>
+      <div className="mt-3 text-ink">{prompt}</div>
+      <p className="mt-3 rounded-lg bg-sunken px-3 py-2 text-sm text-ink">
+        <span className="font-semibold">The run: </span>
+        {run}
+      </p>
+      {symptom ? (
+        <p className="mt-2 rounded-lg bg-sunken px-3 py-2 text-sm text-ink">
+          <span className="font-semibold">On site: </span>
+          {symptom}
+        </p>
+      ) : null}
+      {figure}
+      <form action={formAction} className="mt-4 space-y-3">
+        <input type="hidden" name="lessonSlug" value={lessonSlug} />
+        <input type="hidden" name="checkId" value={checkId} />
+        <fieldset>
+          <legend className="text-sm font-medium text-ink">{ask === "predict" ? "Your prediction" : "Your answer"}</legend>
+          <div className={`mt-2 grid gap-2 ${ask === "diagnose" ? "" : "sm:grid-cols-2"}`}>
+            {options.map((option) => (
+              <label
+                key={option.key}
+                className="flex min-h-11 cursor-pointer items-center gap-3 rounded-lg border border-line-strong px-3 py-2 text-sm text-ink has-[:checked]:border-accent has-[:checked]:bg-accent-soft"
+              >
+                <input type="radio" name="choice" value={option.key} defaultChecked={chosen === option.label} className="h-4 w-4 accent-[var(--color-accent)]" />
+                {option.label}
+              </label>
+            ))}
+          </div>
+        </fieldset>
+        <SubmitButton pending={pending} pendingLabel="Checking…" wide={false}>
+          {ask === "predict" ? "Commit to this prediction" : "Check answer"}
+        </SubmitButton>
+        <FormAlert tone={status?.tone ?? "info"} message={status?.message ?? null} />
+      </form>
+      {revealed}
+      {showHint ? (
+        <div className="mt-3 rounded-lg border border-line bg-sunken px-4 py-3 text-sm">
+          <p className="font-semibold text-ink">Hint</p>
+          <div className="mt-1">{hint}</div>
+        </div>
+      ) : null}
+      {answeredRight && explanation ? (
+        <div className="mt-3 rounded-lg border border-ok/30 bg-ok-soft/60 px-4 py-3 text-sm">
+          <p className="font-semibold text-ink">Why</p>
+          <div className="mt-1">{explanation}</div>
+        </div>
+      ) : null}
+    </section>
+  );
+}
