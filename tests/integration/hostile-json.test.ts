@@ -86,7 +86,14 @@ async function rowsWritten(): Promise<number[]> {
  * rate limit, which has tests of its own.
  */
 async function forgetRateLimits(): Promise<void> {
-  const keys = [`grading:person:${learnerId}`, "grading:address:unverified", `upload:person:${uploaderId}`, "upload:address:unverified"];
+  const keys = [
+    `grading:person:${learnerId}`,
+    "grading:address:unverified",
+    `workbench-save:person:${learnerId}`,
+    "workbench-save:address:unverified",
+    `upload:person:${uploaderId}`,
+    "upload:address:unverified",
+  ];
   await db.delete(rateLimits).where(inArray(rateLimits.key, keys));
 }
 
