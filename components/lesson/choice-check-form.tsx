@@ -3,7 +3,7 @@
 import { useActionState, useId, type ReactNode } from "react";
 import { FormAlert } from "@/components/forms/form-alert";
 import { SubmitButton } from "@/components/forms/submit-button";
-import type { SavedCheck } from "./quick-check-form";
+import { AnsweredBadge, CheckNotes, checkStanding, type SavedCheck } from "./check-standing";
 import { idleQuickCheckState, type QuickCheckState } from "./quick-check-state";
 
 const ASK_TITLES = { "pick-trace": "Pick the trace", predict: "Predict, then run", diagnose: "Diagnose" } as const;
@@ -30,23 +30,12 @@ type Props = {
   saved: SavedCheck;
 };
 
-const tones = { correct: "success", incorrect: "error", unreadable: "info", error: "error" } as const;
-
-function savedStatus(saved: SavedCheck): { tone: "success" | "info"; message: string } | null {
-  if (saved.correctEntry !== null) return { tone: "success", message: `You answered this correctly: ${saved.correctEntry}.` };
-  if (saved.lastEntry !== null) return { tone: "info", message: `Your last answer, '${saved.lastEntry}', was not right yet. Try again.` };
-  return null;
-}
-
 /** A quick check answered by choosing one option; which one is right is known only to the server. */
 export function ChoiceCheckForm(props: Props) {
   const { action, lessonSlug, checkId, ask, number, total, prompt, run, symptom, figure, revealed, options, hint, explanation, saved } = props;
   const [state, formAction, pending] = useActionState(action, idleQuickCheckState);
   const ids = useId();
-  const live = state.status === "idle" ? null : state;
-  const status = live ? { tone: tones[live.status], message: live.message } : savedStatus(saved);
-  const answeredRight = live ? live.status === "correct" : saved.correctEntry !== null;
-  const showHint = live ? live.status === "incorrect" : saved.answers > 0 && saved.correctEntry === null;
+  const { live, status, answeredRight, showHint } = checkStanding(state, saved);
   const chosen = live?.entry ?? saved.correctEntry ?? saved.lastEntry ?? null;
 
   return (
@@ -60,11 +49,7 @@ export function ChoiceCheckForm(props: Props) {
         <h3 id={`${ids}-title`} className="text-sm font-semibold uppercase tracking-wide text-accent">
           Quick check {number} of {total} · {ASK_TITLES[ask]}
         </h3>
-        {answeredRight ? (
-          <span className="inline-flex items-center gap-1 rounded-full bg-ok-soft px-2.5 py-0.5 text-xs font-semibold text-ok">
-            <span aria-hidden="true">✓</span> Answered correctly
-          </span>
-        ) : null}
+        {answeredRight ? <AnsweredBadge /> : null}
       </div>
       <div className="mt-3 text-ink">{prompt}</div>
       <p className="mt-3 rounded-lg bg-sunken px-3 py-2 text-sm text-ink">
@@ -101,18 +86,7 @@ export function ChoiceCheckForm(props: Props) {
         <FormAlert tone={status?.tone ?? "info"} message={status?.message ?? null} />
       </form>
       {revealed}
-      {showHint ? (
-        <div className="mt-3 rounded-lg border border-line bg-sunken px-4 py-3 text-sm">
-          <p className="font-semibold text-ink">Hint</p>
-          <div className="mt-1">{hint}</div>
-        </div>
-      ) : null}
-      {answeredRight && explanation ? (
-        <div className="mt-3 rounded-lg border border-ok/30 bg-ok-soft/60 px-4 py-3 text-sm">
-          <p className="font-semibold text-ink">Why</p>
-          <div className="mt-1">{explanation}</div>
-        </div>
-      ) : null}
+      <CheckNotes showHint={showHint} hint={hint} answeredRight={answeredRight} explanation={explanation} />
     </section>
   );
 }

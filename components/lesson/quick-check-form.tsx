@@ -3,9 +3,8 @@
 import { useActionState, useId, type ReactNode } from "react";
 import { FormAlert } from "@/components/forms/form-alert";
 import { SubmitButton } from "@/components/forms/submit-button";
+import { AnsweredBadge, CheckNotes, checkStanding, type SavedCheck } from "./check-standing";
 import { idleQuickCheckState, type QuickCheckState } from "./quick-check-state";
-
-export type SavedCheck = { answers: number; lastEntry: string | null; correctEntry: string | null };
 
 type Props = {
   action: (previous: QuickCheckState, formData: FormData) => Promise<QuickCheckState>;
@@ -21,21 +20,10 @@ type Props = {
   saved: SavedCheck;
 };
 
-const tones = { correct: "success", incorrect: "error", unreadable: "info", error: "error" } as const;
-
-function savedStatus(saved: SavedCheck): { tone: "success" | "info"; message: string } | null {
-  if (saved.correctEntry !== null) return { tone: "success", message: `You answered this correctly: ${saved.correctEntry}.` };
-  if (saved.lastEntry !== null) return { tone: "info", message: `Your last answer, '${saved.lastEntry}', was not right yet. Try again.` };
-  return null;
-}
-
 export function QuickCheckForm({ action, lessonSlug, checkId, number, total, prompt, hint, explanation, expected, saved }: Props) {
   const [state, formAction, pending] = useActionState(action, idleQuickCheckState);
   const ids = useId();
-  const live = state.status === "idle" ? null : state;
-  const status = live ? { tone: tones[live.status], message: live.message } : savedStatus(saved);
-  const answeredRight = live ? live.status === "correct" : saved.correctEntry !== null;
-  const showHint = live ? live.status === "incorrect" : saved.answers > 0 && saved.correctEntry === null;
+  const { live, status, answeredRight, showHint } = checkStanding(state, saved);
 
   return (
     <section
@@ -47,11 +35,7 @@ export function QuickCheckForm({ action, lessonSlug, checkId, number, total, pro
         <h3 id={`${ids}-title`} className="text-sm font-semibold uppercase tracking-wide text-accent">
           Quick check {number} of {total}
         </h3>
-        {answeredRight ? (
-          <span className="inline-flex items-center gap-1 rounded-full bg-ok-soft px-2.5 py-0.5 text-xs font-semibold text-ok">
-            <span aria-hidden="true">✓</span> Answered correctly
-          </span>
-        ) : null}
+        {answeredRight ? <AnsweredBadge /> : null}
       </div>
       <div className="mt-3 text-ink">{prompt}</div>
       <form action={formAction} className="mt-4 space-y-3" noValidate>
@@ -84,18 +68,7 @@ export function QuickCheckForm({ action, lessonSlug, checkId, number, total, pro
         </div>
         <FormAlert tone={status?.tone ?? "info"} message={status?.message ?? null} />
       </form>
-      {showHint ? (
-        <div className="mt-3 rounded-lg border border-line bg-sunken px-4 py-3 text-sm">
-          <p className="font-semibold text-ink">Hint</p>
-          <div className="mt-1">{hint}</div>
-        </div>
-      ) : null}
-      {answeredRight && explanation ? (
-        <div className="mt-3 rounded-lg border border-ok/30 bg-ok-soft/60 px-4 py-3 text-sm">
-          <p className="font-semibold text-ink">Why</p>
-          <div className="mt-1">{explanation}</div>
-        </div>
-      ) : null}
+      <CheckNotes showHint={showHint} hint={hint} answeredRight={answeredRight} explanation={explanation} />
     </section>
   );
 }
